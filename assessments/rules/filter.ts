@@ -1,0 +1,238 @@
+/**
+ * Guideline-weight filter of the HSE guidance on the Manual Handling Operations Regulations 1992
+ * (L23; INDG143), with team handling and carrying.
+ *
+ * The figures are a filter, not limits: above them a fuller assessment is needed. Men's figures are
+ * read in a reproduction of the published table; women's are recalled from memory (REFERENCES.md §2).
+ */
+import { bandForIndex, GUIDELINE_THRESHOLDS, worstBand } from "./bands";
+import { round } from "./niosh";
+import { SOURCES } from "./sources";
+import { MAX_TEAM_SIZE, teamCapacity, teamFactor } from "./team";
+import type { Band, Reason, ResultBase, Sex, Warning } from "./types";
+import { RULES_VERSION } from "./version";
+
+export const ZONES = [
+  "floor-to-lower-leg",
+  "lower-leg-to-knuckle",
+  "knuckle-to-elbow",
+  "elbow-to-shoulder",
+  "shoulder-to-reach",
+] as const;
+export type Zone = (typeof ZONES)[number];
+export type Reach = "close" | "extended";
+
+export const ZONE_LABELS: Record<Zone, string> = {
+  "floor-to-lower-leg": "floor to mid lower leg",
+  "lower-leg-to-knuckle": "mid lower leg to knuckle",
+  "knuckle-to-elbow": "knuckle to elbow",
+  "elbow-to-shoulder": "elbow to shoulder",
+  "shoulder-to-reach": "shoulder to full reach",
+};
+
+/** Guideline weights in kg: [close, extended]. */
+const GUIDELINE_KG: Record<Sex, Record<Zone, readonly [number, number]>> = {
+  male: {
+    "shoulder-to-reach": [10, 5],
+    "elbow-to-shoulder": [20, 10],
+    "knuckle-to-elbow": [25, 15],
+    "lower-leg-to-knuckle": [20, 10],
+    "floor-to-lower-leg": [10, 5],
+  },
+  female: {
+    "shoulder-to-reach": [7, 3],
+    "elbow-to-shoulder": [13, 7],
+    "knuckle-to-elbow": [16, 10],
+    "lower-leg-to-knuckle": [13, 7],
+    "floor-to-lower-leg": [7, 3],
+  },
+};
+
+export function guidelineWeight(sex: Sex, zone: Zone, reach: Reach): number {
+  return GUIDELINE_KG[sex][zone][reach === "close" ? 0 : 1];
+}
+
+/**
+ * Frequency reduction as a fraction. Published: none up to about 30 operations an hour
+ * (0.5/min); 30 % at once or twice a minute; 50 % at 5–8 a minute; 80 % above about 12 a minute.
+ * Heftwise policy for the gaps, conservative: above 0.5 up to 2/min takes 30 %; above 2 up to
+ * 8/min (3–4/min is not published) takes 50 %; above 8/min (9–12/min is not published) takes 80 %.
+ */
+export function frequencyReduction(perMinute: number): number {
+  if (perMinute <= 0.5) return 0;
+  if (perMinute <= 2) return 0.3;
+  if (perMinute <= 8) return 0.5;
+  return 0.8;
+}
+
+/** Published: twisting beyond 45° reduce 10 %, beyond 90° reduce 20 %. */
+export function twistReduction(twistDeg: number): number {
+  if (twistDeg > 90) return 0.2;
+  if (twistDeg > 45) return 0.1;
+  return 0;
+}
+
+/**
+ * Heftwise policy: reductions add (30 % and 10 % make 40 %), which is more conservative than
+ * multiplying them; the guidance does not say how they combine. Never below 0.
+ */
+export function combinedReductionFactor(perMinute: number, twistDeg: number): number {
+  return Math.max(0, 1 - frequencyReduction(perMinute) - twistReduction(twistDeg));
+}
+
+/** Carrying held against the body: the filter holds up to about 10 m without rest. */
+export const CARRY_FILTER_LIMIT_M = 10;
+/** ISO 11228-1 cumulative mass per 8 h shift (from memory): ideal conditions, and long carries (≥ 20 m). */
+export const CUMULATIVE_MASS_PER_SHIFT_KG = 10_000;
+export const CUMULATIVE_MASS_LONG_CARRY_KG = 6_000;
+export const LONG_CARRY_M = 20;
+export const SHIFT_HOURS = 8;
+
+export interface FilterRequest {
+  method: "filter";
+  sex: Sex;
+  zone: Zone;
+  reach: Reach;
+  load: number;
+  /** Operations per minute. */
+  frequency: number;
+  twistDeg: number;
+  teamSize: number;
+  /** Distance carried, when the load is carried (m). */
+  carryDistanceM?: number;
+  /** Hours spent on this task in the shift, for the cumulative mass of a carry (default: a full 8 h shift). */
+  durationHours?: number;
+}
+
+export interface FilterResult extends ResultBase {
+  method: "filter";
+  inputs: FilterRequest;
+  /** The table figure for one person, before reductions (kg). */
+  baseGuideline: number;
+  frequencyReduction: number;
+  twistReduction: number;
+  /** Fraction kept after reductions. */
+  reductionFactor: number;
+  teamFactor: number;
+  /** Guideline for the whole team after all reductions (kg). */
+  guideline: number;
+  limit: number;
+  /** Load ÷ guideline; null when no guideline weight remains. */
+  index: number | null;
+  /** Each team member's share of the load (kg). */
+  perPersonLoad: number;
+  /** Mass moved per shift when carried (kg), else null. */
+  cumulativeMassKg: number | null;
+}
+
+export function scoreFilter(req: FilterRequest): FilterResult {
+  const base = guidelineWeight(req.sex, req.zone, req.reach);
+  const fr = frequencyReduction(req.frequency);
+  const tr = twistReduction(req.twistDeg);
+  const factor = combinedReductionFactor(req.frequency, req.twistDeg);
+  const team = teamFactor(req.teamSize);
+  const guideline = teamCapacity(base * factor, req.teamSize);
+  const index = guideline > 0 ? req.load / guideline : null;
+
+  const reasons: Reason[] = [];
+  const warnings: Warning[] = [];
+  const floors: Band[] = [bandForIndex(index, GUIDELINE_THRESHOLDS)];
+  const who = req.sex === "male" ? "men" : "women";
+
+  reasons.push({
+    text: `Guideline weight for ${who}, hands ${ZONE_LABELS[req.zone]}, load ${req.reach === "close" ? "close to the body" : "at arm's length"}: ${base} kg.`,
+    source: req.sex === "male" ? SOURCES.hseL23 : `${SOURCES.hseL23} (women's figures from memory)`,
+  });
+  if (fr > 0)
+    reasons.push({
+      text: `${req.frequency} operations a minute: reduced by ${fr * 100} %.`,
+      source:
+        req.frequency <= 2 || req.frequency > 12 || (req.frequency >= 5 && req.frequency <= 8)
+          ? SOURCES.hseL23
+          : `${SOURCES.heftwisePolicy} (the guidance gives no figure for this frequency; the next published reduction is used)`,
+    });
+  if (tr > 0)
+    reasons.push({
+      text: `Twisting ${req.twistDeg}°: reduced by ${tr * 100} %.`,
+      source: SOURCES.hseL23,
+    });
+  if (fr > 0 && tr > 0)
+    reasons.push({
+      text: `Reductions added together: ${round((fr + tr) * 100, 0)} % in all.`,
+      source: SOURCES.heftwisePolicy,
+    });
+  if (req.teamSize > 1)
+    reasons.push({
+      text: `Team of ${req.teamSize}: the team handles about ${req.teamSize === 2 ? "two-thirds" : "half"} of the sum of its members' capabilities; each carries about ${round(req.load / req.teamSize)} kg.`,
+      source: req.teamSize <= 3 ? SOURCES.hseL23 : `${SOURCES.hseL23}; team of four at one half: ${SOURCES.heftwisePolicy}`,
+    });
+  if (req.teamSize > MAX_TEAM_SIZE) {
+    floors.push("stop");
+    reasons.push({
+      text: `A team of ${req.teamSize} is more than four: such teams are unlikely to work well together. Use a mechanical aid.`,
+      source: SOURCES.hseL23,
+    });
+  }
+  if (index === null)
+    reasons.push({
+      text: "After the reductions no guideline weight remains: the task must be redesigned.",
+      source: SOURCES.heftwisePolicy,
+    });
+  else
+    reasons.push({
+      text: `Load ${req.load} kg against a guideline of ${round(guideline)} kg: index ${round(index)}${index > 1 ? " — above the filter, a fuller assessment is needed" : ", within the filter"}.`,
+      source: index > 1 ? `${SOURCES.hseL23}; bands above 1: ${SOURCES.heftwisePolicy}` : SOURCES.hseL23,
+    });
+
+  let cumulativeMassKg: number | null = null;
+  const carry = req.carryDistanceM;
+  if (carry !== undefined && carry > 0) {
+    if (carry > CARRY_FILTER_LIMIT_M) {
+      floors.push("watch");
+      warnings.push({
+        field: "carryDistanceM",
+        message: `Carried ${carry} m: the guideline figures hold up to about ${CARRY_FILTER_LIMIT_M} m without rest. Assess the carry in more detail, or plan rests or a trolley.`,
+      });
+    }
+    if (req.zone === "floor-to-lower-leg" || req.zone === "lower-leg-to-knuckle") {
+      floors.push("watch");
+      warnings.push({
+        field: "zone",
+        message: "Carried with the hands below knuckle height: the guideline figures do not cover this. Assess in more detail.",
+      });
+    }
+    const hours = req.durationHours ?? SHIFT_HOURS;
+    cumulativeMassKg = req.load * Math.max(req.frequency, 0) * 60 * hours;
+    const allowance = carry >= LONG_CARRY_M ? CUMULATIVE_MASS_LONG_CARRY_KG : CUMULATIVE_MASS_PER_SHIFT_KG;
+    reasons.push({
+      text: `Mass carried in ${hours} h: ${round(cumulativeMassKg, 0)} kg against ${allowance} kg per 8 h shift${carry >= LONG_CARRY_M ? " for carries of 20 m or more" : " under ideal conditions"}.`,
+      source: SOURCES.iso11228,
+    });
+    if (cumulativeMassKg > allowance) {
+      floors.push("act");
+      warnings.push({
+        field: "frequency",
+        message: `Cumulative mass carried (${round(cumulativeMassKg, 0)} kg) exceeds ${allowance} kg per shift: reduce the number of carries, share the work or use a trolley.`,
+      });
+    }
+  }
+
+  return {
+    method: "filter",
+    inputs: req,
+    baseGuideline: base,
+    frequencyReduction: fr,
+    twistReduction: tr,
+    reductionFactor: factor,
+    teamFactor: team,
+    guideline,
+    limit: guideline,
+    index,
+    perPersonLoad: req.load / req.teamSize,
+    cumulativeMassKg,
+    band: worstBand(floors),
+    reasons,
+    warnings,
+    rulesVersion: RULES_VERSION,
+  };
+}
