@@ -1,0 +1,12 @@
+import type { Action } from "@/lib/permissions";
+
+/** The app's sections; each shows only to roles the permission table allows. */
+export const NAVIGATION: { href: string; label: string; action: Action | null }[] = [
+  { href: "/", label: "Overview", action: null },
+  { href: "/jobs", label: "Jobs", action: "jobs:read" },
+  { href: "/load-register", label: "Load register", action: "components:read" },
+  { href: "/reviews", label: "For review", action: "reviews:read" },
+  { href: "/briefings", label: "Briefings", action: "briefings:run" },
+  { href: "/admin/users", label: "People", action: "users:manage" },
+  { href: "/admin/mail", label: "Sent e-mail", action: "mail-log:read" },
+];

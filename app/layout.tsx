@@ -1,0 +1,18 @@
+import type { Metadata, Viewport } from "next";
+import { hyperlegible } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Heftwise", template: "%s · Heftwise" },
+  description: "Manual-handling and lift-plan risk assessments for lineside and civils work.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#16302b" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en-GB" className={hyperlegible.variable}>
+      <body className="min-h-screen font-sans antialiased">{children}</body>
+    </html>
+  );
+}

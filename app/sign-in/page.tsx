@@ -1,0 +1,20 @@
+import type { Metadata } from "next";
+import { redirect } from "next/navigation";
+import { AuthFrame } from "@/app/_components/auth-frame";
+import { getActor } from "@/lib/auth/session";
+import { SignInForm } from "./sign-in-form";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string; welcome?: string }> }) {
+  if (await getActor()) redirect("/");
+  const { callbackUrl, welcome } = await searchParams;
+  // Only paths on this site: an open redirect would let a link send people elsewhere after sign-in.
+  const target = callbackUrl && callbackUrl.startsWith("/") && !callbackUrl.startsWith("//") ? callbackUrl : "/";
+  return (
+    <AuthFrame title="Sign in">
+      <p className="mb-4 text-sm text-muted">Manual-handling and lift-plan assessments for your sites.</p>
+      <SignInForm callbackUrl={target} welcome={welcome === "1"} />
+    </AuthFrame>
+  );
+}

@@ -1,0 +1,53 @@
+import { and, count, desc, eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { assessments, jobs, revisions } from "@/db/schema";
+import { authorize, type Actor } from "@/lib/permissions";
+
+const summaryColumns = {
+  revisionId: revisions.id,
+  number: revisions.number,
+  status: revisions.status,
+  reviewDate: revisions.reviewDate,
+  submittedAt: revisions.submittedAt,
+  approvedAt: revisions.approvedAt,
+  title: assessments.title,
+  jobName: jobs.name,
+};
+
+/** Revisions waiting for this approver's countersignature. */
+export async function listAwaitingReview(actor: Actor | null) {
+  authorize(actor, "reviews:read");
+  const db = await getDb();
+  return db
+    .select(summaryColumns)
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)))
+    .orderBy(desc(revisions.submittedAt));
+}
+
+/** Approved revisions a foreman can brief from — never a draft. */
+export async function listBriefable(actor: Actor | null) {
+  authorize(actor, "briefings:run");
+  const db = await getDb();
+  return db
+    .select(summaryColumns)
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "approved")))
+    .orderBy(desc(revisions.approvedAt));
+}
+
+/** Revision counts by status, for the overview. */
+export async function countRevisionsByStatus(actor: Actor | null) {
+  authorize(actor, "assessments:read");
+  const db = await getDb();
+  const rows = await db
+    .select({ status: revisions.status, n: count() })
+    .from(revisions)
+    .where(eq(revisions.organisationId, actor.organisationId))
+    .groupBy(revisions.status);
+  return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<(typeof rows)[number]["status"], number>>;
+}

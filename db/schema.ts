@@ -1,0 +1,204 @@
+/**
+ * The database schema (Drizzle, PostgreSQL dialect: the same SQL runs on PGlite and on a server).
+ * Every business table carries `organisation_id`: data belongs to one organisation, and queries
+ * filter on it so another organisation's record is simply not found.
+ */
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+export const ROLES = ["admin", "adviser", "approver", "foreman"] as const;
+export const roleEnum = pgEnum("role", ROLES);
+export const gripEnum = pgEnum("grip_quality", ["good", "fair", "poor"]);
+export const massSourceEnum = pgEnum("mass_source", ["weighed", "datasheet", "estimated"]);
+export const revisionStatusEnum = pgEnum("revision_status", ["draft", "submitted", "approved", "superseded"]);
+export const emailStatusEnum = pgEnum("email_status", ["pending", "sent", "failed"]);
+
+const id = () => uuid("id").primaryKey().default(sql`gen_random_uuid()`);
+const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
+const organisationId = () =>
+  uuid("organisation_id")
+    .notNull()
+    .references(() => organisations.id, { onDelete: "cascade" });
+
+export const organisations = pgTable("organisations", {
+  id: id(),
+  name: text("name").notNull(),
+  createdAt: createdAt(),
+});
+
+export const users = pgTable(
+  "users",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    /** Stored lower-case; one account per address across Heftwise. */
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    role: roleEnum("role").notNull(),
+    /** Null until the invited user sets a password. */
+    passwordHash: text("password_hash"),
+    active: boolean("active").notNull().default(true),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("users_email_unique").on(t.email), index("users_organisation_idx").on(t.organisationId)],
+);
+
+export const invites = pgTable(
+  "invites",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    /** SHA-256 of the token in the link; the token itself is never stored. */
+    tokenHash: text("token_hash").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("invites_token_hash_unique").on(t.tokenHash)],
+);
+
+export const jobs = pgTable(
+  "jobs",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    name: text("name").notNull(),
+    client: text("client").notNull(),
+    location: text("location").notNull(),
+    /** Railway only: engineer's line reference and mileage (e.g. "HWL 12m 34ch"). */
+    lineReference: text("line_reference"),
+    mileage: text("mileage"),
+    accessPoint: text("access_point"),
+    nearestHospital: text("nearest_hospital"),
+    emergencyArrangements: text("emergency_arrangements"),
+    siteContactName: text("site_contact_name"),
+    siteContactPhone: text("site_contact_phone"),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("jobs_organisation_idx").on(t.organisationId)],
+);
+
+export const components = pgTable(
+  "components",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    name: text("name").notNull(),
+    massKg: doublePrecision("mass_kg").notNull(),
+    lengthMm: integer("length_mm"),
+    widthMm: integer("width_mm"),
+    heightMm: integer("height_mm"),
+    grip: gripEnum("grip").notNull(),
+    massSource: massSourceEnum("mass_source").notNull(),
+    notes: text("notes"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("components_organisation_idx").on(t.organisationId)],
+);
+
+export const assessments = pgTable(
+  "assessments",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    jobId: uuid("job_id")
+      .notNull()
+      .references(() => jobs.id, { onDelete: "restrict" }),
+    title: text("title").notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("assessments_organisation_idx").on(t.organisationId)],
+);
+
+export const revisions = pgTable(
+  "revisions",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    assessmentId: uuid("assessment_id")
+      .notNull()
+      .references(() => assessments.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    status: revisionStatusEnum("status").notNull().default("draft"),
+    /** The method statement, tasks with their stored result snapshots, hazards, people and plant. */
+    content: jsonb("content").notNull().default({}),
+    /** Optimistic concurrency: a save names the version it edited; a stale one is refused. */
+    version: integer("version").notNull().default(1),
+    reviewDate: date("review_date"),
+    authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    approverId: uuid("approver_id").references(() => users.id, { onDelete: "set null" }),
+    returnComments: jsonb("return_comments"),
+    contentHash: text("content_hash"),
+    submittedAt: timestamp("submitted_at", { withTimezone: true }),
+    approvedAt: timestamp("approved_at", { withTimezone: true }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex("revisions_assessment_number_unique").on(t.assessmentId, t.number),
+    index("revisions_organisation_idx").on(t.organisationId),
+  ],
+);
+
+export const auditEvents = pgTable(
+  "audit_events",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    entityType: text("entity_type").notNull(),
+    entityId: uuid("entity_id"),
+    contentHash: text("content_hash"),
+    details: jsonb("details"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId), index("audit_events_organisation_idx").on(t.organisationId)],
+);
+
+export const outboundEmails = pgTable(
+  "outbound_emails",
+  {
+    id: id(),
+    organisationId: uuid("organisation_id").references(() => organisations.id, { onDelete: "cascade" }),
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    /** Which kind of e-mail this is ("invite", "approval-request", ...). */
+    kind: text("kind").notNull(),
+    status: emailStatusEnum("status").notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    lastError: text("last_error"),
+    messageId: text("message_id"),
+    createdAt: createdAt(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+  },
+  (t) => [index("outbound_emails_organisation_idx").on(t.organisationId)],
+);
+
+export type Role = (typeof ROLES)[number];
+export type User = typeof users.$inferSelect;
+export type Job = typeof jobs.$inferSelect;
+export type Component = typeof components.$inferSelect;

@@ -1,0 +1,20 @@
+/**
+ * What every server action returns: success with an optional message, or the AppError as plain
+ * data the form can show (field messages included). Unexpected errors are logged, not shown.
+ */
+import { AppError, type ErrorCode, type FieldIssue } from "./errors";
+
+export type ActionResult<T = unknown> =
+  | { ok: true; message?: string; data?: T }
+  | { ok: false; code: ErrorCode; message: string; issues?: FieldIssue[] };
+
+export async function runAction<T>(fn: () => Promise<{ message?: string; data?: T } | void>): Promise<ActionResult<T>> {
+  try {
+    const result = (await fn()) ?? {};
+    return { ok: true, ...result };
+  } catch (err) {
+    if (err instanceof AppError) return { ok: false, code: err.code, message: err.message, issues: err.issues };
+    console.error(err);
+    return { ok: false, code: "internal", message: "Something went wrong on the server. Nothing was changed; try again." };
+  }
+}

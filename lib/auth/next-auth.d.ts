@@ -1,0 +1,19 @@
+import type { Role } from "@/db/schema";
+
+declare module "next-auth" {
+  interface User {
+    role: Role;
+    organisationId: string;
+  }
+  interface Session {
+    user: { id: string; role: Role; organisationId: string; name?: string | null; email?: string | null };
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    userId: string;
+    role: Role;
+    organisationId: string;
+  }
+}

@@ -1,0 +1,134 @@
+/**
+ * `npm run demo`: builds the app if needed, migrates and seeds the invented demo scenario on the
+ * embedded database, starts the local mail fake, then serves the app on http://localhost:3000.
+ *
+ * Options (also used by the browser tests): --port N, --smtp-port N, --inbox-port N,
+ * --data-dir DIR, --fresh (delete DIR first), --no-build-check.
+ */
+import { spawn, spawnSync } from "node:child_process";
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { parseArgs } from "node:util";
+
+const root = process.cwd();
+const { values: args } = parseArgs({
+  options: {
+    port: { type: "string", default: "3000" },
+    "smtp-port": { type: "string", default: "2525" },
+    "inbox-port": { type: "string", default: "1080" },
+    "data-dir": { type: "string", default: process.env.HEFTWISE_DATA_DIR || "./data" },
+    fresh: { type: "boolean", default: false },
+    "no-build-check": { type: "boolean", default: false },
+  },
+});
+
+const port = Number(args.port);
+const dataDir = path.resolve(args["data-dir"]!);
+const origin = `http://localhost:${port}`;
+const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
+
+const SOURCE_DIRS = ["app", "assessments", "db", "lib", "fonts", "public"];
+const SOURCE_FILES = ["next.config.ts", "package.json", "postcss.config.mjs", "instrumentation.ts", "tsconfig.json"];
+
+function newestSourceTime(): number {
+  let newest = 0;
+  const visit = (p: string) => {
+    const s = statSync(p);
+    if (s.isDirectory()) for (const entry of readdirSync(p)) visit(path.join(p, entry));
+    else newest = Math.max(newest, s.mtimeMs);
+  };
+  for (const d of SOURCE_DIRS) if (existsSync(d)) visit(d);
+  for (const f of SOURCE_FILES) if (existsSync(f)) visit(f);
+  return newest;
+}
+
+function buildIfNeeded(env: NodeJS.ProcessEnv) {
+  const buildId = path.join(root, ".next", "BUILD_ID");
+  if (args["no-build-check"] && existsSync(buildId)) return;
+  if (existsSync(buildId) && statSync(buildId).mtimeMs >= newestSourceTime()) return;
+  console.log("Building Heftwise (first run, or the sources changed)…");
+  const result = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
+  if (result.status !== 0) {
+    console.error("The build failed; see above.");
+    process.exit(result.status ?? 1);
+  }
+}
+
+function demoSecret(): string {
+  // Kept beside the data so that sessions survive a restart of the demo.
+  const file = path.join(dataDir, "demo-secret");
+  if (existsSync(file)) return readFileSync(file, "utf8").trim();
+  const secret = randomBytes(32).toString("base64url");
+  writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}
+
+async function main() {
+  if (args.fresh) rmSync(dataDir, { recursive: true, force: true });
+  mkdirSync(dataDir, { recursive: true });
+
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    NEXT_TELEMETRY_DISABLED: "1",
+    NEXT_MANUAL_SIG_HANDLE: "1",
+    HEFTWISE_DATA_DIR: dataDir,
+    SMTP_URL: `smtp://127.0.0.1:${args["smtp-port"]}`,
+    NEXTAUTH_URL: origin,
+    NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET || demoSecret(),
+  };
+  Object.assign(process.env, { HEFTWISE_DATA_DIR: dataDir, NEXTAUTH_URL: origin });
+
+  buildIfNeeded(env);
+
+  // Migrate and seed in this process, then close: the server opens the data directory next,
+  // and two processes must never hold it at once.
+  const { getDb, closeDb } = await import("@/db/client");
+  const { seedDemo } = await import("@/db/seed");
+  const seeded = await seedDemo(await getDb());
+  await closeDb();
+
+  const { startMailFake } = await import("@/lib/mail/fake-server");
+  const fake = await startMailFake({ smtpPort: Number(args["smtp-port"]), httpPort: Number(args["inbox-port"]) });
+
+  const server = spawn(process.execPath, [nextBin, "start", "-p", String(port), "-H", "127.0.0.1"], { stdio: ["ignore", "pipe", "inherit"], env });
+  server.stdout.on("data", (chunk: Buffer) => {
+    process.stdout.write(chunk);
+    if (chunk.toString().includes("Ready")) printWelcome(seeded.created);
+  });
+
+  let stopping = false;
+  const stop = (signal: NodeJS.Signals) => {
+    if (stopping) return;
+    stopping = true;
+    server.kill(signal === "SIGINT" ? "SIGTERM" : signal);
+  };
+  process.on("SIGINT", stop);
+  process.on("SIGTERM", stop);
+  server.on("exit", async (code) => {
+    await fake.close();
+    process.exit(stopping ? 0 : (code ?? 1));
+  });
+}
+
+function printWelcome(created: boolean) {
+  void import("@/db/demo-scenario").then(({ DEMO_USERS, DEMO_PASSWORD, DEMO_ORGANISATION }) => {
+    const lines = [
+      "",
+      `Heftwise demo is running: ${origin}`,
+      `Organisation: ${DEMO_ORGANISATION} (invented)${created ? " — seeded just now" : ""}`,
+      `Sign in as (password for all: ${DEMO_PASSWORD}):`,
+      ...DEMO_USERS.map((u) => `  ${u.role.padEnd(9)} ${u.email}`),
+      `Mail sent by the app lands in the local fake: http://127.0.0.1:${args["inbox-port"]}`,
+      "Stop with Ctrl+C.",
+      "",
+    ];
+    console.log(lines.join("\n"));
+  });
+}
+
+main().catch((err) => {
+  console.error(`The demo could not start: ${(err as Error).message}`);
+  process.exit(1);
+});

@@ -1,0 +1,170 @@
+/**
+ * The organisation's people: listing, invitations by e-mail (a one-time link to set a password,
+ * expiring), role changes and deactivation. Every function takes the acting user and checks the
+ * permission table first.
+ */
+import { createHash, randomBytes } from "node:crypto";
+import { and, asc, eq, gt, isNull } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { invites, users, type Role } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { setPasswordSchema } from "@/lib/auth/schemas";
+import { hashPassword } from "@/lib/auth/passwords";
+import { config } from "@/lib/config";
+import { AppError, parseOrThrow } from "@/lib/errors";
+import { renderMail } from "@/lib/mail/layout";
+import { sendMail, type SendOutcome } from "@/lib/mail/send";
+import { authorize, type Actor } from "@/lib/permissions";
+import { changeRoleSchema, inviteSchema, resendInviteSchema, ROLE_LABELS, setActiveSchema } from "./schemas";
+
+export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
+
+export interface UserRow {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  active: boolean;
+  /** Invited, password not set yet. */
+  pending: boolean;
+  createdAt: Date;
+}
+
+export async function listUsers(actor: Actor | null): Promise<UserRow[]> {
+  authorize(actor, "users:manage");
+  const db = await getDb();
+  const rows = await db
+    .select()
+    .from(users)
+    .where(eq(users.organisationId, actor.organisationId))
+    .orderBy(asc(users.name));
+  return rows.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, pending: !u.passwordHash, createdAt: u.createdAt }));
+}
+
+async function organisationUser(actor: Actor, userId: string) {
+  const db = await getDb();
+  const user = await db.query.users.findFirst({ where: eq(users.id, userId) });
+  // Another organisation's user is "not found", never "forbidden".
+  if (!user || user.organisationId !== actor.organisationId) throw AppError.notFound("User");
+  return user;
+}
+
+async function issueInvite(actor: Actor, user: { id: string; name: string; email: string; role: Role }): Promise<SendOutcome> {
+  const db = await getDb();
+  const token = randomBytes(32).toString("base64url");
+  const expiresAt = new Date(Date.now() + config().INVITE_TTL_HOURS * 3600_000);
+  await db.transaction(async (tx) => {
+    // A new link replaces any earlier one that was not used.
+    await tx.delete(invites).where(and(eq(invites.userId, user.id), isNull(invites.usedAt)));
+    await tx.insert(invites).values({ organisationId: actor.organisationId, userId: user.id, tokenHash: hashToken(token), expiresAt, createdBy: actor.id });
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.invited", entityType: "user", entityId: user.id, details: { email: user.email, role: user.role } });
+  });
+  const url = `${config().NEXTAUTH_URL.replace(/\/$/, "")}/invite/${token}`;
+  const body = renderMail({
+    heading: `${actor.name} has invited you to Heftwise`,
+    paragraphs: [
+      `Hello ${user.name},`,
+      `You have been given an account as ${ROLE_LABELS[user.role].toLowerCase()}. Set a password to start using it.`,
+      `The link works once and expires in ${config().INVITE_TTL_HOURS} hours.`,
+    ],
+    action: { label: "Set your password", url },
+    footnote: "If you did not expect this invitation, ignore this e-mail: nothing happens until the link is used.",
+  });
+  return sendMail({ organisationId: actor.organisationId, kind: "invite", to: user.email, subject: "Your Heftwise account", ...body });
+}
+
+export async function inviteUser(actor: Actor | null, input: unknown): Promise<{ userId: string; mail: SendOutcome }> {
+  authorize(actor, "users:manage");
+  const data = parseOrThrow(inviteSchema, input);
+  const db = await getDb();
+  const existing = await db.query.users.findFirst({ where: eq(users.email, data.email) });
+  if (existing)
+    throw new AppError("validation", "Some fields need attention", [{ path: "email", message: "This e-mail address already has an account" }]);
+  const [user] = await db.insert(users).values({ organisationId: actor.organisationId, email: data.email, name: data.name, role: data.role }).returning();
+  const mail = await issueInvite(actor, user);
+  return { userId: user.id, mail };
+}
+
+export async function resendInvite(actor: Actor | null, input: unknown): Promise<SendOutcome> {
+  authorize(actor, "users:manage");
+  const { userId } = parseOrThrow(resendInviteSchema, input);
+  const user = await organisationUser(actor, userId);
+  if (user.passwordHash) throw new AppError("conflict", "This person has already set a password");
+  if (!user.active) throw new AppError("conflict", "Reactivate this person before inviting them again");
+  return issueInvite(actor, user);
+}
+
+export async function changeRole(actor: Actor | null, input: unknown): Promise<void> {
+  authorize(actor, "users:manage");
+  const { userId, role } = parseOrThrow(changeRoleSchema, input);
+  const user = await organisationUser(actor, userId);
+  if (user.id === actor.id) throw new AppError("conflict", "You cannot change your own role; ask another administrator");
+  if (user.role === role) return;
+  const db = await getDb();
+  await db.transaction(async (tx) => {
+    await tx.update(users).set({ role, updatedAt: new Date() }).where(eq(users.id, user.id));
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.role-changed", entityType: "user", entityId: user.id, details: { from: user.role, to: role } });
+  });
+}
+
+export async function setActive(actor: Actor | null, input: unknown): Promise<void> {
+  authorize(actor, "users:manage");
+  const { userId, active } = parseOrThrow(setActiveSchema, input);
+  const user = await organisationUser(actor, userId);
+  if (user.id === actor.id) throw new AppError("conflict", "You cannot deactivate your own account");
+  if (user.active === active) return;
+  const db = await getDb();
+  await db.transaction(async (tx) => {
+    await tx.update(users).set({ active, updatedAt: new Date() }).where(eq(users.id, user.id));
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: active ? "user.reactivated" : "user.deactivated", entityType: "user", entityId: user.id });
+  });
+}
+
+export type InviteState =
+  | { state: "valid"; name: string; email: string }
+  | { state: "expired" | "used" | "unknown" };
+
+/** What an invite link is worth, without changing anything. */
+export async function inspectInvite(token: string): Promise<InviteState> {
+  if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return { state: "unknown" };
+  const db = await getDb();
+  const invite = await db.query.invites.findFirst({ where: eq(invites.tokenHash, hashToken(token)) });
+  if (!invite) return { state: "unknown" };
+  if (invite.usedAt) return { state: "used" };
+  if (invite.expiresAt.getTime() <= Date.now()) return { state: "expired" };
+  const user = await db.query.users.findFirst({ where: eq(users.id, invite.userId) });
+  if (!user || !user.active) return { state: "unknown" };
+  return { state: "valid", name: user.name, email: user.email };
+}
+
+/** Sets the password from a valid invite link; the link is then spent. All or nothing. */
+export async function acceptInvite(token: string, input: unknown): Promise<{ email: string }> {
+  const { password } = parseOrThrow(setPasswordSchema, input);
+  const state = await inspectInvite(token);
+  if (state.state !== "valid") throw new AppError("conflict", inviteStateMessage(state.state));
+  const passwordHash = await hashPassword(password);
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    // Claim the invite first: of two racing submissions only one updates a row.
+    const [invite] = await tx
+      .update(invites)
+      .set({ usedAt: new Date() })
+      .where(and(eq(invites.tokenHash, hashToken(token)), isNull(invites.usedAt), gt(invites.expiresAt, new Date())))
+      .returning();
+    if (!invite) throw new AppError("conflict", inviteStateMessage("used"));
+    const [user] = await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, invite.userId)).returning();
+    await recordAudit(tx, { organisationId: invite.organisationId, actorId: user.id, action: "user.password-set", entityType: "user", entityId: user.id });
+    return { email: user.email };
+  });
+}
+
+export function inviteStateMessage(state: "expired" | "used" | "unknown"): string {
+  switch (state) {
+    case "expired":
+      return "This invitation link has expired. Ask your administrator to send a new one.";
+    case "used":
+      return "This invitation link has already been used. Sign in with the password you set, or ask your administrator for a new link.";
+    case "unknown":
+      return "This invitation link is not valid. Check that you opened the whole link from the e-mail, or ask your administrator for a new one.";
+  }
+}
