@@ -11,7 +11,10 @@ function clientAddress(headers: Record<string, unknown> | undefined): string | n
 }
 
 export const authOptions: NextAuthOptions = {
-  secret: config().secret,
+  // Read when a request is handled, not when the build evaluates this module.
+  get secret() {
+    return config().secret;
+  },
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
   pages: { signIn: "/sign-in", signOut: "/sign-out", error: "/sign-in" },
   providers: [

@@ -6,6 +6,7 @@
 import { eq } from "drizzle-orm";
 import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
+import { connection } from "next/server";
 import { cache } from "react";
 import { getDb } from "@/db/client";
 import { users } from "@/db/schema";
@@ -13,6 +14,8 @@ import type { Actor } from "@/lib/permissions";
 import { authOptions } from "./options";
 
 export const getActor = cache(async (): Promise<Actor | null> => {
+  // Who is calling is known only at request time: never prerender a page that asks.
+  await connection();
   const session = await getServerSession(authOptions);
   const id = session?.user?.id;
   if (!id) return null;
