@@ -6,7 +6,7 @@
  * read in a reproduction of the published table; women's are recalled from memory (REFERENCES.md §2).
  */
 import { bandForIndex, GUIDELINE_THRESHOLDS, worstBand } from "./bands";
-import { round } from "./niosh";
+import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import { MAX_TEAM_SIZE, teamCapacity, teamFactor } from "./team";
 import type { Band, Reason, ResultBase, Sex, Warning } from "./types";
@@ -140,12 +140,12 @@ export function scoreFilter(req: FilterRequest): FilterResult {
   const who = req.sex === "male" ? "men" : "women";
 
   reasons.push({
-    text: `Guideline weight for ${who}, hands ${ZONE_LABELS[req.zone]}, load ${req.reach === "close" ? "close to the body" : "at arm's length"}: ${base} kg.`,
+    text: `Guideline weight for ${who}, hands ${ZONE_LABELS[req.zone]}, load ${req.reach === "close" ? "close to the body" : "at arm's length"}: ${fmt(base)} kg.`,
     source: req.sex === "male" ? SOURCES.hseL23 : `${SOURCES.hseL23} (women's figures from memory)`,
   });
   if (fr > 0)
     reasons.push({
-      text: `${req.frequency} operations a minute: reduced by ${fr * 100} %.`,
+      text: `${fmt(req.frequency)} operations a minute: reduced by ${fr * 100} %.`,
       source:
         req.frequency <= 2 || req.frequency > 12 || (req.frequency >= 5 && req.frequency <= 8)
           ? SOURCES.hseL23
@@ -153,23 +153,23 @@ export function scoreFilter(req: FilterRequest): FilterResult {
     });
   if (tr > 0)
     reasons.push({
-      text: `Twisting ${req.twistDeg}°: reduced by ${tr * 100} %.`,
+      text: `Twisting ${fmt(req.twistDeg)}°: reduced by ${tr * 100} %.`,
       source: SOURCES.hseL23,
     });
   if (fr > 0 && tr > 0)
     reasons.push({
-      text: `Reductions added together: ${round((fr + tr) * 100, 0)} % in all.`,
+      text: `Reductions added together: ${fmt((fr + tr) * 100, 0)} % in all.`,
       source: SOURCES.heftwisePolicy,
     });
   if (req.teamSize > 1)
     reasons.push({
-      text: `Team of ${req.teamSize}: the team handles about ${req.teamSize === 2 ? "two-thirds" : "half"} of the sum of its members' capabilities; each carries about ${round(req.load / req.teamSize)} kg.`,
+      text: `Team of ${fmt(req.teamSize)}: the team handles about ${req.teamSize === 2 ? "two-thirds" : "half"} of the sum of its members' capabilities; each carries about ${fmt(req.load / req.teamSize)} kg.`,
       source: req.teamSize <= 3 ? SOURCES.hseL23 : `${SOURCES.hseL23}; team of four at one half: ${SOURCES.heftwisePolicy}`,
     });
   if (req.teamSize > MAX_TEAM_SIZE) {
     floors.push("stop");
     reasons.push({
-      text: `A team of ${req.teamSize} is more than four: such teams are unlikely to work well together. Use a mechanical aid.`,
+      text: `A team of ${fmt(req.teamSize)} is more than four: such teams are unlikely to work well together. Use a mechanical aid.`,
       source: SOURCES.hseL23,
     });
   }
@@ -180,7 +180,7 @@ export function scoreFilter(req: FilterRequest): FilterResult {
     });
   else
     reasons.push({
-      text: `Load ${req.load} kg against a guideline of ${round(guideline)} kg: index ${round(index)}${index > 1 ? " — above the filter, a fuller assessment is needed" : ", within the filter"}.`,
+      text: `Load ${fmt(req.load)} kg against a guideline of ${fmt(guideline)} kg: index ${fmt(index)}${index > 1 ? " — above the filter, a fuller assessment is needed" : ", within the filter"}.`,
       source: index > 1 ? `${SOURCES.hseL23}; bands above 1: ${SOURCES.heftwisePolicy}` : SOURCES.hseL23,
     });
 
@@ -191,7 +191,7 @@ export function scoreFilter(req: FilterRequest): FilterResult {
       floors.push("watch");
       warnings.push({
         field: "carryDistanceM",
-        message: `Carried ${carry} m: the guideline figures hold up to about ${CARRY_FILTER_LIMIT_M} m without rest. Assess the carry in more detail, or plan rests or a trolley.`,
+        message: `Carried ${fmt(carry)} m: the guideline figures hold up to about ${CARRY_FILTER_LIMIT_M} m without rest. Assess the carry in more detail, or plan rests or a trolley.`,
       });
     }
     if (req.zone === "floor-to-lower-leg" || req.zone === "lower-leg-to-knuckle") {
@@ -205,14 +205,14 @@ export function scoreFilter(req: FilterRequest): FilterResult {
     cumulativeMassKg = req.load * Math.max(req.frequency, 0) * 60 * hours;
     const allowance = carry >= LONG_CARRY_M ? CUMULATIVE_MASS_LONG_CARRY_KG : CUMULATIVE_MASS_PER_SHIFT_KG;
     reasons.push({
-      text: `Mass carried in ${hours} h: ${round(cumulativeMassKg, 0)} kg against ${allowance} kg per 8 h shift${carry >= LONG_CARRY_M ? " for carries of 20 m or more" : " under ideal conditions"}.`,
+      text: `Mass carried in ${fmt(hours)} h: ${fmt(cumulativeMassKg, 0)} kg against ${fmt(allowance)} kg per 8 h shift${carry >= LONG_CARRY_M ? " for carries of 20 m or more" : " under ideal conditions"}.`,
       source: SOURCES.iso11228,
     });
     if (cumulativeMassKg > allowance) {
       floors.push("act");
       warnings.push({
         field: "frequency",
-        message: `Cumulative mass carried (${round(cumulativeMassKg, 0)} kg) exceeds ${allowance} kg per shift: reduce the number of carries, share the work or use a trolley.`,
+        message: `Cumulative mass carried (${fmt(cumulativeMassKg, 0)} kg) exceeds ${fmt(allowance)} kg per shift: reduce the number of carries, share the work or use a trolley.`,
       });
     }
   }

@@ -13,8 +13,19 @@
  * multiplier) if any task in the sum is lifted below 75 cm (30 in).
  */
 import { bandForIndex, NIOSH_THRESHOLDS } from "./bands";
-import { endMultipliers, rangeWarnings, round, unitSystem, type HandPosition } from "./niosh";
+import {
+  asymmetricMultiplier,
+  couplingMultiplier,
+  distanceMultiplier,
+  horizontalMultiplier,
+  rangeWarnings,
+  unitSystem,
+  verticalMultiplier,
+  type HandPosition,
+  type UnitSystem,
+} from "./niosh";
 import { durationBand, frequencyMultiplier, MIN_FREQUENCY } from "./niosh-frequency";
+import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import type { Coupling, ResultBase, Units, Warning } from "./types";
 import { RULES_VERSION } from "./version";
@@ -61,31 +72,29 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
   const duration = durationBand(req.durationHours);
   const warnings: Warning[] = [];
 
-  const scored = req.tasks.map((task, i) => {
-    warnings.push(...rangeWarnings({ ...task, durationHours: req.durationHours }, u, `tasks.${i}.`));
+  const scored: OrderedTask[] = [];
+  for (let i = 0; i < req.tasks.length; i++) {
+    const task = req.tasks[i];
+    const taskWarnings = rangeWarnings(task.origin, task.destination, task.frequency, req.durationHours, u, `tasks.${i}.`);
+    for (const w of taskWarnings) warnings.push(w);
     const travel = Math.abs(task.destination.v - task.origin.v);
-    const ends = task.controlAtDestination ? [task.origin, task.destination] : [task.origin];
-    let firwl = Infinity;
-    let lowV = false;
-    for (const pos of ends) {
-      const m = endMultipliers(pos, travel, task.coupling, u);
-      const value = u.loadConstant * m.hm * m.vm * m.dm * m.am * m.cm;
-      if (value < firwl) {
-        firwl = value;
-        lowV = pos.v < u.vColumnSplit;
+    // With significant control at the destination, the end with the lower FIRWL is used.
+    let firwl = freeIndexLimit(task.origin, travel, task.coupling, u);
+    let lowV = task.origin.v < u.vColumnSplit;
+    if (task.controlAtDestination) {
+      const atDestination = freeIndexLimit(task.destination, travel, task.coupling, u);
+      if (atDestination < firwl) {
+        firwl = atDestination;
+        lowV = task.destination.v < u.vColumnSplit;
       }
     }
-    const fm = frequencyMultiplier(task.frequency, duration, !lowV);
-    const strwl = firwl * fm;
-    const result: CompositeTaskResult = {
-      id: task.id,
-      firwl,
-      strwl,
-      fili: firwl > 0 ? task.load / firwl : null,
-      stli: strwl > 0 ? task.load / strwl : null,
-    };
-    return { result, frequency: Math.max(task.frequency, MIN_FREQUENCY), lowV };
-  });
+    const strwl = firwl * frequencyMultiplier(task.frequency, duration, !lowV);
+    scored.push({
+      result: { id: task.id, firwl, strwl, fili: firwl > 0 ? task.load / firwl : null, stli: strwl > 0 ? task.load / strwl : null },
+      frequency: Math.max(task.frequency, MIN_FREQUENCY),
+      lowV,
+    });
+  }
 
   const outOfRange = scored.some((s) => s.result.stli === null);
   // Tasks outside the equation's range sort first: they decide the job.
@@ -100,7 +109,7 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
     if (combined.overflowFrequency !== undefined)
       warnings.push({
         field: "tasks",
-        message: `The tasks' combined frequency reaches ${round(combined.overflowFrequency)}/min, where FM is 0: the equation cannot judge this job.`,
+        message: `The tasks' combined frequency reaches ${fmt(combined.overflowFrequency)}/min, where FM is 0: the equation cannot judge this job.`,
       });
   }
 
@@ -108,7 +117,7 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
   const first = ordered[0]?.result;
   return {
     method: "niosh-composite",
-    inputs: { ...req, durationBand: duration },
+    inputs: { method: "niosh-composite", units: req.units, durationHours: req.durationHours, tasks: req.tasks, durationBand: duration },
     cli,
     index: cli,
     order: ordered.map((s) => s.result.id),
@@ -124,7 +133,7 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
           ]
         : [
             {
-              text: `Composite lifting index ${round(cli)} for ${req.tasks.length} tasks; task "${first.id}" is the most stressful on its own (STLI ${round(first.stli!)}).`,
+              text: `Composite lifting index ${fmt(cli)} for ${req.tasks.length} tasks; task "${first.id}" is the most stressful on its own (STLI ${fmt(first.stli!)}).`,
               source: SOURCES.nioshComposite,
             },
             {
@@ -140,6 +149,18 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
     warnings,
     rulesVersion: RULES_VERSION,
   };
+}
+
+/** FIRWL: the RWL with FM = 1. */
+function freeIndexLimit(pos: HandPosition, travel: number, coupling: Coupling, u: UnitSystem): number {
+  return (
+    u.loadConstant *
+    horizontalMultiplier(pos.h, u) *
+    verticalMultiplier(pos.v, u) *
+    distanceMultiplier(travel, u) *
+    asymmetricMultiplier(pos.a) *
+    couplingMultiplier(coupling, pos.v, u)
+  );
 }
 
 interface OrderedTask {

@@ -9,7 +9,8 @@
  * the equation can judge: the index is then null and the band `stop`.
  */
 import { bandForIndex, NIOSH_THRESHOLDS } from "./bands";
-import { durationBand, frequencyMultiplier, MAX_FREQUENCY, MIN_FREQUENCY } from "./niosh-frequency";
+import { durationBand, frequencyMultiplier, MAX_FREQUENCY, MIN_FREQUENCY, type DurationBand } from "./niosh-frequency";
+import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import type { Band, Coupling, Reason, ResultBase, Units, Warning } from "./types";
 import { RULES_VERSION } from "./version";
@@ -49,7 +50,10 @@ export interface NioshEndResult {
 
 export interface NioshResult extends ResultBase {
   method: "niosh";
-  inputs: NioshRequest & { travelDistance: number; durationBand: string; frequencyUsed: number };
+  /** The request as validated. */
+  inputs: NioshRequest;
+  /** Values the method derives from the inputs before scoring. */
+  derived: { travelDistance: number; durationBand: DurationBand; frequencyUsed: number };
   origin: NioshEndResult;
   destination: NioshEndResult | null;
   /** The governing (larger) lifting index; null when the equation cannot judge the task. */
@@ -148,86 +152,77 @@ export function couplingMultiplier(coupling: Coupling, v: number, u: UnitSystem)
   return v < u.vColumnSplit ? 0.95 : 1;
 }
 
-/** Multipliers other than FM at one end of the lift; shared with the composite index. */
-export function endMultipliers(
-  pos: HandPosition,
-  travel: number,
-  coupling: Coupling,
-  u: UnitSystem,
-): Omit<NioshEndResult, "fm" | "rwl" | "li"> {
-  return {
-    hm: horizontalMultiplier(pos.h, u),
-    vm: verticalMultiplier(pos.v, u),
-    dm: distanceMultiplier(travel, u),
-    am: asymmetricMultiplier(pos.a),
-    cm: couplingMultiplier(coupling, pos.v, u),
-  };
-}
-
 function scoreEnd(
   req: NioshRequest,
   pos: HandPosition,
   travel: number,
   u: UnitSystem,
 ): NioshEndResult {
-  const m = endMultipliers(pos, travel, req.coupling, u);
-  const fm = frequencyMultiplier(
-    req.frequency,
-    durationBand(req.durationHours),
-    pos.v >= u.vColumnSplit,
-  );
-  const rwl = u.loadConstant * m.hm * m.vm * m.dm * m.am * fm * m.cm;
-  return { ...m, fm, rwl, li: rwl > 0 ? req.load / rwl : null };
+  // Plain literals, no spreads: this is the hot path of live scoring and batch scoring.
+  const hm = horizontalMultiplier(pos.h, u);
+  const vm = verticalMultiplier(pos.v, u);
+  const dm = distanceMultiplier(travel, u);
+  const am = asymmetricMultiplier(pos.a);
+  const cm = couplingMultiplier(req.coupling, pos.v, u);
+  const fm = frequencyMultiplier(req.frequency, durationBand(req.durationHours), pos.v >= u.vColumnSplit);
+  const rwl = u.loadConstant * hm * vm * dm * am * fm * cm;
+  return { hm, vm, dm, am, fm, cm, rwl, li: rwl > 0 ? req.load / rwl : null };
 }
 
-/** Warnings for every input outside the equation's range, naming the variable. */
+/** Warnings for every input outside the equation's range, naming the variable (prefixed by `path`). */
 export function rangeWarnings(
-  req: Pick<NioshRequest, "origin" | "destination" | "frequency" | "durationHours">,
+  origin: HandPosition,
+  destination: HandPosition,
+  frequency: number,
+  durationHours: number,
   u: UnitSystem,
   path = "",
 ): Warning[] {
   const warnings: Warning[] = [];
+  endWarnings(warnings, origin, "origin", u, path);
+  endWarnings(warnings, destination, "destination", u, path);
   const L = u.lengthUnit;
-  for (const end of ["origin", "destination"] as const) {
-    const pos = req[end];
-    if (pos.h > u.hMax)
-      warnings.push({
-        field: `${path}${end}.h`,
-        message: `H at the ${end} is ${pos.h} ${L}, beyond the equation's ${u.hMax} ${L}: HM is 0 and the equation cannot judge this lift. Bring the load closer.`,
-      });
-    if (pos.v > u.vMax)
-      warnings.push({
-        field: `${path}${end}.v`,
-        message: `V at the ${end} is ${pos.v} ${L}, above the equation's ${u.vMax} ${L}: VM is 0 and the equation cannot judge this lift.`,
-      });
-    if (pos.a > MAX_ASYMMETRY_DEG)
-      warnings.push({
-        field: `${path}${end}.a`,
-        message: `Asymmetry at the ${end} is ${pos.a}°, beyond ${MAX_ASYMMETRY_DEG}°: AM is 0 and the equation cannot judge this lift.`,
-      });
-  }
-  const travel = Math.abs(req.destination.v - req.origin.v);
+  const travel = Math.abs(destination.v - origin.v);
   if (travel > u.dMax)
     warnings.push({
       field: `${path}destination.v`,
-      message: `Vertical travel D is ${round(travel)} ${L}, beyond the equation's ${u.dMax} ${L}: DM is 0 and the equation cannot judge this lift.`,
+      message: `Vertical travel D is ${fmt(travel)} ${L}, beyond the equation's ${fmt(u.dMax)} ${L}: DM is 0 and the equation cannot judge this lift.`,
     });
-  if (req.frequency < MIN_FREQUENCY)
+  if (frequency < MIN_FREQUENCY)
     warnings.push({
       field: `${path}frequency`,
-      message: `Frequency ${req.frequency}/min is below ${MIN_FREQUENCY}/min: taken as ${MIN_FREQUENCY}/min, as the manual directs.`,
+      message: `Frequency ${fmt(frequency)}/min is below ${fmt(MIN_FREQUENCY)}/min: taken as ${fmt(MIN_FREQUENCY)}/min, as the manual directs.`,
     });
-  if (req.frequency > MAX_FREQUENCY)
+  if (frequency > MAX_FREQUENCY)
     warnings.push({
       field: `${path}frequency`,
-      message: `Frequency ${req.frequency}/min is above ${MAX_FREQUENCY}/min: FM is 0 and the equation cannot judge this job.`,
+      message: `Frequency ${fmt(frequency)}/min is above ${fmt(MAX_FREQUENCY)}/min: FM is 0 and the equation cannot judge this job.`,
     });
-  if (req.durationHours > 8)
+  if (durationHours > 8)
     warnings.push({
       field: `${path}durationHours`,
-      message: `Duration ${req.durationHours} h is beyond the equation's 8 h: the 2–8 h column is used, which may understate the risk.`,
+      message: `Duration ${fmt(durationHours)} h is beyond the equation's 8 h: the 2–8 h column is used, which may understate the risk.`,
     });
   return warnings;
+}
+
+function endWarnings(warnings: Warning[], pos: HandPosition, end: string, u: UnitSystem, path: string): void {
+  const L = u.lengthUnit;
+  if (pos.h > u.hMax)
+    warnings.push({
+      field: `${path}${end}.h`,
+      message: `H at the ${end} is ${fmt(pos.h)} ${L}, beyond the equation's ${fmt(u.hMax)} ${L}: HM is 0 and the equation cannot judge this lift. Bring the load closer.`,
+    });
+  if (pos.v > u.vMax)
+    warnings.push({
+      field: `${path}${end}.v`,
+      message: `V at the ${end} is ${fmt(pos.v)} ${L}, above the equation's ${fmt(u.vMax)} ${L}: VM is 0 and the equation cannot judge this lift.`,
+    });
+  if (pos.a > MAX_ASYMMETRY_DEG)
+    warnings.push({
+      field: `${path}${end}.a`,
+      message: `Asymmetry at the ${end} is ${fmt(pos.a)}°, beyond ${MAX_ASYMMETRY_DEG}°: AM is 0 and the equation cannot judge this lift.`,
+    });
 }
 
 export function scoreNiosh(req: NioshRequest): NioshResult {
@@ -237,24 +232,18 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
   const destination = req.controlAtDestination
     ? scoreEnd(req, req.destination, travel, u)
     : null;
-  const warnings = rangeWarnings(req, u);
+  const warnings = rangeWarnings(req.origin, req.destination, req.frequency, req.durationHours, u);
 
-  const ends = destination ? [origin, destination] : [origin];
-  const outOfRange = ends.some((e) => e.li === null);
-  const governing = outOfRange
-    ? ends.find((e) => e.li === null)!
-    : ends.reduce((a, b) => ((b.li ?? 0) > (a.li ?? 0) ? b : a));
-  const li = outOfRange ? null : governing.li;
+  // The larger index governs; an end the equation cannot judge (li null) governs outright.
+  let governing = origin;
+  if (destination && origin.li !== null && (destination.li === null || destination.li > origin.li)) governing = destination;
+  const li = governing.li;
   const band = bandForIndex(li, NIOSH_THRESHOLDS);
 
   return {
     method: "niosh",
-    inputs: {
-      ...req,
-      travelDistance: travel,
-      durationBand: durationBand(req.durationHours),
-      frequencyUsed: Math.max(req.frequency, MIN_FREQUENCY),
-    },
+    inputs: req,
+    derived: { travelDistance: travel, durationBand: durationBand(req.durationHours), frequencyUsed: Math.max(req.frequency, MIN_FREQUENCY) },
     origin,
     destination,
     li,
@@ -267,6 +256,24 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
   };
 }
 
+// Reasons that never change are made once (and frozen, since results share them).
+const OUT_OF_RANGE_REASON: Reason = Object.freeze({
+  text: "At least one multiplier is 0: the lift is outside the range the NIOSH equation can judge, so no lifting index is given. Do not proceed as planned.",
+  source: SOURCES.nioshManual,
+});
+const BAND_REASON: Record<Band, Reason> = {
+  clear: Object.freeze({ text: "Lifting index at or below 1.0: nominal risk for nearly all healthy workers.", source: SOURCES.nioshManual }),
+  watch: Object.freeze({
+    text: `Lifting index above 1.0: increased risk for some workers. Heftwise puts LI up to ${NIOSH_THRESHOLDS.watchUpTo} at watch and up to 3.0 at act.`,
+    source: `${SOURCES.nioshManual}; thresholds between 1 and 3: ${SOURCES.heftwisePolicy}`,
+  }),
+  act: Object.freeze({
+    text: `Lifting index above ${NIOSH_THRESHOLDS.watchUpTo}: increased risk for many workers; redesign the lift before work. Heftwise puts LI up to 3.0 at act.`,
+    source: `${SOURCES.nioshManual}; thresholds between 1 and 3: ${SOURCES.heftwisePolicy}`,
+  }),
+  stop: Object.freeze({ text: "Lifting index above 3.0: nearly all workers are at increased risk of injury.", source: SOURCES.nioshManual }),
+};
+
 function nioshReasons(
   li: number | null,
   band: Band,
@@ -275,58 +282,47 @@ function nioshReasons(
   u: UnitSystem,
   load: number,
 ): Reason[] {
-  const where = atDestination ? "destination" : "origin";
-  if (li === null) {
-    return [
-      {
-        text: "At least one multiplier is 0: the lift is outside the range the NIOSH equation can judge, so no lifting index is given. Do not proceed as planned.",
-        source: SOURCES.nioshManual,
-      },
-    ];
-  }
+  if (li === null) return [OUT_OF_RANGE_REASON];
   const reasons: Reason[] = [
     {
-      text: `Recommended weight limit at the ${where} is ${round(governing.rwl)} ${u.massUnit}; the load of ${load} ${u.massUnit} gives a lifting index of ${round(li)}.`,
+      text: `Recommended weight limit at the ${atDestination ? "destination" : "origin"} is ${fmt(governing.rwl)} ${u.massUnit}; the load of ${fmt(load)} ${u.massUnit} gives a lifting index of ${fmt(li)}.`,
       source: SOURCES.nioshManual,
     },
+    BAND_REASON[band],
   ];
-  if (band === "clear")
-    reasons.push({ text: "Lifting index at or below 1.0: nominal risk for nearly all healthy workers.", source: SOURCES.nioshManual });
-  else if (band === "stop")
-    reasons.push({ text: "Lifting index above 3.0: nearly all workers are at increased risk of injury.", source: SOURCES.nioshManual });
-  else
-    reasons.push({
-      text: `Lifting index above 1.0: increased risk for some workers. Heftwise puts LI up to ${NIOSH_THRESHOLDS.watchUpTo} at watch and up to 3.0 at act.`,
-      source: `${SOURCES.nioshManual}; thresholds between 1 and 3: ${SOURCES.heftwisePolicy}`,
-    });
-  const weakest = weakestMultiplier(governing);
-  if (weakest && band !== "clear")
-    reasons.push({
-      text: `The largest reduction comes from ${weakest.name} (${round(weakest.value)}): ${weakest.advice}`,
-      source: SOURCES.nioshManual,
-    });
+  if (band !== "clear") {
+    const weakest = weakestMultiplier(governing);
+    if (weakest >= 0) {
+      const item = ADVICE[weakest];
+      reasons.push({
+        text: `The largest reduction comes from ${item.name} (${fmt(governing[item.key])}): ${item.advice}`,
+        source: SOURCES.nioshManual,
+      });
+    }
+  }
   return reasons;
 }
 
-const ADVICE: Record<string, [string, string]> = {
-  hm: ["the horizontal distance (HM)", "bring the load closer to the body."],
-  vm: ["the hand height (VM)", "raise or lower the start or end height towards knuckle height."],
-  dm: ["the vertical travel (DM)", "reduce the height the load travels."],
-  am: ["twisting (AM)", "turn the feet, not the trunk; re-arrange the workplace."],
-  fm: ["the frequency (FM)", "lift less often, or share the work and take breaks."],
-  cm: ["the grip (CM)", "use handles, a lifting aid or a better container."],
-};
+const ADVICE: readonly { key: "hm" | "vm" | "dm" | "am" | "fm" | "cm"; name: string; advice: string }[] = [
+  { key: "hm", name: "the horizontal distance (HM)", advice: "bring the load closer to the body." },
+  { key: "vm", name: "the hand height (VM)", advice: "raise or lower the start or end height towards knuckle height." },
+  { key: "dm", name: "the vertical travel (DM)", advice: "reduce the height the load travels." },
+  { key: "am", name: "twisting (AM)", advice: "turn the feet, not the trunk; re-arrange the workplace." },
+  { key: "fm", name: "the frequency (FM)", advice: "lift less often, or share the work and take breaks." },
+  { key: "cm", name: "the grip (CM)", advice: "use handles, a lifting aid or a better container." },
+];
 
-function weakestMultiplier(end: NioshEndResult) {
-  let best: { name: string; value: number; advice: string } | null = null;
-  for (const key of Object.keys(ADVICE) as (keyof typeof ADVICE)[]) {
-    const value = end[key as keyof NioshEndResult] as number;
-    if (value < 1 && (!best || value < best.value)) best = { name: ADVICE[key][0], value, advice: ADVICE[key][1] };
+/** Index in ADVICE of the multiplier that cuts the limit most, or -1 when none is below 1. */
+function weakestMultiplier(end: NioshEndResult): number {
+  // Written out rather than looped over keys: this runs on every scoring above clear.
+  const values = [end.hm, end.vm, end.dm, end.am, end.fm, end.cm];
+  let best = -1;
+  let lowest = 1;
+  for (let i = 0; i < 6; i++) {
+    if (values[i] < lowest) {
+      lowest = values[i];
+      best = i;
+    }
   }
   return best;
-}
-
-export function round(x: number, dp = 2): number {
-  const f = 10 ** dp;
-  return Math.round(x * f) / f;
 }

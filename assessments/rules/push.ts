@@ -11,7 +11,7 @@
  * twice the rolling resistance, F_start = m·g·(sin θ + 2·C_rr·cos θ).
  */
 import { bandForIndex, GUIDELINE_THRESHOLDS, worstBand } from "./bands";
-import { round } from "./niosh";
+import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import { MAX_TEAM_SIZE, teamCapacity } from "./team";
 import type { Band, Reason, ResultBase, Sex, Warning } from "./types";
@@ -86,25 +86,25 @@ export function scorePush(req: PushRequest): PushResult {
 
   reasons.push(
     measured
-      ? { text: `Measured force ${round(sustained)} N used for starting and for keeping moving.`, source: "Push-pull gauge reading entered by the assessor" }
+      ? { text: `Measured force ${fmt(sustained)} N used for starting and for keeping moving.`, source: "Push-pull gauge reading entered by the assessor" }
       : {
-          text: `Estimated force to keep ${req.mass} kg moving on a gradient of ${round(req.gradient, 4)} with rolling resistance ${crr}: ${round(sustained)} N; to start it: ${round(start)} N.`,
+          text: `Estimated force to keep ${fmt(req.mass)} kg moving on a gradient of ${fmt(req.gradient * 100, 1)} % with rolling resistance ${fmt(crr * 100, 1)} % of the weight: ${fmt(sustained)} N; to start it: ${fmt(start)} N.`,
           source: `${SOURCES.hseL23} (2 % of the load on the level); starting force: ${SOURCES.heftwisePolicy}`,
         },
     {
-      text: `Guideline forces for ${who}${req.teamSize > 1 ? `, team of ${req.teamSize}` : ""}: ${round(guidelineStart)} N to start or stop, ${round(guidelineSustained)} N to keep moving; index ${round(index)}.`,
+      text: `Guideline forces for ${who}${req.teamSize > 1 ? `, team of ${fmt(req.teamSize)}` : ""}: ${fmt(guidelineStart)} N to start or stop, ${fmt(guidelineSustained)} N to keep moving; index ${fmt(index)}.`,
       source: req.teamSize > 1 ? `${SOURCES.hseL23}; team factors applied to pushing: ${SOURCES.heftwisePolicy}` : SOURCES.hseL23,
     },
   );
   if (req.teamSize > MAX_TEAM_SIZE) {
     floors.push("stop");
-    reasons.push({ text: `A team of ${req.teamSize} is more than four: use a powered aid or split the load.`, source: SOURCES.hseL23 });
+    reasons.push({ text: `A team of ${fmt(req.teamSize)} is more than four: use a powered aid or split the load.`, source: SOURCES.hseL23 });
   }
   if (req.distanceM !== undefined && req.distanceM > PUSH_DISTANCE_LIMIT_M) {
     floors.push("watch");
     warnings.push({
       field: "distanceM",
-      message: `Pushed ${req.distanceM} m: beyond about ${PUSH_DISTANCE_LIMIT_M} m without a break the guideline forces do not hold. Assess in more detail and plan rests.`,
+      message: `Pushed ${fmt(req.distanceM)} m: beyond about ${PUSH_DISTANCE_LIMIT_M} m without a break the guideline forces do not hold. Assess in more detail and plan rests.`,
     });
   }
   if (req.gradient < 0)
@@ -115,7 +115,7 @@ export function scorePush(req: PushRequest): PushResult {
   if (crr !== DEFAULT_ROLLING_COEFFICIENT && !measured)
     warnings.push({
       field: "rollingCoefficient",
-      message: `Rolling resistance ${crr} entered instead of the 2 % guideline figure: record how it was obtained.`,
+      message: `Rolling resistance ${fmt(crr)} entered instead of the 2 % guideline figure: record how it was obtained.`,
     });
 
   return {

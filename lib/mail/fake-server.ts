@@ -92,9 +92,11 @@ export async function startMailFake({ smtpPort = 2525, httpPort = 1080 } = {}): 
     http.listen(httpPort, "127.0.0.1", () => resolve());
   });
 
+  // Port 0 asks the system for a free port: report the ones actually bound.
+  const bound = (server: { address(): unknown }) => (server.address() as { port: number }).port;
   return {
-    smtpPort,
-    httpPort,
+    smtpPort: bound(smtp.server),
+    httpPort: bound(http),
     messages,
     close: () =>
       Promise.all([
