@@ -1,0 +1,28 @@
+import { eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { organisations, users, type Role } from "@/db/schema";
+import { seedDemo } from "@/db/seed";
+import type { Actor } from "@/lib/permissions";
+
+/** The demo organisation, seeded into this test file's database. */
+export async function demoOrganisation() {
+  return seedDemo(await getDb());
+}
+
+export async function actorFor(role: Role, organisationId: string): Promise<Actor> {
+  const db = await getDb();
+  const user = (await db.select().from(users).where(eq(users.organisationId, organisationId))).find((u) => u.role === role);
+  if (!user) throw new Error(`no ${role} in organisation`);
+  return { id: user.id, organisationId, role: user.role, name: user.name, email: user.email };
+}
+
+/** A second, unrelated organisation with one admin, for "other organisation → 404" checks. */
+export async function otherOrganisation(): Promise<{ organisationId: string; adminId: string; admin: Actor }> {
+  const db = await getDb();
+  const [org] = await db.insert(organisations).values({ name: `Other Org ${Math.random()}` }).returning();
+  const [admin] = await db
+    .insert(users)
+    .values({ organisationId: org.id, email: `admin-${org.id}@other.example`, name: "Other Admin", role: "admin", passwordHash: "x" })
+    .returning();
+  return { organisationId: org.id, adminId: admin.id, admin: { id: admin.id, organisationId: org.id, role: "admin", name: admin.name, email: admin.email } };
+}
