@@ -1,0 +1,30 @@
+import { expect, type Page } from "@playwright/test";
+import { DEMO_PASSWORD } from "@/db/demo-scenario";
+import { INBOX_URL } from "../../playwright.config";
+
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("signed-in-as")).toBeVisible();
+}
+
+export interface InboxMessage {
+  to: string[];
+  subject: string;
+  text: string;
+  kind: string | null;
+}
+
+/** Waits for an e-mail to `to` to reach the local mail fake. */
+export async function waitForMail(to: string, timeoutMs = 15_000): Promise<InboxMessage> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const messages = (await (await fetch(`${INBOX_URL}/api/messages`)).json()) as InboxMessage[];
+    const found = messages.filter((m) => m.to.includes(to)).at(-1);
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`no e-mail to ${to} within ${timeoutMs} ms`);
+}

@@ -1,0 +1,122 @@
+import { expect, test } from "@playwright/test";
+import { DEMO_USERS } from "@/db/demo-scenario";
+import { signIn, waitForMail } from "./helpers";
+
+const navigationByRole = {
+  admin: { shows: ["Overview", "Jobs", "Load register", "People", "Sent e-mail"], hides: ["For review", "Briefings"] },
+  adviser: { shows: ["Overview", "Jobs", "Load register"], hides: ["People", "Sent e-mail", "For review", "Briefings"] },
+  approver: { shows: ["Overview", "For review"], hides: ["Jobs", "Load register", "People", "Briefings"] },
+  foreman: { shows: ["Overview", "Briefings"], hides: ["Jobs", "Load register", "People", "For review"] },
+} as const;
+
+for (const user of DEMO_USERS) {
+  test(`${user.role} signs in and sees the navigation for the role`, async ({ page }) => {
+    await signIn(page, user.email);
+    const nav = page.getByRole("navigation", { name: "Main" });
+    for (const label of navigationByRole[user.role].shows) await expect(nav.getByRole("link", { name: label, exact: true })).toBeVisible();
+    for (const label of navigationByRole[user.role].hides) await expect(nav.getByRole("link", { name: label, exact: true })).toHaveCount(0);
+    await expect(page.getByRole("note")).toContainText("does not replace");
+  });
+}
+
+test("a wrong password is refused with a clear message, and so is an unknown address", async ({ page }) => {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill("adviser@brackenfold.example");
+  await page.getByLabel("Password").fill("not-the-password");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.locator("form").getByRole("alert")).toHaveText("E-mail or password not recognised.");
+  await page.getByLabel("E-mail").fill("nobody@brackenfold.example");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.locator("form").getByRole("alert")).toHaveText("E-mail or password not recognised.");
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
+test("an empty form says what is missing without a round trip", async ({ page }) => {
+  await page.goto("/sign-in");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByText("Enter an e-mail address")).toBeVisible();
+  await expect(page.getByText("Enter your password")).toBeVisible();
+});
+
+test("an adviser cannot open the admin pages (403)", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  for (const path of ["/admin/users", "/admin/mail"]) {
+    const response = await page.goto(path);
+    expect(response?.status()).toBe(403);
+    await expect(page.getByRole("heading", { name: "Not available for your role" })).toBeVisible();
+  }
+});
+
+test("signed out, an app page sends you to sign in", async ({ page }) => {
+  await page.goto("/load-register");
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
+test("an invited user sets a password from the e-mail and signs in", async ({ page, browser }) => {
+  await signIn(page, "admin@brackenfold.example");
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "People" }).click();
+  const form = page.getByRole("form", { name: "Invite someone" });
+  // Bad input first: nothing is sent, the fields say why.
+  await form.getByLabel("E-mail").fill("not-an-address");
+  await form.getByRole("button", { name: "Send invitation" }).click();
+  await expect(form.getByText("Enter the person's name")).toBeVisible();
+  await expect(form.getByText("Enter a valid e-mail address")).toBeVisible();
+
+  await form.getByLabel("Name").fill("Wynne Caddow");
+  await form.getByLabel("E-mail").fill("wynne.caddow@brackenfold.example");
+  await form.getByLabel("Role").selectOption("foreman");
+  await form.getByRole("button", { name: "Send invitation" }).click();
+  await expect(form.getByRole("status")).toContainText("The invitation e-mail was sent.");
+  await expect(page.getByTestId("person-wynne.caddow@brackenfold.example")).toContainText("Invited, no password yet");
+
+  const mail = await waitForMail("wynne.caddow@brackenfold.example");
+  const link = mail.text.match(/https?:\/\/\S+\/invite\/[A-Za-z0-9_-]+/)![0];
+
+  const invitee = await browser.newContext();
+  const p = await invitee.newPage();
+  await p.goto(link);
+  await expect(p.getByRole("heading", { name: "Set your password" })).toBeVisible();
+  await p.getByLabel("New password").fill("short");
+  await p.getByLabel("Repeat the password").fill("short");
+  await p.getByRole("button", { name: "Set password" }).click();
+  await expect(p.getByText("Use at least 10 characters")).toBeVisible();
+  await p.getByLabel("New password").fill("caddow-at-carrowby");
+  await p.getByLabel("Repeat the password").fill("caddow-at-carrowby");
+  await p.getByRole("button", { name: "Set password" }).click();
+  await expect(p.getByText("Your password is set. Sign in to continue.")).toBeVisible();
+  await signIn(p, "wynne.caddow@brackenfold.example", "caddow-at-carrowby");
+  await expect(p.getByRole("link", { name: "Briefings" })).toBeVisible();
+
+  // The link is spent.
+  await p.goto(link);
+  await expect(p.getByTestId("invite-problem")).toContainText("already been used");
+  await invitee.close();
+});
+
+test("a tampered invite link shows a clear page", async ({ page }) => {
+  await page.goto("/invite/this-is-not-a-real-invitation-token");
+  await expect(page.getByRole("heading", { name: "This link cannot be used" })).toBeVisible();
+  await expect(page.getByTestId("invite-problem")).toContainText("not valid");
+});
+
+test("deactivating a user stops their session at once", async ({ page, browser }) => {
+  const other = await browser.newContext();
+  const approverPage = await other.newPage();
+  await signIn(approverPage, "approver@brackenfold.example");
+
+  await signIn(page, "admin@brackenfold.example");
+  await page.goto("/admin/users");
+  const row = page.getByTestId("person-approver@brackenfold.example");
+  await row.getByRole("button", { name: "Deactivate" }).click();
+  const dialog = page.getByRole("dialog");
+  await expect(dialog).toContainText("signed out at once");
+  await dialog.getByRole("button", { name: "Deactivate" }).click();
+  await expect(row).toContainText("Deactivated");
+
+  await approverPage.reload();
+  await expect(approverPage).toHaveURL(/\/sign-in/);
+
+  await row.getByRole("button", { name: "Reactivate" }).click();
+  await expect(row).toContainText("Active");
+  await other.close();
+});
