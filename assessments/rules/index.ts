@@ -6,9 +6,10 @@ import { scoreNiosh, type NioshResult } from "./niosh";
 import { scoreComposite, type CompositeResult } from "./niosh-composite";
 import { scoreFilter, type FilterResult } from "./filter";
 import { scorePush, type PushResult } from "./push";
+import { scoreLift, type LiftResult } from "../lift-plan/lift";
 import { scoreRequestSchema, toIssues, type RequestIssue, type ScoreRequest } from "./request";
 
-export type ScoreResult = NioshResult | CompositeResult | FilterResult | PushResult;
+export type ScoreResult = NioshResult | CompositeResult | FilterResult | PushResult | LiftResult;
 
 export interface ScoreError {
   error: { message: string; issues: RequestIssue[] };
@@ -25,6 +26,8 @@ export function score(request: ScoreRequest): ScoreResult {
       return scoreFilter(request);
     case "push":
       return scorePush(request);
+    case "lift":
+      return scoreLift(request);
   }
 }
 

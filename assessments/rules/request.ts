@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { MAX_COMPOSITE_TASKS, MIN_COMPOSITE_TASKS } from "./niosh-composite";
 import { ZONES } from "./filter";
+import { liftRequestSchema } from "../lift-plan/request";
 
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
 const positive = () => finite().refine((x) => x > 0, "must be greater than 0");
@@ -84,6 +85,7 @@ export const scoreRequestSchema = z.discriminatedUnion("method", [
   compositeRequestSchema,
   filterRequestSchema,
   pushRequestSchema,
+  liftRequestSchema,
 ]);
 
 export type ScoreRequest = z.infer<typeof scoreRequestSchema>;

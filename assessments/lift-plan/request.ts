@@ -1,0 +1,56 @@
+/** The one zod schema for a lift plan, shared by the scoring CLI and API, the lift-plan form and the server. */
+import { z } from "zod";
+import { COMPLEX_FACTORS, type ComplexFactor } from "./lift";
+import { MAX_SLING_ANGLE_DEG } from "./sling";
+
+const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
+const mass = () => finite().refine((x) => x >= 0, "must not be negative");
+const positive = () => finite().refine((x) => x > 0, "must be greater than 0");
+const isoDate = () =>
+  z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD")
+    .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), "is not a real date");
+
+export const personSchema = z.strictObject({
+  name: z.string().trim().max(120),
+  competenceRef: z.string().trim().max(120),
+});
+
+export const examinationSchema = z.strictObject({
+  item: z.string().trim().min(1, "name the item").max(160),
+  kind: z.enum(["equipment", "accessory", "lifts-people"]),
+  lastExamined: isoDate(),
+  schemeDueDate: isoDate().optional(),
+});
+
+export const liftRequestSchema = z
+  .strictObject({
+    method: z.literal("lift"),
+    load: positive(),
+    riggingMass: mass(),
+    hookBlockMass: mass(),
+    ratedCapacity: positive(),
+    radiusM: mass().optional(),
+    maxRadiusM: positive().optional(),
+    sling: z.strictObject({
+      legs: z.number().int("must be a whole number").min(1, "a sling has 1 to 4 legs").max(4, "a sling has 1 to 4 legs"),
+      angleFromVerticalDeg: mass().refine((a) => a <= MAX_SLING_ANGLE_DEG, `must be at most ${MAX_SLING_ANGLE_DEG}° from vertical: wider angles are not permitted`),
+      legWll: positive(),
+      hitch: z.enum(["straight", "choked"]).optional(),
+    }),
+    factors: z.partialRecord(z.enum(Object.keys(COMPLEX_FACTORS) as [ComplexFactor, ...ComplexFactor[]]), z.boolean()).optional(),
+    examinations: z.array(examinationSchema).max(20).optional(),
+    liftDate: isoDate().optional(),
+    wind: z.strictObject({ inServiceLimitMs: positive(), forecastMs: mass(), largeSailArea: z.boolean().optional() }).optional(),
+    people: z
+      .strictObject({
+        appointedPerson: personSchema.optional(),
+        liftSupervisor: personSchema.optional(),
+        operator: personSchema.optional(),
+        slingerSignaller: personSchema.optional(),
+      })
+      .optional(),
+    exclusionZoneM: mass().optional(),
+    groundBearingNotes: z.string().max(2000).optional(),
+  });
