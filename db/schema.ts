@@ -151,6 +151,10 @@ export const revisions = pgTable(
     authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
     approverId: uuid("approver_id").references(() => users.id, { onDelete: "set null" }),
     returnComments: jsonb("return_comments"),
+    /** Each task's scored result as saved, with the rules version: an approved revision never changes. */
+    results: jsonb("results"),
+    /** The worst band of the tasks as saved (null while none is scored), for lists and filters. */
+    worstBand: text("worst_band"),
     contentHash: text("content_hash"),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
     approvedAt: timestamp("approved_at", { withTimezone: true }),

@@ -1,0 +1,174 @@
+/**
+ * Assessments and their revisions: create (blank or from a template), read for editing, save a
+ * draft (optimistic concurrency by version), submit. Every function checks the permission table and
+ * the organisation first; another organisation's record is "not found".
+ */
+import { createHash } from "node:crypto";
+import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { z } from "zod";
+import { getDb } from "@/db/client";
+import { assessments, components, jobs, revisions, users } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { AppError, parseOrThrow } from "@/lib/errors";
+import { authorize, type Actor } from "@/lib/permissions";
+import { contentSchema, emptyContent, type Content } from "../method-statement/content";
+import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
+import { findTemplate } from "../method-statement/templates";
+
+export const createAssessmentSchema = z.object({
+  jobId: z.uuid("Choose a job"),
+  title: z.string().trim().min(3, "Give the assessment a title").max(200, "Use at most 200 characters"),
+  templateId: z.string().max(60).optional(),
+});
+
+export const saveRevisionSchema = z.object({
+  version: z.number().int().min(1),
+  content: contentSchema,
+});
+
+export const submitRevisionSchema = z.object({
+  version: z.number().int().min(1),
+  approverId: z.uuid("Choose an approver"),
+  reviewDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Choose a review date"),
+});
+
+export function contentHash(content: unknown): string {
+  return createHash("sha256").update(JSON.stringify(content)).digest("hex");
+}
+
+async function register(organisationId: string): Promise<RegisterEntry[]> {
+  const db = await getDb();
+  return db
+    .select({ id: components.id, name: components.name, massKg: components.massKg, grip: components.grip, massSource: components.massSource })
+    .from(components)
+    .where(eq(components.organisationId, organisationId))
+    .orderBy(asc(components.name));
+}
+
+export async function listAssessments(actor: Actor | null) {
+  authorize(actor, "assessments:read");
+  const db = await getDb();
+  // The latest revision of each assessment.
+  const latest = db
+    .select({ assessmentId: revisions.assessmentId, number: sql<number>`max(${revisions.number})`.as("latest_number") })
+    .from(revisions)
+    .where(eq(revisions.organisationId, actor.organisationId))
+    .groupBy(revisions.assessmentId)
+    .as("latest");
+  return db
+    .select({
+      assessmentId: assessments.id,
+      title: assessments.title,
+      jobName: jobs.name,
+      revisionId: revisions.id,
+      number: revisions.number,
+      status: revisions.status,
+      worstBand: revisions.worstBand,
+      updatedAt: revisions.updatedAt,
+      authorName: users.name,
+    })
+    .from(assessments)
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .innerJoin(latest, eq(latest.assessmentId, assessments.id))
+    .innerJoin(revisions, and(eq(revisions.assessmentId, assessments.id), eq(revisions.number, latest.number)))
+    .leftJoin(users, eq(users.id, revisions.authorId))
+    .where(eq(assessments.organisationId, actor.organisationId))
+    .orderBy(desc(revisions.updatedAt));
+}
+
+export async function createAssessment(actor: Actor | null, input: unknown): Promise<{ assessmentId: string; revisionId: string }> {
+  authorize(actor, "assessments:write");
+  const data = parseOrThrow(createAssessmentSchema, input);
+  const db = await getDb();
+  const job = await db.query.jobs.findFirst({ where: eq(jobs.id, data.jobId) });
+  if (!job || job.organisationId !== actor.organisationId)
+    throw new AppError("validation", "Some fields need attention", [{ path: "jobId", message: "Choose one of your jobs" }]);
+  let content: Content = emptyContent();
+  if (data.templateId) {
+    const template = findTemplate(data.templateId);
+    if (!template) throw new AppError("validation", "Some fields need attention", [{ path: "templateId", message: "Unknown template" }]);
+    const entries = await register(actor.organisationId);
+    content = template.build((name) => entries.find((e) => e.name === name)?.id ?? null);
+  }
+  content.emergency.nearestHospital ||= job.nearestHospital ?? "";
+  content.emergency.arrangements ||= job.emergencyArrangements ?? "";
+  const review = reviewContent(content, await register(actor.organisationId));
+  return db.transaction(async (tx) => {
+    const [assessment] = await tx.insert(assessments).values({ organisationId: actor.organisationId, jobId: job.id, title: data.title, createdBy: actor.id }).returning();
+    const [revision] = await tx
+      .insert(revisions)
+      .values({ organisationId: actor.organisationId, assessmentId: assessment.id, number: 1, content, authorId: actor.id, results: review.scores, worstBand: review.worstBand })
+      .returning();
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "assessment.created", entityType: "revision", entityId: revision.id, contentHash: contentHash(content), details: { templateId: data.templateId ?? null } });
+    return { assessmentId: assessment.id, revisionId: revision.id };
+  });
+}
+
+/** A revision with its assessment, job and the organisation's load register. */
+export async function getRevision(actor: Actor | null, revisionId: string) {
+  authorize(actor, "assessments:read");
+  if (!z.uuid().safeParse(revisionId).success) throw AppError.notFound("Revision");
+  const db = await getDb();
+  const [row] = await db
+    .select({ revision: revisions, assessment: assessments, job: jobs })
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .where(eq(revisions.id, revisionId));
+  if (!row || row.revision.organisationId !== actor.organisationId) throw AppError.notFound("Revision");
+  const content = contentSchema.parse(row.revision.content);
+  return { ...row, content, register: await register(actor.organisationId) };
+}
+
+/** Saves a draft. A stale version answers 409 and nothing is written; so does a locked revision. */
+export async function saveRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ version: number; worstBand: string | null }> {
+  authorize(actor, "assessments:write");
+  const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
+  const current = await getRevision(actor, revisionId);
+  if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
+  const review = reviewContent(data.content, current.register);
+  const db = await getDb();
+  const [saved] = await db
+    .update(revisions)
+    .set({ content: data.content, results: review.scores, worstBand: review.worstBand, version: data.version + 1, updatedAt: new Date() })
+    .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.status, "draft")))
+    .returning({ version: revisions.version });
+  if (!saved) throw new AppError("conflict", "Someone else saved this draft after you opened it. Your changes are kept on screen: copy what you need, then reload.");
+  return { version: saved.version, worstBand: review.worstBand };
+}
+
+export async function listApprovers(actor: Actor | null) {
+  authorize(actor, "assessments:submit");
+  const db = await getDb();
+  return db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "approver"), eq(users.active, true)))
+    .orderBy(asc(users.name));
+}
+
+/** Submits a complete draft to a named approver; refused (422) while anything required is missing. */
+export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<void> {
+  authorize(actor, "assessments:submit");
+  const data = parseOrThrow(submitRevisionSchema, input);
+  const current = await getRevision(actor, revisionId);
+  if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
+  if (current.revision.version !== data.version) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
+  const review = reviewContent(current.content, current.register);
+  if (!review.canSubmit)
+    throw new AppError("validation", "The assessment is not complete", review.missing.map((m) => ({ path: m.step, message: m.message })));
+  const db = await getDb();
+  const approver = await db.query.users.findFirst({ where: eq(users.id, data.approverId) });
+  if (!approver || approver.organisationId !== actor.organisationId || approver.role !== "approver" || !approver.active)
+    throw new AppError("validation", "Some fields need attention", [{ path: "approverId", message: "Choose an active approver of your organisation" }]);
+  const hash = contentHash(current.content);
+  await db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(revisions)
+      .set({ status: "submitted", approverId: approver.id, reviewDate: data.reviewDate, submittedAt: new Date(), contentHash: hash, results: review.scores, worstBand: review.worstBand, updatedAt: new Date() })
+      .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.status, "draft")))
+      .returning({ id: revisions.id });
+    if (!updated) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.submitted", entityType: "revision", entityId: revisionId, contentHash: hash, details: { approverId: approver.id } });
+  });
+}
