@@ -60,3 +60,16 @@ export const DEMO_COMPONENTS: { name: string; massKg: number; lengthMm: number; 
   { name: "Axle counter head kit", massKg: 6, lengthMm: 400, widthMm: 300, heightMm: 200, grip: "good", massSource: "datasheet" },
   { name: "Route marker post", massKg: 12, lengthMm: 1200, widthMm: 100, heightMm: 100, grip: "fair", massSource: "estimated" },
 ];
+
+/** The demo lift team (invented people; competence references in an invented scheme). */
+export const DEMO_LIFT_TEAM = {
+  appointedPerson: { name: "Gwenllian Marsh", competenceRef: "LFT-AP-2291" },
+  liftSupervisor: { name: "Tobias Renwick", competenceRef: "LFT-SV-4410" },
+  operator: { name: "Kit Abernethy", competenceRef: "LFT-OP-7783" },
+  slingerSignaller: { name: "Priya Holloway", competenceRef: "LFT-SS-1207" },
+};
+export const DEMO_LIFT_DATE = "2027-01-20";
+export const DEMO_EXAMINATIONS = [
+  { item: "Lorry-loader crane HV-LL2", kind: "equipment" as const, lastExamined: "2026-06-15" },
+  { item: "Chain slings, set 14", kind: "accessory" as const, lastExamined: "2026-10-02" },
+];

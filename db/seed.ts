@@ -4,15 +4,17 @@
  */
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/passwords";
-import type { Db } from "./client";
-import { DEMO_COMPONENTS, DEMO_JOBS, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
+import { getDb, type Db } from "./client";
+import { DEMO_COMPONENTS, DEMO_EXAMINATIONS, DEMO_JOBS, DEMO_LIFT_DATE, DEMO_LIFT_TEAM, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
+
+const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 import { components, jobs, organisations, users } from "./schema";
 
 export async function seedDemo(db: Db): Promise<{ created: boolean; organisationId: string }> {
   const existing = await db.query.organisations.findFirst({ where: eq(organisations.name, DEMO_ORGANISATION) });
   if (existing) return { created: false, organisationId: existing.id };
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const [org] = await tx.insert(organisations).values({ name: DEMO_ORGANISATION }).returning();
     const people = await tx
       .insert(users)
@@ -23,4 +25,38 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
     await tx.insert(components).values(DEMO_COMPONENTS.map((c) => ({ ...c, organisationId: org.id })));
     return { created: true, organisationId: org.id };
   });
+  if (result.created) await seedDemoAssessments(result.organisationId);
+  return result;
+}
+
+/**
+ * Two demo assessments: a crane job ready to submit (one standard and one complex lift, with the
+ * lift team and examinations filled in) and a by-hand job left as a draft.
+ */
+async function seedDemoAssessments(organisationId: string) {
+  const { createAssessment, getRevision, saveRevision } = await import("@/assessments/revisions/service");
+  const db = await getDb();
+  const [adviserRow] = await db.select().from(users).where(eq(users.email, DEMO_ADVISER_EMAIL));
+  const adviser = { id: adviserRow.id, organisationId, role: adviserRow.role, name: adviserRow.name, email: adviserRow.email };
+  const jobRows = await db.select().from(jobs).where(eq(jobs.organisationId, organisationId));
+  const hollinVale = jobRows.find((j) => j.name === DEMO_JOBS[0].name)!;
+  const carrowby = jobRows.find((j) => j.name === DEMO_JOBS[1].name)!;
+  const crane = await createAssessment(adviser, { jobId: hollinVale.id, title: "Cabinet and chamber ring by lorry-loader crane", templateId: "cabinet-crane" });
+  const current = await getRevision(adviser, crane.revisionId);
+  const content = structuredClone(current.content);
+  const team = DEMO_LIFT_TEAM;
+  for (const task of content.tasks) {
+    if (!task.lift) continue;
+    task.lift.liftDate = DEMO_LIFT_DATE;
+    task.lift.people = team;
+    task.lift.examinations = DEMO_EXAMINATIONS;
+  }
+  content.people.roles = [
+    { role: "Appointed person", name: team.appointedPerson.name, competence: team.appointedPerson.competenceRef },
+    { role: "Lift supervisor", name: team.liftSupervisor.name, competence: team.liftSupervisor.competenceRef },
+    { role: "Crane operator", name: team.operator.name, competence: team.operator.competenceRef },
+    { role: "Slinger/signaller", name: team.slingerSignaller.name, competence: team.slingerSignaller.competenceRef },
+  ];
+  await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
+  await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base by hand at Carrowby", templateId: "equipment-base" });
 }

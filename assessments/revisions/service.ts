@@ -14,23 +14,7 @@ import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
-
-export const createAssessmentSchema = z.object({
-  jobId: z.uuid("Choose a job"),
-  title: z.string().trim().min(3, "Give the assessment a title").max(200, "Use at most 200 characters"),
-  templateId: z.string().max(60).optional(),
-});
-
-export const saveRevisionSchema = z.object({
-  version: z.number().int().min(1),
-  content: contentSchema,
-});
-
-export const submitRevisionSchema = z.object({
-  version: z.number().int().min(1),
-  approverId: z.uuid("Choose an approver"),
-  reviewDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Choose a review date"),
-});
+import { createAssessmentSchema, saveRevisionSchema, submitRevisionSchema } from "./schemas";
 
 export function contentHash(content: unknown): string {
   return createHash("sha256").update(JSON.stringify(content)).digest("hex");

@@ -1,0 +1,229 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useMemo, useState } from "react";
+import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
+import type { z } from "zod";
+import { SlingDiagram } from "@/app/_components/drawings/sling-diagram";
+import { FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
+import { TaskResult } from "@/app/_components/results/task-result";
+import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
+import { scoreTask } from "@/assessments/method-statement/score-task";
+import { COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
+
+type Plan = z.infer<typeof liftPlanInputsSchema>;
+
+const ROLES = [
+  ["appointedPerson", "Appointed person"],
+  ["liftSupervisor", "Lift supervisor"],
+  ["operator", "Operator"],
+  ["slingerSignaller", "Slinger/signaller"],
+] as const;
+
+function messageAt(errors: Record<string, unknown>, path: string): string | undefined {
+  let node: unknown = errors;
+  for (const part of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[part];
+  return (node as { message?: string } | undefined)?.message;
+}
+
+interface Props {
+  revisionId: string;
+  taskId: string;
+  version: number;
+  content: Content;
+  load: number | null;
+  editable: boolean;
+}
+
+export function LiftPlanForm({ revisionId, taskId, version, content, load, editable }: Props) {
+  const router = useRouter();
+  const task = content.tasks.find((t) => t.id === taskId)!;
+  const { register, handleSubmit, control, formState } = useForm<Plan>({
+    resolver: zodResolver(liftPlanInputsSchema) as Resolver<Plan>,
+    defaultValues: task.lift,
+    mode: "onChange",
+  });
+  const exams = useFieldArray({ control, name: "examinations" });
+  const plan = useWatch({ control }) as Plan;
+  const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
+  const errors = formState.errors as Record<string, unknown>;
+
+  const score = useMemo(() => {
+    const parsed = liftPlanInputsSchema.safeParse(plan);
+    return parsed.success && load !== null ? scoreTask({ ...task, lift: parsed.data }, { id: "c", name: "", massKg: load / (task.quantity || 1), grip: "poor", massSource: "datasheet" }) : null;
+  }, [plan, load, task]);
+
+  const num = (name: string, label: string, unit?: string, optional = false) => {
+    const error = messageAt(errors, name);
+    return (
+      <div>
+        <label htmlFor={`lp-${name}`} className="block text-sm font-bold">
+          {label}
+          {unit && <span className="font-normal text-muted"> ({unit})</span>}
+        </label>
+        <input
+          id={`lp-${name}`}
+          type="number"
+          step="any"
+          inputMode="decimal"
+          disabled={!editable}
+          aria-invalid={error ? true : undefined}
+          className={`mt-1 block w-full rounded border bg-white px-2 py-1.5 ${error ? "border-danger" : "border-rule"}`}
+          {...register(name as "riggingMass", { setValueAs: (v: string | number) => (v === "" ? (optional ? undefined : Number.NaN) : Number(v)) })}
+        />
+        {error && (
+          <p role="alert" className="mt-0.5 text-xs font-bold text-danger">
+            {error}
+          </p>
+        )}
+      </div>
+    );
+  };
+  // Optional dates are left out when blank rather than sent as "".
+  const text = (name: string, label: string, optional = false) => (
+    <div>
+      <label htmlFor={`lp-${name}`} className="block text-sm font-bold">
+        {label}
+      </label>
+      <input id={`lp-${name}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(name as "groundBearingNotes", optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined)} />
+      {messageAt(errors, name) && <p role="alert" className="mt-0.5 text-xs font-bold text-danger">{messageAt(errors, name)}</p>}
+    </div>
+  );
+
+  const onSave = handleSubmit(async (values) => {
+    setOutcome(null);
+    const next: Content = { ...content, tasks: content.tasks.map((t) => (t.id === taskId ? { ...t, lift: values } : t)) };
+    const res = await fetch(`/api/v1/revisions/${revisionId}`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ version, content: next }) });
+    const body = await res.json();
+    if (res.ok) {
+      setOutcome({ tone: "success", text: "Lift plan saved." });
+      router.refresh();
+    } else if (res.status === 409) setOutcome({ tone: "error", text: `Not saved: ${body.error.message}` });
+    else setOutcome({ tone: "error", text: body.error?.message ?? "Could not save." });
+  });
+
+  return (
+    <form onSubmit={onSave} noValidate className="grid gap-4 lg:grid-cols-[1fr_minmax(0,26rem)]" aria-label="Lift plan">
+      <div className="space-y-4">
+        <fieldset className="grid grid-cols-2 gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-3">
+          <legend className="px-1 font-bold">Machine and load</legend>
+          {num("ratedCapacity", "Rated capacity at the radius", "kg")}
+          {num("radiusM", "Planned radius", "m", true)}
+          {num("maxRadiusM", "Maximum radius", "m", true)}
+          {num("riggingMass", "Rigging", "kg")}
+          {num("hookBlockMass", "Hook block", "kg")}
+          {num("exclusionZoneM", "Exclusion zone radius", "m", true)}
+        </fieldset>
+        <fieldset className="grid grid-cols-2 gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-4">
+          <legend className="px-1 font-bold">Sling</legend>
+          <div>
+            <label htmlFor="lp-legs" className="block text-sm font-bold">
+              Legs
+            </label>
+            <select id="lp-legs" disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register("sling.legs", { valueAsNumber: true })}>
+              {[1, 2, 3, 4].map((n) => (
+                <option key={n} value={n}>
+                  {n}
+                </option>
+              ))}
+            </select>
+          </div>
+          {num("sling.angleFromVerticalDeg", "Angle from vertical", "°")}
+          {num("sling.legWll", "WLL per leg", "kg")}
+          <div>
+            <label htmlFor="lp-hitch" className="block text-sm font-bold">
+              Hitch
+            </label>
+            <select id="lp-hitch" disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register("sling.hitch")}>
+              <option value="straight">Straight</option>
+              <option value="choked">Choked</option>
+            </select>
+          </div>
+        </fieldset>
+        <fieldset className="rounded-lg border border-rule bg-white p-3">
+          <legend className="px-1 font-bold">What makes this lift complex</legend>
+          <div className="grid gap-1 sm:grid-cols-2">
+            {(Object.keys(COMPLEX_FACTORS) as ComplexFactor[]).map((f) => (
+              <label key={f} className="flex items-center gap-2 text-sm">
+                <input type="checkbox" disabled={!editable} className="h-5 w-5" {...register(`factors.${f}`)} />
+                {COMPLEX_FACTORS[f][0].toUpperCase() + COMPLEX_FACTORS[f].slice(1)}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+        <fieldset className="space-y-2 rounded-lg border border-rule bg-white p-3">
+          <legend className="px-1 font-bold">Thorough examinations (LOLER reg. 9)</legend>
+          <div className="max-w-xs">{text("liftDate", "Planned lift date (YYYY-MM-DD)", true)}</div>
+          {exams.fields.map((field, i) => (
+            <div key={field.id} className="grid items-end gap-2 sm:grid-cols-[1fr_10rem_9rem_9rem_auto]">
+              {text(`examinations.${i}.item`, "Item")}
+              <div>
+                <label htmlFor={`lp-ex-kind-${i}`} className="block text-sm font-bold">
+                  Kind
+                </label>
+                <select id={`lp-ex-kind-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`examinations.${i}.kind`)}>
+                  <option value="equipment">Lifting equipment</option>
+                  <option value="accessory">Accessory</option>
+                  <option value="lifts-people">Lifts people</option>
+                </select>
+              </div>
+              {text(`examinations.${i}.lastExamined`, "Last examined")}
+              {text(`examinations.${i}.schemeDueDate`, "Scheme due (optional)", true)}
+              {editable && (
+                <SecondaryButton type="button" aria-label={`Remove examination ${i + 1}`} onClick={() => exams.remove(i)}>
+                  ✕
+                </SecondaryButton>
+              )}
+            </div>
+          ))}
+          {editable && (
+            <SecondaryButton type="button" onClick={() => exams.append({ item: "", kind: "accessory", lastExamined: "" })}>
+              Add an examination record
+            </SecondaryButton>
+          )}
+        </fieldset>
+        <fieldset className="grid grid-cols-2 gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-3">
+          <legend className="px-1 font-bold">Wind</legend>
+          {num("wind.inServiceLimitMs", "Maker's in-service limit", "m/s")}
+          {num("wind.forecastMs", "Forecast", "m/s")}
+          <label className="flex items-center gap-2 self-end pb-2 text-sm font-bold">
+            <input type="checkbox" disabled={!editable} className="h-5 w-5" {...register("wind.largeSailArea")} /> Large sail area
+          </label>
+        </fieldset>
+        <fieldset className="grid gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2">
+          <legend className="px-1 font-bold">People (BS 7121)</legend>
+          {ROLES.map(([key, label]) => (
+            <div key={key} className="grid grid-cols-2 gap-2">
+              {text(`people.${key}.name`, label)}
+              {text(`people.${key}.competenceRef`, "Competence record")}
+            </div>
+          ))}
+        </fieldset>
+        <div className="rounded-lg border border-rule bg-white p-3">{text("groundBearingNotes", "Ground bearing and outrigger notes")}</div>
+        {outcome && <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>}
+        {editable && (
+          <PrimaryButton type="submit" disabled={formState.isSubmitting}>
+            {formState.isSubmitting ? "Saving…" : "Save lift plan"}
+          </PrimaryButton>
+        )}
+      </div>
+      <div className="space-y-3">
+        {score?.results.lift ? (
+          <>
+            <SlingDiagram
+              legs={score.results.lift.inputs.sling.legs}
+              angleDeg={score.results.lift.inputs.sling.angleFromVerticalDeg}
+              tension={score.results.lift.legTension}
+              legWll={score.results.lift.inputs.sling.legWll}
+              load={score.results.lift.slingLoad}
+            />
+            <TaskResult score={score} />
+          </>
+        ) : (
+          <p className="rounded-lg border border-dashed border-rule bg-white p-4 text-muted">{load === null ? "Choose the component first." : "Complete the highlighted fields to see the result."}</p>
+        )}
+      </div>
+    </form>
+  );
+}

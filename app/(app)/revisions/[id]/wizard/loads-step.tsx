@@ -1,0 +1,188 @@
+"use client";
+
+import Link from "next/link";
+import { useMemo } from "react";
+import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
+import { HandZonesDrawing } from "@/app/_components/drawings/hand-zones";
+import { SecondaryButton } from "@/app/_components/form";
+import { TaskResult } from "@/app/_components/results/task-result";
+import { OPERATION_LABELS, OPERATIONS, type Content, type Operation, type Task } from "@/assessments/method-statement/content";
+import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
+import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
+import { Check, Choice, Num, Text } from "./fields";
+import { WhatIfChart } from "./what-if-chart";
+
+const SEX = [["male", "Men"], ["female", "Women"]] as const;
+const REACH = [["close", "Close to the body"], ["extended", "At arm's length"]] as const;
+const COUPLING = [["good", "Good"], ["fair", "Fair"], ["poor", "Poor"]] as const;
+const ZONE_OPTIONS = ZONES.map((z) => [z, ZONE_LABELS[z]] as const);
+
+/** Inputs a new operation needs, filled with typical values the adviser then changes. */
+export function defaultsFor(operation: Operation, component: RegisterEntry | undefined): Partial<Task> {
+  const coupling = component?.grip ?? "fair";
+  const filter = { sex: "male" as const, zone: "knuckle-to-elbow" as const, reach: "close" as const, frequency: 0.5, twistDeg: 0, teamSize: 1 };
+  switch (operation) {
+    case "lift":
+      return { niosh: { origin: { h: 30, v: 40, a: 0 }, destination: { h: 30, v: 100, a: 0 }, frequency: 0.5, durationHours: 1, coupling, controlAtDestination: false }, filter };
+    case "team-lift":
+      return { filter: { ...filter, teamSize: 2 } };
+    case "carry":
+      return { filter: { ...filter, carryDistanceM: 10, durationHours: 1 } };
+    case "push":
+      return { push: { mass: (component?.massKg ?? 0) + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20 } };
+    case "equipment":
+      return {
+        lift: { riggingMass: 20, hookBlockMass: 15, ratedCapacity: 1000, sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" }, factors: {}, examinations: [], people: {} },
+      };
+  }
+}
+
+function TaskEditor({ index, register, revisionId, onRemove }: { index: number; register: RegisterEntry[]; revisionId: string; onRemove: () => void }) {
+  const { setValue, getValues, register: reg } = useFormContext<Content>();
+  const task = useWatch<Content, `tasks.${number}`>({ name: `tasks.${index}` }) as Task;
+  const component = register.find((c) => c.id === task.componentId);
+  const score = useMemo(() => scoreTask(task, component), [task, component]);
+  const p = `tasks.${index}` as const;
+
+  const onOperation = (operation: Operation) => {
+    const current = getValues(p);
+    const defaults = defaultsFor(operation, component);
+    for (const [key, value] of Object.entries(defaults)) {
+      if (!current[key as keyof Task]) setValue(`${p}.${key}` as `tasks.${number}.niosh`, value as Task["niosh"], { shouldValidate: true });
+    }
+  };
+
+  return (
+    <article className="rounded-lg border border-rule bg-paper p-3" aria-label={`Task ${index + 1}`} data-testid={`task-${index}`}>
+      <div className="flex flex-wrap items-start justify-between gap-2">
+        <h3 className="text-lg font-bold">Task {index + 1}</h3>
+        <SecondaryButton type="button" onClick={onRemove}>
+          Remove task
+        </SecondaryButton>
+      </div>
+      <div className="mt-2 grid gap-4 lg:grid-cols-[1fr_minmax(0,26rem)]">
+        <div className="space-y-3">
+          <Text name={`${p}.description`} label="What is done" />
+          <div className="grid gap-3 sm:grid-cols-[1fr_6rem]">
+            <div>
+              <label htmlFor={`f-${p}.componentId`} className="block text-sm font-bold">
+                Component
+              </label>
+              <select
+                id={`f-${p}.componentId`}
+                className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+                {...reg(`${p}.componentId`, { setValueAs: (v: string) => (v === "" ? null : v) })}
+              >
+                <option value="">Choose from the load register…</option>
+                {register.map((c) => (
+                  <option key={c.id} value={c.id}>
+                    {c.name} — {c.massKg} kg{c.massSource === "estimated" ? " (estimated)" : ""}
+                  </option>
+                ))}
+              </select>
+            </div>
+            <Num name={`${p}.quantity`} label="How many" step="1" />
+          </div>
+          <div>
+            <label htmlFor={`f-${p}.operation`} className="block text-sm font-bold">
+              Operation
+            </label>
+            <select
+              id={`f-${p}.operation`}
+              className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+              {...reg(`${p}.operation`, { onChange: (e) => onOperation(e.target.value as Operation) })}
+            >
+              {OPERATIONS.map((o) => (
+                <option key={o} value={o}>
+                  {OPERATION_LABELS[o]}
+                </option>
+              ))}
+            </select>
+          </div>
+
+          {task.operation === "lift" && task.niosh && (
+            <fieldset className="space-y-2 rounded border border-rule p-2">
+              <legend className="px-1 text-sm font-bold">Hand positions (metric)</legend>
+              <div className="grid grid-cols-3 gap-2">
+                <Num name={`${p}.niosh.origin.h`} label="H at start" unit="cm" />
+                <Num name={`${p}.niosh.origin.v`} label="V at start" unit="cm" />
+                <Num name={`${p}.niosh.origin.a`} label="Twist at start" unit="°" />
+                <Num name={`${p}.niosh.destination.h`} label="H at end" unit="cm" />
+                <Num name={`${p}.niosh.destination.v`} label="V at end" unit="cm" />
+                <Num name={`${p}.niosh.destination.a`} label="Twist at end" unit="°" />
+                <Num name={`${p}.niosh.frequency`} label="Lifts a minute" />
+                <Num name={`${p}.niosh.durationHours`} label="Duration" unit="h" />
+                <Choice name={`${p}.niosh.coupling`} label="Grip" options={COUPLING} />
+              </div>
+              <Check name={`${p}.niosh.controlAtDestination`} label="The load must be placed carefully at the end" />
+            </fieldset>
+          )}
+          {task.filter && task.operation !== "push" && task.operation !== "equipment" && (
+            <fieldset className="space-y-2 rounded border border-rule p-2">
+              <legend className="px-1 text-sm font-bold">Guideline weights</legend>
+              <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
+                <Choice name={`${p}.filter.sex`} label="Figures for" options={SEX} />
+                <Choice name={`${p}.filter.zone`} label="Hands between" options={ZONE_OPTIONS} />
+                <Choice name={`${p}.filter.reach`} label="Reach" options={REACH} />
+                {task.operation !== "lift" && <Num name={`${p}.filter.frequency`} label="Times a minute" />}
+                {task.operation !== "lift" && <Num name={`${p}.filter.twistDeg`} label="Twist" unit="°" />}
+                {task.operation !== "lift" && <Num name={`${p}.filter.teamSize`} label="People" step="1" />}
+                {task.operation === "carry" && <Num name={`${p}.filter.carryDistanceM`} label="Carried" unit="m" optional />}
+                {task.operation === "carry" && <Num name={`${p}.filter.durationHours`} label="Hours of carrying" unit="h" optional />}
+              </div>
+            </fieldset>
+          )}
+          {task.operation === "push" && task.push && (
+            <fieldset className="space-y-2 rounded border border-rule p-2">
+              <legend className="px-1 text-sm font-bold">Trolley, barrow or wheeled case</legend>
+              <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
+                <Num name={`${p}.push.mass`} label="Loaded mass" unit="kg" />
+                <Num name={`${p}.push.gradient`} label="Gradient" unit="rise ÷ run" />
+                <Num name={`${p}.push.rollingCoefficient`} label="Rolling resistance" unit="optional" optional />
+                <Choice name={`${p}.push.sex`} label="Figures for" options={SEX} />
+                <Num name={`${p}.push.teamSize`} label="People" step="1" />
+                <Num name={`${p}.push.distanceM`} label="Distance" unit="m" optional />
+                <Num name={`${p}.push.measuredForceN`} label="Measured force" unit="N, optional" optional />
+              </div>
+            </fieldset>
+          )}
+          {task.operation === "equipment" && (
+            <p className="rounded border border-rule bg-white p-2 text-sm">
+              A lift with equipment needs a lift plan.{" "}
+              <Link href={`/revisions/${revisionId}/lifts/${task.id}`} className="font-bold text-accent underline">
+                Open the lift plan
+              </Link>{" "}
+              (your changes here are saved first).
+            </p>
+          )}
+          {task.operation !== "equipment" && <WhatIfChart task={task} component={component} />}
+        </div>
+        <div className="space-y-3">
+          <TaskResult score={score} />
+          {(task.operation === "lift" || task.filter) && task.operation !== "push" && task.operation !== "equipment" && (
+            <HandZonesDrawing highlight={task.filter?.zone} />
+          )}
+        </div>
+      </div>
+    </article>
+  );
+}
+
+export function LoadsStep({ register, revisionId }: { register: RegisterEntry[]; revisionId: string }) {
+  const { control } = useFormContext<Content>();
+  const { fields, append, remove } = useFieldArray({ control, name: "tasks" });
+  return (
+    <div className="space-y-4">
+      <p className="text-sm text-muted">Each handling task is scored as you type, by the same rules that score it when the draft is saved.</p>
+      {fields.map((field, i) => (
+        <TaskEditor key={field.id} index={i} register={register} revisionId={revisionId} onRemove={() => remove(i)} />
+      ))}
+      <SecondaryButton
+        type="button"
+        onClick={() => append({ id: `t-${crypto.randomUUID().slice(0, 8)}`, description: "", componentId: null, quantity: 1, operation: "lift", ...defaultsFor("lift", undefined) })}
+      >
+        Add a handling task
+      </SecondaryButton>
+    </div>
+  );
+}

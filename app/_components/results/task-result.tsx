@@ -1,0 +1,140 @@
+import { adviceForClear } from "@/assessments/method-statement/advice";
+import type { TaskScore } from "@/assessments/method-statement/score-task";
+import { fmt } from "@/assessments/rules/format";
+import type { Reason, Warning } from "@/assessments/rules/types";
+import { SAFETY_CAUTION } from "../safety-caution";
+import { BAND_MEANINGS, BandChip } from "./band";
+
+function Factors({ rows }: { rows: [string, string][] }) {
+  return (
+    <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5 text-sm tabular-nums">
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="text-muted">{k}</dt>
+          <dd className="font-bold">{v}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+function Reasons({ reasons, warnings }: { reasons: Reason[]; warnings: Warning[] }) {
+  return (
+    <>
+      {warnings.length > 0 && (
+        <ul className="mt-2 space-y-1 text-sm">
+          {warnings.map((w, i) => (
+            <li key={i} className="rounded border-l-4 border-band-act bg-orange-50 px-2 py-1">
+              <strong>Out of range:</strong> {w.message}
+            </li>
+          ))}
+        </ul>
+      )}
+      <ul className="mt-2 space-y-1 text-sm">
+        {reasons.map((r, i) => (
+          <li key={i}>
+            {r.text} <span className="block text-xs text-muted">Source: {r.source}</span>
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}
+
+const f = (x: number | null | undefined, dp: 0 | 1 | 2 = 2) => (x === null || x === undefined ? "—" : fmt(x, dp));
+
+/** Everything a task's score says: band, index, each factor, reasons with sources, warnings, advice. */
+export function TaskResult({ score }: { score: TaskScore }) {
+  const { niosh, filter, push, lift } = score.results;
+  const advice = adviceForClear(score);
+  return (
+    <section aria-label="Result" data-testid="task-result" className="rounded-lg border border-rule bg-white p-3">
+      <div className="flex flex-wrap items-center gap-3">
+        <BandChip band={score.band} large />
+        {score.band && <span className="text-sm text-muted">{BAND_MEANINGS[score.band]}</span>}
+      </div>
+      {score.load !== null && (
+        <p className="mt-2 text-sm">
+          Load <strong className="tabular-nums">{f(score.load)} kg</strong>
+          {score.estimatedMass && <span className="ml-2 rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">Estimated mass — confirm by weighing</span>}
+        </p>
+      )}
+      {score.incomplete.length > 0 && (
+        <ul className="mt-2 list-disc pl-5 text-sm text-muted">
+          {score.incomplete.map((m) => (
+            <li key={m}>To score this task: {m}.</li>
+          ))}
+        </ul>
+      )}
+      {niosh && (
+        <div className="mt-3">
+          <h4 className="font-bold">Revised NIOSH Lifting Equation</h4>
+          <Factors
+            rows={[
+              ["Lifting index", f(niosh.li)],
+              ["RWL (kg)", f(niosh.limit)],
+              ["HM · VM · DM", `${f(niosh.origin.hm)} · ${f(niosh.origin.vm)} · ${f(niosh.origin.dm)}`],
+              ["AM · FM · CM", `${f(niosh.origin.am)} · ${f(niosh.origin.fm)} · ${f(niosh.origin.cm)}`],
+              ...(niosh.destination ? ([["At destination: RWL · LI", `${f(niosh.destination.rwl)} kg · ${f(niosh.destination.li)}`]] as [string, string][]) : []),
+            ]}
+          />
+          <Reasons reasons={niosh.reasons} warnings={niosh.warnings} />
+        </div>
+      )}
+      {filter && (
+        <div className="mt-3">
+          <h4 className="font-bold">Guideline weights{filter.inputs.teamSize > 1 ? ", team handling" : ""}{filter.inputs.carryDistanceM ? ", carrying" : ""}</h4>
+          <Factors
+            rows={[
+              ["Index", f(filter.index)],
+              ["Guideline (kg)", f(filter.guideline)],
+              ["Table figure (kg)", f(filter.baseGuideline)],
+              ["Kept after reductions", `${f(filter.reductionFactor * 100, 0)} %`],
+              ...(filter.inputs.teamSize > 1 ? ([["Each person carries (kg)", f(filter.perPersonLoad)]] as [string, string][]) : []),
+              ...(filter.cumulativeMassKg !== null ? ([["Mass per shift (kg)", f(filter.cumulativeMassKg, 0)]] as [string, string][]) : []),
+            ]}
+          />
+          <Reasons reasons={filter.reasons} warnings={filter.warnings} />
+        </div>
+      )}
+      {push && (
+        <div className="mt-3">
+          <h4 className="font-bold">Pushing and pulling</h4>
+          <Factors
+            rows={[
+              ["Index", f(push.index)],
+              ["To start (N)", `${f(push.startForceN, 0)} of ${f(push.guidelineStartN, 0)}`],
+              ["To keep moving (N)", `${f(push.sustainedForceN, 0)} of ${f(push.guidelineSustainedN, 0)}`],
+            ]}
+          />
+          <Reasons reasons={push.reasons} warnings={push.warnings} />
+        </div>
+      )}
+      {lift && (
+        <div className="mt-3">
+          <h4 className="font-bold">Lift plan — category {lift.category}</h4>
+          <Factors
+            rows={[
+              ["Hook load (kg)", f(lift.hookLoad)],
+              ["Utilisation", `${f(lift.utilisation * 100, 0)} %`],
+              ["Leg tension (kg)", f(lift.legTension)],
+              ["Sling rated (kg)", `${f(lift.slingWll)} ${lift.slingOk ? "— passes" : "— FAILS"}`],
+            ]}
+          />
+          <Reasons reasons={lift.reasons} warnings={lift.warnings} />
+        </div>
+      )}
+      {advice.length > 0 && (
+        <div className="mt-3 rounded bg-teal-50 p-2 text-sm" data-testid="advice">
+          <h4 className="font-bold">What would bring it to clear</h4>
+          <ul className="list-disc pl-5">
+            {advice.map((a) => (
+              <li key={a}>{a}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <p className="mt-3 text-xs text-muted">{SAFETY_CAUTION}</p>
+    </section>
+  );
+}
