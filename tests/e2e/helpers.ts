@@ -28,3 +28,6 @@ export async function waitForMail(to: string, timeoutMs = 15_000): Promise<Inbox
   }
   throw new Error(`no e-mail to ${to} within ${timeoutMs} ms`);
 }
+
+/** The wizard's step navigation. */
+export const steps = (page: Page) => page.getByRole("navigation", { name: "Steps" });

@@ -25,7 +25,7 @@ function Reasons({ reasons, warnings }: { reasons: Reason[]; warnings: Warning[]
         <ul className="mt-2 space-y-1 text-sm">
           {warnings.map((w, i) => (
             <li key={i} className="rounded border-l-4 border-band-act bg-orange-50 px-2 py-1">
-              <strong>Out of range:</strong> {w.message}
+              <strong>Warning:</strong> {w.message}
             </li>
           ))}
         </ul>

@@ -1,0 +1,26 @@
+import { chromium } from "@playwright/test";
+const b = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--headless","--no-sandbox","--disable-gpu","--disable-quic","--no-first-run","--disable-background-networking","--disable-component-update","--disable-sync"] });
+const p = await b.newPage({ viewport: { width: 1300, height: 900 } });
+const base = "http://localhost:3000";
+p.on("pageerror", e => console.log("PAGEERROR", e.message));
+p.on("console", m => { if (m.type() === "error") console.log("CONSOLE", m.text()); });
+await p.goto(base + "/sign-in");
+await p.fill("#field-email", "adviser@brackenfold.example");
+await p.fill("#field-password", "hollin-vale-demo");
+await p.click("button[type=submit]");
+await p.waitForURL(base + "/");
+await p.goto(base + "/assessments");
+await p.click("text=Cabinet and chamber ring by lorry-loader crane");
+await p.waitForSelector("text=Scope of the work");
+await p.click("button:has-text('Loads & lifts')");
+await p.click("text=Open the lift plan >> nth=0");
+await p.waitForSelector("[data-testid=sling-diagram]");
+await p.screenshot({ path: "/tmp/l-plan.png", fullPage: true });
+// bad input
+await p.fill("#lp-sling\\.angleFromVerticalDeg", "70");
+await p.fill("#lp-riggingMass", "-3");
+await p.waitForTimeout(300);
+await p.click("button:has-text('Save lift plan')");
+await p.waitForTimeout(500);
+await p.screenshot({ path: "/tmp/l-bad.png", fullPage: false });
+await b.close();
