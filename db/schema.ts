@@ -6,6 +6,7 @@
 import { sql } from "drizzle-orm";
 import {
   boolean,
+  customType,
   date,
   doublePrecision,
   index,
@@ -116,6 +117,40 @@ export const components = pgTable(
     updatedAt: updatedAt(),
   },
   (t) => [index("components_organisation_idx").on(t.organisationId)],
+);
+
+const bytea = customType<{ data: Uint8Array; driverData: Uint8Array }>({ dataType: () => "bytea" });
+
+/** File contents, kept by the storage module (lib/storage.ts); the database is the default store. */
+export const storedFiles = pgTable("stored_files", {
+  id: id(),
+  organisationId: organisationId(),
+  contentType: text("content_type").notNull(),
+  size: integer("size").notNull(),
+  sha256: text("sha256").notNull(),
+  data: bytea("data").notNull(),
+  createdAt: createdAt(),
+});
+
+/** A file attached to a load-register entry: a maker's data sheet, a photograph. */
+export const componentAttachments = pgTable(
+  "component_attachments",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    componentId: uuid("component_id")
+      .notNull()
+      .references(() => components.id, { onDelete: "cascade" }),
+    fileId: uuid("file_id")
+      .notNull()
+      .references(() => storedFiles.id, { onDelete: "cascade" }),
+    filename: text("filename").notNull(),
+    contentType: text("content_type").notNull(),
+    size: integer("size").notNull(),
+    uploadedBy: uuid("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("component_attachments_component_idx").on(t.componentId)],
 );
 
 export const assessments = pgTable(

@@ -4,14 +4,15 @@
  * the organisation first; another organisation's record is "not found".
  */
 import { createHash } from "node:crypto";
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, components, jobs, revisions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
+import { page, pageQuerySchema } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
-import { contentSchema, emptyContent, type Content } from "../method-statement/content";
+import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
 import { createAssessmentSchema, saveRevisionSchema, submitRevisionSchema } from "./schemas";
@@ -29,35 +30,66 @@ async function register(organisationId: string): Promise<RegisterEntry[]> {
     .orderBy(asc(components.name));
 }
 
-export async function listAssessments(actor: Actor | null) {
+export const assessmentListQuerySchema = pageQuerySchema.extend({
+  q: z.string().trim().max(100).optional(),
+  status: z.enum(["draft", "submitted", "approved", "superseded"]).optional(),
+  jobId: z.uuid().optional(),
+  worstBand: z.enum(["clear", "watch", "act", "stop"]).optional(),
+  authorId: z.uuid().optional(),
+  sort: z.enum(["updatedAt", "-updatedAt", "title", "-title"]).default("-updatedAt"),
+});
+
+/** The latest revision of each assessment, filtered, sorted and paged. */
+export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "assessments:read");
+  const q = parseOrThrow(assessmentListQuerySchema, query, "Invalid query");
   const db = await getDb();
-  // The latest revision of each assessment.
   const latest = db
     .select({ assessmentId: revisions.assessmentId, number: sql<number>`max(${revisions.number})`.as("latest_number") })
     .from(revisions)
     .where(eq(revisions.organisationId, actor.organisationId))
     .groupBy(revisions.assessmentId)
     .as("latest");
-  return db
-    .select({
-      assessmentId: assessments.id,
-      title: assessments.title,
-      jobName: jobs.name,
-      revisionId: revisions.id,
-      number: revisions.number,
-      status: revisions.status,
-      worstBand: revisions.worstBand,
-      updatedAt: revisions.updatedAt,
-      authorName: users.name,
-    })
-    .from(assessments)
-    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-    .innerJoin(latest, eq(latest.assessmentId, assessments.id))
-    .innerJoin(revisions, and(eq(revisions.assessmentId, assessments.id), eq(revisions.number, latest.number)))
-    .leftJoin(users, eq(users.id, revisions.authorId))
-    .where(eq(assessments.organisationId, actor.organisationId))
-    .orderBy(desc(revisions.updatedAt));
+  const where: SQL[] = [eq(assessments.organisationId, actor.organisationId)];
+  if (q.q) where.push(ilike(assessments.title, `%${q.q.replace(/[%_\\]/g, "\\$&")}%`));
+  if (q.status) where.push(eq(revisions.status, q.status));
+  if (q.jobId) where.push(eq(assessments.jobId, q.jobId));
+  if (q.worstBand) where.push(eq(revisions.worstBand, q.worstBand));
+  if (q.authorId) where.push(eq(revisions.authorId, q.authorId));
+  const column = q.sort.endsWith("title") ? assessments.title : revisions.updatedAt;
+  const base = () =>
+    db
+      .select({
+        assessmentId: assessments.id,
+        title: assessments.title,
+        jobId: jobs.id,
+        jobName: jobs.name,
+        revisionId: revisions.id,
+        number: revisions.number,
+        status: revisions.status,
+        worstBand: revisions.worstBand,
+        reviewDate: revisions.reviewDate,
+        updatedAt: revisions.updatedAt,
+        authorId: revisions.authorId,
+        authorName: users.name,
+      })
+      .from(assessments)
+      .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+      .innerJoin(latest, eq(latest.assessmentId, assessments.id))
+      .innerJoin(revisions, and(eq(revisions.assessmentId, assessments.id), eq(revisions.number, latest.number)))
+      .leftJoin(users, eq(users.id, revisions.authorId))
+      .where(and(...where));
+  const total = (await base()).length;
+  const items = await base()
+    .orderBy(q.sort.startsWith("-") ? desc(column) : asc(column), asc(assessments.id))
+    .limit(q.limit)
+    .offset(q.cursor);
+  return page(items, q.cursor, q.limit, total);
+}
+
+/** Every assessment's latest revision (first page of 100), newest first. */
+export async function listAssessments(actor: Actor | null) {
+  return (await listAssessmentsPage(actor, { limit: 100 })).items;
 }
 
 export async function createAssessment(actor: Actor | null, input: unknown): Promise<{ assessmentId: string; revisionId: string }> {
@@ -154,5 +186,49 @@ export async function submitRevision(actor: Actor | null, revisionId: string, in
       .returning({ id: revisions.id });
     if (!updated) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.submitted", entityType: "revision", entityId: revisionId, contentHash: hash, details: { approverId: approver.id } });
+  });
+}
+
+/** One task of a draft, changed through the same save (and the same version check) as the whole draft. */
+async function changeTasks(actor: Actor | null, revisionId: string, version: unknown, change: (tasks: Content["tasks"]) => Content["tasks"]) {
+  authorize(actor, "assessments:write");
+  const current = await getRevision(actor, revisionId);
+  const content = { ...current.content, tasks: change(current.content.tasks) };
+  return saveRevision(actor, revisionId, { version, content });
+}
+
+const taskBodySchema = z.object({ version: z.number().int().min(1), task: taskSchema });
+const versionBodySchema = z.object({ version: z.number().int().min(1) });
+
+export async function listTasks(actor: Actor | null, revisionId: string) {
+  const { content, register: entries, revision } = await getRevision(actor, revisionId);
+  const review = reviewContent(content, entries);
+  return { version: revision.version, tasks: content.tasks.map((task, i) => ({ task, score: review.scores[i] })) };
+}
+
+export async function addTask(actor: Actor | null, revisionId: string, input: unknown) {
+  authorize(actor, "assessments:write");
+  const { version, task } = parseOrThrow(taskBodySchema, input);
+  return changeTasks(actor, revisionId, version, (tasks) => {
+    if (tasks.some((t) => t.id === task.id)) throw new AppError("conflict", `A task with id ${task.id} already exists`);
+    return [...tasks, task];
+  });
+}
+
+export async function replaceTask(actor: Actor | null, revisionId: string, taskId: string, input: unknown) {
+  authorize(actor, "assessments:write");
+  const { version, task } = parseOrThrow(taskBodySchema, input);
+  return changeTasks(actor, revisionId, version, (tasks) => {
+    if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
+    return tasks.map((t) => (t.id === taskId ? { ...task, id: taskId } : t));
+  });
+}
+
+export async function removeTask(actor: Actor | null, revisionId: string, taskId: string, input: unknown) {
+  authorize(actor, "assessments:write");
+  const { version } = parseOrThrow(versionBodySchema, input);
+  return changeTasks(actor, revisionId, version, (tasks) => {
+    if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
+    return tasks.filter((t) => t.id !== taskId);
   });
 }

@@ -1,14 +1,16 @@
 import { NextResponse } from "next/server";
-import { createAssessment, listAssessments } from "@/assessments/revisions/service";
+import { createAssessment, listAssessmentsPage } from "@/assessments/revisions/service";
 import { handler, readJson } from "@/lib/api";
-import { getActor } from "@/lib/auth/session";
-import { authorize } from "@/lib/permissions";
+import { queryOf, requireApiActor } from "@/lib/auth/api";
 
-export const GET = handler(async () => NextResponse.json({ items: await listAssessments(await getActor()) }));
+/** The latest revision of each assessment: `?q=&status=&jobId=&worstBand=&authorId=&sort=&limit=&cursor=`. */
+export const GET = handler(async (request: Request) => {
+  const actor = await requireApiActor("assessments:read");
+  return NextResponse.json(await listAssessmentsPage(actor, queryOf(request)));
+});
 
+/** Creates an assessment and its first draft revision: `{jobId, title, templateId?}`. */
 export const POST = handler(async (request: Request) => {
-  const actor = await getActor();
-  authorize(actor, "assessments:write"); // before reading the body: no session, no parsing
-  const created = await createAssessment(actor, await readJson(request));
-  return NextResponse.json(created, { status: 201 });
+  const actor = await requireApiActor("assessments:write");
+  return NextResponse.json(await createAssessment(actor, await readJson(request)), { status: 201 });
 });

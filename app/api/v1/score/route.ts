@@ -1,14 +1,13 @@
 import { NextResponse } from "next/server";
 import { scoreUnknown } from "@/assessments/rules";
 import { handler, readJson } from "@/lib/api";
-import { getActor } from "@/lib/auth/session";
-import { authorize } from "@/lib/permissions";
+import { requireApiActor } from "@/lib/auth/api";
 
 const MAX_BATCH = 500;
 
 /** Scores one request or an array of them; the body and answer are the scoring CLI's JSON. */
 export const POST = handler(async (request: Request) => {
-  authorize(await getActor(), "score:use");
+  await requireApiActor("score:use");
   const body = await readJson(request);
   if (Array.isArray(body)) {
     if (body.length > MAX_BATCH)

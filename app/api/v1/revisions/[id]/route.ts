@@ -1,14 +1,13 @@
 import { NextResponse } from "next/server";
 import { getRevision, saveRevision } from "@/assessments/revisions/service";
 import { handler, readJson } from "@/lib/api";
-import { getActor } from "@/lib/auth/session";
-import { authorize } from "@/lib/permissions";
+import { requireApiActor } from "@/lib/auth/api";
 
 type Context = { params: Promise<{ id: string }> };
 
 export const GET = handler(async (_request: Request, { params }: Context) => {
-  const { id } = await params;
-  const { revision, assessment, job, content } = await getRevision(await getActor(), id);
+  const actor = await requireApiActor("assessments:read");
+  const { revision, assessment, job, content } = await getRevision(actor, (await params).id);
   return NextResponse.json({
     id: revision.id,
     assessmentId: assessment.id,
@@ -18,16 +17,15 @@ export const GET = handler(async (_request: Request, { params }: Context) => {
     status: revision.status,
     version: revision.version,
     worstBand: revision.worstBand,
+    reviewDate: revision.reviewDate,
     content,
     results: revision.results,
   });
 });
 
-/** Saves the draft: `{version, content}`; a stale version answers 409. */
+/** Saves the draft: `{version, content}`; a stale version or a locked revision answers 409. */
 export const PUT = handler(async (request: Request, { params }: Context) => {
+  const actor = await requireApiActor("assessments:write");
   const { id } = await params;
-  const actor = await getActor();
-  authorize(actor, "assessments:write"); // before reading the body: no session, no parsing
-  const body = await readJson(request);
-  return NextResponse.json(await saveRevision(actor, id, body));
+  return NextResponse.json(await saveRevision(actor, id, await readJson(request)));
 });

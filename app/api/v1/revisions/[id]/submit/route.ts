@@ -1,13 +1,12 @@
 import { NextResponse } from "next/server";
 import { submitRevision } from "@/assessments/revisions/service";
 import { handler, readJson } from "@/lib/api";
-import { getActor } from "@/lib/auth/session";
-import { authorize } from "@/lib/permissions";
+import { requireApiActor } from "@/lib/auth/api";
 
+/** Submits a complete draft: `{version, approverId, reviewDate}`; 422 lists what is missing. */
 export const POST = handler(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
+  const actor = await requireApiActor("assessments:submit");
   const { id } = await params;
-  const actor = await getActor();
-  authorize(actor, "assessments:submit"); // before reading the body: no session, no parsing
   await submitRevision(actor, id, await readJson(request));
   return NextResponse.json({ status: "submitted" });
 });

@@ -1,0 +1,33 @@
+import { z } from "zod";
+
+const optional = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Use at most ${max} characters`)
+    .transform((v) => (v === "" ? null : v))
+    .nullable()
+    .optional();
+
+/** A job: one schema for the form and the server. Railway fields are optional (civils sites have none). */
+export const jobSchema = z.object({
+  name: z.string().trim().min(3, "Name the job").max(200, "Use at most 200 characters"),
+  client: z.string().trim().min(2, "Name the client").max(200, "Use at most 200 characters"),
+  location: z.string().trim().min(2, "Say where the work is").max(300, "Use at most 300 characters"),
+  lineReference: optional(120),
+  mileage: optional(60),
+  accessPoint: optional(300),
+  nearestHospital: optional(300),
+  emergencyArrangements: optional(2000),
+  siteContactName: optional(120),
+  siteContactPhone: z
+    .string()
+    .trim()
+    .max(40)
+    .refine((v) => v === "" || /^[+0-9 ()-]{6,40}$/.test(v), "Enter a phone number (digits, spaces, + and brackets)")
+    .transform((v) => (v === "" ? null : v))
+    .nullable()
+    .optional(),
+});
+
+export type JobInput = z.input<typeof jobSchema>;

@@ -1,0 +1,217 @@
+/**
+ * The load register: components with their masses and where the masses came from, a CSV import
+ * that is all-or-nothing, and attachments (data sheets, photographs) checked by their content.
+ */
+import { and, asc, count, desc, eq, ilike, type SQL } from "drizzle-orm";
+import Papa from "papaparse";
+import { z } from "zod";
+import { getDb } from "@/db/client";
+import { componentAttachments, components } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { AppError, parseOrThrow, type FieldIssue } from "@/lib/errors";
+import { page, pageQuerySchema } from "@/lib/pagination";
+import { authorize, type Actor } from "@/lib/permissions";
+import { deleteFile, getFile, putFile } from "@/lib/storage";
+import { componentSchema, CSV_COLUMNS, MAX_IMPORT_ROWS } from "./schemas";
+
+const isUuid = (s: string) => z.uuid().safeParse(s).success;
+
+export const componentListQuerySchema = pageQuerySchema.extend({
+  q: z.string().trim().max(100).optional(),
+  massSource: z.enum(["weighed", "datasheet", "estimated"]).optional(),
+  grip: z.enum(["good", "fair", "poor"]).optional(),
+  sort: z.enum(["name", "-name", "massKg", "-massKg"]).default("name"),
+});
+
+export async function listComponentsPage(actor: Actor | null, query: unknown) {
+  authorize(actor, "components:read");
+  const q = parseOrThrow(componentListQuerySchema, query, "Invalid query");
+  const db = await getDb();
+  const where: SQL[] = [eq(components.organisationId, actor.organisationId)];
+  if (q.q) where.push(ilike(components.name, `%${q.q.replace(/[%_\\]/g, "\\$&")}%`));
+  if (q.massSource) where.push(eq(components.massSource, q.massSource));
+  if (q.grip) where.push(eq(components.grip, q.grip));
+  const column = q.sort.endsWith("massKg") ? components.massKg : components.name;
+  const order = q.sort.startsWith("-") ? desc(column) : asc(column);
+  const [{ total }] = await db.select({ total: count() }).from(components).where(and(...where));
+  const items = await db.select().from(components).where(and(...where)).orderBy(order, asc(components.id)).limit(q.limit).offset(q.cursor);
+  return page(items, q.cursor, q.limit, Number(total));
+}
+
+export async function getComponent(actor: Actor | null, componentId: string) {
+  authorize(actor, "components:read");
+  const db = await getDb();
+  const component = isUuid(componentId) ? await db.query.components.findFirst({ where: eq(components.id, componentId) }) : undefined;
+  if (!component || component.organisationId !== actor.organisationId) throw AppError.notFound("Component");
+  const attachments = await db
+    .select({ id: componentAttachments.id, filename: componentAttachments.filename, contentType: componentAttachments.contentType, size: componentAttachments.size, createdAt: componentAttachments.createdAt })
+    .from(componentAttachments)
+    .where(eq(componentAttachments.componentId, component.id))
+    .orderBy(asc(componentAttachments.createdAt));
+  return { ...component, attachments };
+}
+
+async function assertNameFree(organisationId: string, name: string, exceptId?: string) {
+  const db = await getDb();
+  const existing = await db.select({ id: components.id }).from(components).where(and(eq(components.organisationId, organisationId), ilike(components.name, name.replace(/[%_\\]/g, "\\$&"))));
+  if (existing.some((e) => e.id !== exceptId))
+    throw new AppError("validation", "Some fields need attention", [{ path: "name", message: "A component with this name is already in the register" }]);
+}
+
+export async function createComponent(actor: Actor | null, input: unknown) {
+  authorize(actor, "components:write");
+  const data = parseOrThrow(componentSchema, input);
+  await assertNameFree(actor.organisationId, data.name);
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(components).values({ ...data, organisationId: actor.organisationId }).returning();
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.created", entityType: "component", entityId: row.id });
+    return row;
+  });
+}
+
+export async function updateComponent(actor: Actor | null, componentId: string, input: unknown) {
+  authorize(actor, "components:write");
+  await getComponent(actor, componentId);
+  const data = parseOrThrow(componentSchema, input);
+  await assertNameFree(actor.organisationId, data.name, componentId);
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [row] = await tx.update(components).set({ ...data, updatedAt: new Date() }).where(eq(components.id, componentId)).returning();
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.updated", entityType: "component", entityId: row.id });
+    return row;
+  });
+}
+
+export interface ImportRow {
+  line: number;
+  values: Record<string, string>;
+  errors: FieldIssue[];
+}
+
+const toNumber = (v: string | undefined) => (v === undefined || v.trim() === "" ? null : Number(v.trim().replace(/,/g, "")));
+
+/** Parses and checks a CSV without writing anything: every row with its errors. */
+export async function previewImport(actor: Actor | null, csv: string): Promise<{ rows: ImportRow[]; problems: string[] }> {
+  authorize(actor, "components:write");
+  const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: "greedy", transformHeader: (h) => h.trim().toLowerCase() });
+  const problems: string[] = [];
+  const headers = parsed.meta.fields ?? [];
+  const missing = CSV_COLUMNS.filter((c) => ["name", "mass_kg", "grip", "mass_source"].includes(c) && !headers.includes(c));
+  if (missing.length) problems.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}. Download the template to see the expected columns.`);
+  const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
+  if (unknown.length) problems.push(`Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.join(", ")}.`);
+  if (parsed.data.length === 0) problems.push("The file has no rows to import.");
+  if (parsed.data.length > MAX_IMPORT_ROWS) problems.push(`At most ${MAX_IMPORT_ROWS} rows in one import.`);
+  for (const e of parsed.errors.slice(0, 5)) problems.push(`Line ${(e.row ?? 0) + 2}: ${e.message}`);
+
+  const db = await getDb();
+  const existing = new Set(
+    (await db.select({ name: components.name }).from(components).where(eq(components.organisationId, actor.organisationId))).map((c) => c.name.toLowerCase()),
+  );
+  const seen = new Set<string>();
+  const rows = parsed.data.slice(0, MAX_IMPORT_ROWS).map((values, i): ImportRow => {
+    const candidate = {
+      name: values.name ?? "",
+      massKg: toNumber(values.mass_kg) ?? Number.NaN,
+      lengthMm: toNumber(values.length_mm),
+      widthMm: toNumber(values.width_mm),
+      heightMm: toNumber(values.height_mm),
+      grip: (values.grip ?? "").trim().toLowerCase(),
+      massSource: (values.mass_source ?? "").trim().toLowerCase(),
+      notes: values.notes ?? "",
+    };
+    const result = componentSchema.safeParse(candidate);
+    const errors: FieldIssue[] = result.success ? [] : result.error.issues.map((issue) => ({ path: String(issue.path[0] ?? ""), message: issue.message }));
+    const key = candidate.name.trim().toLowerCase();
+    if (key && existing.has(key)) errors.push({ path: "name", message: "Already in the register" });
+    else if (key && seen.has(key)) errors.push({ path: "name", message: "Appears twice in this file" });
+    seen.add(key);
+    return { line: i + 2, values, errors };
+  });
+  return { rows, problems };
+}
+
+/** Imports every row or none: any error answers 422 with the rows' errors and writes nothing. */
+export async function importComponents(actor: Actor | null, csv: string): Promise<{ imported: number }> {
+  const { rows, problems } = await previewImport(actor, csv);
+  const rowIssues = rows.flatMap((r) => r.errors.map((e) => ({ path: `line ${r.line}.${e.path}`, message: e.message })));
+  if (problems.length || rowIssues.length)
+    throw new AppError("validation", "Nothing was imported: fix the file and try again", [...problems.map((p) => ({ path: "file", message: p })), ...rowIssues]);
+  const db = await getDb();
+  const values = rows.map((r) => ({
+    ...componentSchema.parse({
+      name: r.values.name,
+      massKg: toNumber(r.values.mass_kg),
+      lengthMm: toNumber(r.values.length_mm),
+      widthMm: toNumber(r.values.width_mm),
+      heightMm: toNumber(r.values.height_mm),
+      grip: r.values.grip.trim().toLowerCase(),
+      massSource: r.values.mass_source.trim().toLowerCase(),
+      notes: r.values.notes ?? "",
+    }),
+    organisationId: actor!.organisationId,
+  }));
+  await db.transaction(async (tx) => {
+    const inserted = await tx.insert(components).values(values).returning({ id: components.id });
+    await recordAudit(tx, { organisationId: actor!.organisationId, actorId: actor!.id, action: "component.imported", entityType: "component", entityId: null, details: { count: inserted.length } });
+  });
+  return { imported: values.length };
+}
+
+export const ATTACHMENT_TYPES: Record<string, string> = {
+  "application/pdf": "PDF",
+  "image/jpeg": "JPEG photograph",
+  "image/png": "PNG image",
+  "image/webp": "WebP image",
+};
+export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
+
+/** Attaches a data sheet or photograph; its type is read from the content, never from the name. */
+export async function addAttachment(actor: Actor | null, componentId: string, file: { name: string; data: Uint8Array }) {
+  authorize(actor, "components:write");
+  await getComponent(actor, componentId);
+  if (file.data.byteLength === 0) throw new AppError("validation", "The file is empty", [{ path: "file", message: "The file is empty" }]);
+  if (file.data.byteLength > MAX_ATTACHMENT_BYTES) throw new AppError("payload_too_large", `Files can be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
+  const { fileTypeFromBuffer } = await import("file-type");
+  const detected = await fileTypeFromBuffer(file.data);
+  if (!detected || !ATTACHMENT_TYPES[detected.mime])
+    throw new AppError("unsupported_media_type", `Attach a PDF data sheet or a photograph (JPEG, PNG or WebP); this file is ${detected ? detected.mime : "of an unknown type"}`);
+  const filename = file.name.replace(/[\\/\u0000-\u001f]/g, "_").slice(0, 200) || `attachment.${detected.ext}`;
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const stored = await putFile(tx, actor.organisationId, file.data, detected.mime);
+    const [row] = await tx
+      .insert(componentAttachments)
+      .values({ organisationId: actor.organisationId, componentId, fileId: stored.id, filename, contentType: detected.mime, size: stored.size, uploadedBy: actor.id })
+      .returning();
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.attachment-added", entityType: "component", entityId: componentId, details: { filename, sha256: stored.sha256 } });
+    return row;
+  });
+}
+
+async function attachmentOf(actor: Actor, attachmentId: string) {
+  const db = await getDb();
+  const row = isUuid(attachmentId) ? await db.query.componentAttachments.findFirst({ where: eq(componentAttachments.id, attachmentId) }) : undefined;
+  if (!row || row.organisationId !== actor.organisationId) throw AppError.notFound("Attachment");
+  return row;
+}
+
+export async function readAttachment(actor: Actor | null, attachmentId: string) {
+  authorize(actor, "components:read");
+  const row = await attachmentOf(actor, attachmentId);
+  const file = await getFile(actor.organisationId, row.fileId);
+  if (!file) throw AppError.notFound("Attachment");
+  return { filename: row.filename, contentType: row.contentType, data: file.data };
+}
+
+export async function removeAttachment(actor: Actor | null, attachmentId: string) {
+  authorize(actor, "components:write");
+  const row = await attachmentOf(actor, attachmentId);
+  const db = await getDb();
+  await db.transaction(async (tx) => {
+    await tx.delete(componentAttachments).where(eq(componentAttachments.id, row.id));
+    await deleteFile(tx, actor.organisationId, row.fileId);
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.attachment-removed", entityType: "component", entityId: row.componentId, details: { filename: row.filename } });
+  });
+}
