@@ -6,6 +6,7 @@ import { can } from "@/lib/permissions";
 import { ROLE_LABELS } from "@/lib/users/schemas";
 import { NAVIGATION } from "./navigation";
 import { NavLinks } from "./nav-links";
+import { Providers } from "./providers";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const actor = await requireActor();
@@ -30,7 +31,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">{children}</main>
+      <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
+        <Providers>{children}</Providers>
+      </main>
       <footer className="mx-auto w-full max-w-6xl px-4 pb-6">
         <SafetyCaution />
       </footer>

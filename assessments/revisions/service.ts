@@ -4,7 +4,7 @@
  * the organisation first; another organisation's record is "not found".
  */
 import { createHash } from "node:crypto";
-import { and, asc, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, inArray, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, components, jobs, revisions, users } from "@/db/schema";
@@ -231,4 +231,15 @@ export async function removeTask(actor: Actor | null, revisionId: string, taskId
     if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
     return tasks.filter((t) => t.id !== taskId);
   });
+}
+
+/** People who can author assessments, for the list's author filter. */
+export async function listAuthors(actor: Actor | null) {
+  authorize(actor, "assessments:read");
+  const db = await getDb();
+  return db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(eq(users.organisationId, actor.organisationId), inArray(users.role, ["admin", "adviser"])))
+    .orderBy(asc(users.name));
 }

@@ -1,19 +1,16 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { BandChip } from "@/app/_components/results/band";
-import { DataTable, EmptyState } from "@/app/_components/table";
-import { listAssessments } from "@/assessments/revisions/service";
-import type { Band } from "@/assessments/rules/types";
+import { listJobs } from "@/assessments/jobs/queries";
+import { listAuthors } from "@/assessments/revisions/service";
 import { requirePermission } from "@/lib/auth/guard";
 import { can } from "@/lib/permissions";
+import { AssessmentsTable } from "./assessments-table";
 
 export const metadata: Metadata = { title: "Assessments" };
 
-const STATUS_LABELS = { draft: "Draft", submitted: "Submitted", approved: "Approved", superseded: "Superseded" } as const;
-
 export default async function AssessmentsPage() {
   const actor = await requirePermission("assessments:read");
-  const rows = await listAssessments(actor);
+  const [jobs, authors] = await Promise.all([listJobs(actor), listAuthors(actor)]);
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -24,29 +21,7 @@ export default async function AssessmentsPage() {
           </Link>
         )}
       </div>
-      {rows.length === 0 ? (
-        <EmptyState>No assessments yet. Start one from a template of a common job.</EmptyState>
-      ) : (
-        <DataTable head={["Assessment", "Job", "Revision", "Status", "Worst band", "Author", "Last saved"]} caption="Assessments">
-          {rows.map((r) => (
-            <tr key={r.revisionId} className="border-t border-rule">
-              <td className="px-3 py-2 font-bold">
-                <Link href={`/revisions/${r.revisionId}`} className="text-accent underline">
-                  {r.title}
-                </Link>
-              </td>
-              <td className="px-3 py-2">{r.jobName}</td>
-              <td className="px-3 py-2">{r.number}</td>
-              <td className="px-3 py-2">{STATUS_LABELS[r.status]}</td>
-              <td className="px-3 py-2">
-                <BandChip band={(r.worstBand as Band | null) ?? null} />
-              </td>
-              <td className="px-3 py-2">{r.authorName ?? "—"}</td>
-              <td className="px-3 py-2">{r.updatedAt.toISOString().slice(0, 16).replace("T", " ")}</td>
-            </tr>
-          ))}
-        </DataTable>
-      )}
+      <AssessmentsTable jobs={jobs.map((j) => ({ id: j.id, name: j.name }))} authors={authors} />
     </div>
   );
 }

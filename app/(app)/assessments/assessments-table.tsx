@@ -1,0 +1,60 @@
+"use client";
+
+import type { ColumnDef } from "@tanstack/react-table";
+import Link from "next/link";
+import { BandChip } from "@/app/_components/results/band";
+import { ServerTable, type FilterSpec } from "@/app/_components/server-table";
+import type { Band } from "@/assessments/rules/types";
+
+interface Row {
+  revisionId: string;
+  title: string;
+  jobName: string;
+  number: number;
+  status: "draft" | "submitted" | "approved" | "superseded";
+  worstBand: Band | null;
+  authorName: string | null;
+  reviewDate: string | null;
+  updatedAt: string;
+}
+
+const STATUS = { draft: "Draft", submitted: "Submitted", approved: "Approved", superseded: "Superseded" } as const;
+
+const columns: ColumnDef<Row, unknown>[] = [
+  {
+    id: "title",
+    header: "Assessment",
+    cell: ({ row }) => (
+      <Link href={`/revisions/${row.original.revisionId}`} className="font-bold text-accent underline">
+        {row.original.title}
+      </Link>
+    ),
+  },
+  { id: "job", header: "Job", cell: ({ row }) => row.original.jobName },
+  { id: "number", header: "Rev.", cell: ({ row }) => row.original.number },
+  { id: "status", header: "Status", cell: ({ row }) => STATUS[row.original.status] },
+  { id: "worstBand", header: "Worst band", cell: ({ row }) => <BandChip band={row.original.worstBand} /> },
+  { id: "author", header: "Author", cell: ({ row }) => row.original.authorName ?? "—" },
+  { id: "updatedAt", header: "Last saved", cell: ({ row }) => row.original.updatedAt.slice(0, 16).replace("T", " ") },
+];
+
+export function AssessmentsTable({ jobs, authors }: { jobs: { id: string; name: string }[]; authors: { id: string; name: string }[] }) {
+  const filters: FilterSpec[] = [
+    { key: "status", label: "Status", options: Object.entries(STATUS).map(([value, label]) => ({ value, label })) },
+    { key: "jobId", label: "Job", options: jobs.map((j) => ({ value: j.id, label: j.name })) },
+    { key: "worstBand", label: "Worst band", options: ["clear", "watch", "act", "stop"].map((b) => ({ value: b, label: b[0].toUpperCase() + b.slice(1) })) },
+    { key: "authorId", label: "Author", options: authors.map((a) => ({ value: a.id, label: a.name })) },
+  ];
+  return (
+    <ServerTable<Row>
+      endpoint="/api/v1/assessments"
+      columns={columns}
+      filters={filters}
+      caption="Assessments"
+      searchLabel="Search titles"
+      emptyText="No assessment matches."
+      defaultSort="-updatedAt"
+      sortKeys={{ title: ["title", "-title"], updatedAt: ["updatedAt", "-updatedAt"] }}
+    />
+  );
+}

@@ -1,0 +1,24 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { getJob } from "@/assessments/jobs/service";
+import { requirePermission } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import { JobForm } from "../../job-form";
+
+export const metadata: Metadata = { title: "Edit job" };
+
+export default async function EditJobPage({ params }: { params: Promise<{ id: string }> }) {
+  const actor = await requirePermission("jobs:write");
+  const { id } = await params;
+  const job = await getJob(actor, id).catch((err) => {
+    if (err instanceof AppError && err.code === "not_found") notFound();
+    throw err;
+  });
+  const { name, client, location, lineReference, mileage, accessPoint, nearestHospital, emergencyArrangements, siteContactName, siteContactPhone } = job;
+  return (
+    <div className="max-w-4xl space-y-4">
+      <h1 className="text-2xl font-bold">Edit job</h1>
+      <JobForm jobId={job.id} initial={{ name, client, location, lineReference, mileage, accessPoint, nearestHospital, emergencyArrangements, siteContactName, siteContactPhone }} />
+    </div>
+  );
+}
