@@ -11,8 +11,9 @@ export const pageQuerySchema = z.object({
     .optional()
     .transform((c, ctx) => {
       if (!c) return 0;
-      const offset = Number(Buffer.from(c, "base64url").toString("utf8"));
-      if (!Number.isInteger(offset) || offset < 0) {
+      const decoded = /^[A-Za-z0-9_-]+$/.test(c) ? Buffer.from(c, "base64url").toString("utf8") : "";
+      const offset = /^\d{1,9}$/.test(decoded) ? Number(decoded) : -1;
+      if (offset < 0) {
         ctx.addIssue({ code: "custom", message: "cursor is not one this API gave out" });
         return z.NEVER;
       }
