@@ -44,11 +44,19 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
   const score = useMemo(() => scoreTask(task, component), [task, component]);
   const p = `tasks.${index}` as const;
 
+  // A new operation gets the inputs it needs; inputs already typed are kept, but a team lift needs
+  // a team and a carry a distance.
   const onOperation = (operation: Operation) => {
     const current = getValues(p);
     const defaults = defaultsFor(operation, component);
     for (const [key, value] of Object.entries(defaults)) {
       if (!current[key as keyof Task]) setValue(`${p}.${key}` as `tasks.${number}.niosh`, value as Task["niosh"], { shouldValidate: true });
+    }
+    const filter = current.filter;
+    if (filter && operation === "team-lift" && filter.teamSize < 2) setValue(`${p}.filter.teamSize`, 2, { shouldValidate: true });
+    if (filter && operation === "carry" && !filter.carryDistanceM) {
+      setValue(`${p}.filter.carryDistanceM`, 10, { shouldValidate: true });
+      setValue(`${p}.filter.durationHours`, 1, { shouldValidate: true });
     }
   };
 

@@ -1,0 +1,138 @@
+import { expect, test, type Page } from "@playwright/test";
+import { signIn, steps } from "./helpers";
+
+const nav = (page: Page) => page.getByRole("navigation", { name: "Main" });
+
+test("an adviser creates a job", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await nav(page).getByRole("link", { name: "Jobs" }).click();
+  await page.getByRole("link", { name: "New job" }).click();
+  const form = page.getByRole("form", { name: "Job" });
+  await form.getByRole("button", { name: "Save job" }).click();
+  await expect(form.getByText("Name the job")).toBeVisible();
+  await form.getByLabel("Job name").fill("Tolgarth footbridge: new cable route");
+  await form.getByLabel("Client", { exact: true }).fill("Wendmoor Railway Infrastructure");
+  await form.getByLabel("Location").fill("Tolgarth, up cess");
+  await form.getByLabel("Nearest hospital with an emergency department").fill("Tolgarth Community Hospital, emergency department");
+  await form.getByLabel("Emergency arrangements").fill("Meet the ambulance at the station car park.");
+  await form.getByLabel("Site contact phone").fill("call me maybe");
+  await form.getByRole("button", { name: "Save job" }).click();
+  await expect(form.getByText("Enter a phone number")).toBeVisible();
+  await form.getByLabel("Site contact phone").fill("07700 900555");
+  await form.getByRole("button", { name: "Save job" }).click();
+  await expect(page.getByRole("cell", { name: "Tolgarth footbridge: new cable route" })).toBeVisible();
+});
+
+test("an adviser imports a CSV: a bad file is refused row by row, a good one is imported", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/load-register/import");
+  const input = page.getByLabel("CSV file");
+  await input.setInputFiles({ name: "bad.csv", mimeType: "text/csv", buffer: Buffer.from("name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,-4,wobbly,weighed\n") });
+  await expect(page.getByTestId("import-summary")).toContainText("1 with problems");
+  await expect(page.getByRole("cell", { name: /grip: Choose good, fair or poor/ })).toBeVisible();
+  await expect(page.getByRole("button", { name: /^Import/ })).toBeDisabled();
+
+  await input.setInputFiles({ name: "good.csv", mimeType: "text/csv", buffer: Buffer.from("name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,4,good,estimated\n") });
+  await expect(page.getByTestId("import-summary")).toContainText("all ready to import");
+  await page.getByRole("button", { name: "Import 2 components" }).click();
+  await expect(page.getByText("2 components imported.")).toBeVisible();
+
+  await page.goto("/load-register");
+  await page.getByLabel("Search by name").fill("Handrail");
+  await expect(page.getByRole("link", { name: "Handrail post" })).toBeVisible();
+  await expect(page.getByText("Estimated — confirm")).toBeVisible();
+});
+
+test("an adviser builds an assessment through the wizard, watches the live score, and submits", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/assessments/new");
+  const form = page.getByRole("form", { name: "New assessment" });
+  await form.getByLabel("Job").selectOption({ label: "Hollin Vale loop: new location cabinet and equipment base" });
+  await form.getByLabel("Title").fill("Axle counter and troughs at Hollin Vale");
+  await form.getByLabel(/A blank assessment/).check();
+  await form.getByRole("button", { name: "Create and open" }).click();
+
+  await page.getByLabel("Scope of the work").fill("Fit an axle counter head and lay two trough sections.");
+  await steps(page).getByRole("button", { name: /Sequence of work/ }).click();
+  await page.getByRole("button", { name: "Add a step" }).click();
+  await page.getByLabel("Step 1", { exact: true }).fill("Brief the gang at the access point.");
+  await page.getByRole("button", { name: "Add a step" }).click();
+  await page.getByLabel("Step 2", { exact: true }).fill("Carry the kit to site and fit it.");
+
+  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  // Task 1: a light lift, clear.
+  await page.getByRole("button", { name: "Add a handling task" }).click();
+  const t1 = page.getByTestId("task-0");
+  await t1.getByLabel("What is done").fill("Lift the axle counter head onto the rail");
+  await t1.getByLabel("Component").selectOption({ label: "Axle counter head kit — 6 kg" });
+  const band1 = t1.getByTestId("task-result").locator("[data-band]").first();
+  await expect(band1).toHaveAttribute("data-band", "clear");
+  // The score follows the inputs as they are typed.
+  await t1.getByLabel("How many").fill("6");
+  await expect(band1).not.toHaveAttribute("data-band", "clear");
+  await t1.getByLabel("How many").fill("1");
+  await expect(band1).toHaveAttribute("data-band", "clear");
+
+  // Task 2: a pair lifting a concrete trough from low down: act.
+  await page.getByRole("button", { name: "Add a handling task" }).click();
+  const t2 = page.getByTestId("task-1");
+  await t2.getByLabel("What is done").fill("Lift a trough into the cess as a pair");
+  await t2.getByLabel("Component").selectOption({ label: "Concrete cable trough, 1 m — 42 kg" });
+  await t2.getByLabel("Operation").selectOption("team-lift");
+  await t2.getByLabel("Hands between").selectOption("lower-leg-to-knuckle");
+  await expect(t2.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "act");
+  // Even four people would be above the filter (4 × 20 kg × ½ = 40 kg < 42 kg): the advice says so.
+  await expect(t2.getByTestId("advice")).toContainText("mechanical aid");
+
+  // Task 3: carrying the battery set: watch.
+  await page.getByRole("button", { name: "Add a handling task" }).click();
+  const t3 = page.getByTestId("task-2");
+  await t3.getByLabel("What is done").fill("Carry the battery set from the van");
+  await t3.getByLabel("Component").selectOption({ label: "Sealed battery set with carry handles — 31 kg" });
+  await t3.getByLabel("Operation").selectOption("carry");
+  await t3.getByLabel("Carried").fill("8");
+  await expect(t3.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "watch");
+
+  await steps(page).getByRole("button", { name: /Hazards & controls/ }).click();
+  await page.getByRole("button", { name: "Add a hazard" }).click();
+  await page.getByLabel("Hazard", { exact: true }).fill("Trip on ballast while carrying");
+  await page.getByLabel("Who is at risk").fill("Gang");
+  await page.getByRole("button", { name: "Add a control" }).click();
+  await page.getByLabel("Control 1", { exact: true }).fill("Walk the route first and clear it");
+
+  await steps(page).getByRole("button", { name: /People, plant & PPE/ }).click();
+  await page.getByRole("button", { name: "Add a person" }).click();
+  await page.getByLabel("Role", { exact: true }).fill("Person in charge");
+  await page.getByLabel("Name", { exact: true }).fill("Dafydd Strand");
+  await page.getByRole("button", { name: "Add PPE" }).click();
+  await page.getByLabel("PPE 1", { exact: true }).fill("Hi-vis clothing");
+
+  await steps(page).getByRole("button", { name: /Emergency/ }).click();
+  await expect(page.getByLabel("Nearest hospital with an emergency department")).toHaveValue(/Hollin Vale General/);
+
+  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await expect(page.getByText("Nothing required is missing.")).toBeVisible();
+  await expect(page.getByText("Worst band of the tasks:").locator("..").locator("[data-band]")).toHaveAttribute("data-band", "act");
+  await page.getByRole("button", { name: "Submit for approval" }).click();
+  await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
+});
+
+test("a save over someone else's newer save shows the conflict and keeps what was typed", async ({ page, browser }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/assessments");
+  await page.getByRole("link", { name: "Equipment base by hand at Carrowby" }).click();
+  await page.waitForURL(/\/revisions\//);
+  const url = page.url();
+
+  const other = await browser.newContext();
+  const second = await other.newPage();
+  await signIn(second, "admin@brackenfold.example");
+  await second.goto(url);
+  await second.getByLabel("Scope of the work").fill("Changed by the second editor.");
+  await expect(second.getByText(/All changes saved/)).toBeVisible();
+
+  await page.getByLabel("Scope of the work").fill("Changed by the first editor, who opened it earlier.");
+  await expect(page.getByText("Not saved — this draft was changed elsewhere.")).toBeVisible();
+  await expect(page.getByLabel("Scope of the work")).toHaveValue("Changed by the first editor, who opened it earlier.");
+  await other.close();
+});
