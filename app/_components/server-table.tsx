@@ -84,7 +84,7 @@ export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {},
                 setValues({ ...values, [f.key]: e.target.value });
                 restart();
               }}
-              className="mt-1 block rounded border border-rule bg-white px-2 py-1.5 font-normal"
+              className="mt-1 block w-full max-w-[16rem] rounded border border-rule bg-white px-2 py-1.5 font-normal"
             >
               <option value="">All</option>
               {f.options.map((o) => (
