@@ -241,3 +241,53 @@ export type Role = (typeof ROLES)[number];
 export type User = typeof users.$inferSelect;
 export type Job = typeof jobs.$inferSelect;
 export type Component = typeof components.$inferSelect;
+
+/** A countersignature: the drawn image, the typed name and role, when, and what was signed. */
+export const signatures = pgTable(
+  "signatures",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    signerId: uuid("signer_id").references(() => users.id, { onDelete: "set null" }),
+    signerName: text("signer_name").notNull(),
+    signerRole: text("signer_role").notNull(),
+    /** PNG of the drawn signature. */
+    image: bytea("image").notNull(),
+    contentHash: text("content_hash").notNull(),
+    signedAt: timestamp("signed_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("signatures_revision_idx").on(t.revisionId)],
+);
+
+/** Every pack PDF Heftwise issued, by the SHA-256 of its bytes: what /verify compares an upload with. */
+export const issuedPacks = pgTable(
+  "issued_packs",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    fileId: uuid("file_id")
+      .notNull()
+      .references(() => storedFiles.id, { onDelete: "cascade" }),
+    sha256: text("sha256").notNull(),
+    /** `draft` for the pack attached to an approval request, `approved` for the signed pack. */
+    kind: text("kind").notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("issued_packs_sha256_idx").on(t.sha256), index("issued_packs_revision_idx").on(t.revisionId)],
+);
+
+/** The organisation's document-signing certificate and key (PKCS#12, encrypted), made on first use. */
+export const signingKeys = pgTable("signing_keys", {
+  organisationId: uuid("organisation_id")
+    .primaryKey()
+    .references(() => organisations.id, { onDelete: "cascade" }),
+  p12: bytea("p12").notNull(),
+  certificatePem: text("certificate_pem").notNull(),
+  createdAt: createdAt(),
+});

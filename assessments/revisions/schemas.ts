@@ -19,3 +19,6 @@ export const submitRevisionSchema = z.object({
   reviewDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "Choose a review date"),
 });
 
+
+/** The wizard's sections, by key: return comments and the review list name them. */
+export const STEP_KEYS = ["scope", "sequence", "loads", "hazards", "people", "emergency"] as const;

@@ -15,7 +15,7 @@ import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
-import { createAssessmentSchema, saveRevisionSchema, submitRevisionSchema } from "./schemas";
+import { createAssessmentSchema, saveRevisionSchema } from "./schemas";
 
 export function contentHash(content: unknown): string {
   return createHash("sha256").update(JSON.stringify(content)).digest("hex");
@@ -120,9 +120,8 @@ export async function createAssessment(actor: Actor | null, input: unknown): Pro
   });
 }
 
-/** A revision with its assessment, job and the organisation's load register. */
-export async function getRevision(actor: Actor | null, revisionId: string) {
-  authorize(actor, "assessments:read");
+/** A revision with its assessment, job and the organisation's load register; no permission check (callers check). */
+export async function loadRevision(organisationId: string, revisionId: string) {
   if (!z.uuid().safeParse(revisionId).success) throw AppError.notFound("Revision");
   const db = await getDb();
   const [row] = await db
@@ -131,9 +130,14 @@ export async function getRevision(actor: Actor | null, revisionId: string) {
     .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
     .innerJoin(jobs, eq(jobs.id, assessments.jobId))
     .where(eq(revisions.id, revisionId));
-  if (!row || row.revision.organisationId !== actor.organisationId) throw AppError.notFound("Revision");
+  if (!row || row.revision.organisationId !== organisationId) throw AppError.notFound("Revision");
   const content = contentSchema.parse(row.revision.content);
-  return { ...row, content, register: await register(actor.organisationId) };
+  return { ...row, content, register: await register(organisationId) };
+}
+
+export async function getRevision(actor: Actor | null, revisionId: string) {
+  authorize(actor, "assessments:read");
+  return loadRevision(actor.organisationId, revisionId);
 }
 
 /** Saves a draft. A stale version answers 409 and nothing is written; so does a locked revision. */
@@ -163,31 +167,6 @@ export async function listApprovers(actor: Actor | null) {
     .orderBy(asc(users.name));
 }
 
-/** Submits a complete draft to a named approver; refused (422) while anything required is missing. */
-export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<void> {
-  authorize(actor, "assessments:submit");
-  const data = parseOrThrow(submitRevisionSchema, input);
-  const current = await getRevision(actor, revisionId);
-  if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
-  if (current.revision.version !== data.version) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
-  const review = reviewContent(current.content, current.register);
-  if (!review.canSubmit)
-    throw new AppError("validation", "The assessment is not complete", review.missing.map((m) => ({ path: m.step, message: m.message })));
-  const db = await getDb();
-  const approver = await db.query.users.findFirst({ where: eq(users.id, data.approverId) });
-  if (!approver || approver.organisationId !== actor.organisationId || approver.role !== "approver" || !approver.active)
-    throw new AppError("validation", "Some fields need attention", [{ path: "approverId", message: "Choose an active approver of your organisation" }]);
-  const hash = contentHash(current.content);
-  await db.transaction(async (tx) => {
-    const [updated] = await tx
-      .update(revisions)
-      .set({ status: "submitted", approverId: approver.id, reviewDate: data.reviewDate, submittedAt: new Date(), contentHash: hash, results: review.scores, worstBand: review.worstBand, updatedAt: new Date() })
-      .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.status, "draft")))
-      .returning({ id: revisions.id });
-    if (!updated) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.submitted", entityType: "revision", entityId: revisionId, contentHash: hash, details: { approverId: approver.id } });
-  });
-}
 
 /** One task of a draft, changed through the same save (and the same version check) as the whole draft. */
 async function changeTasks(actor: Actor | null, revisionId: string, version: unknown, change: (tasks: Content["tasks"]) => Content["tasks"]) {

@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { submitRevision } from "@/assessments/revisions/service";
+import { submitRevision } from "@/assessments/revisions/approval";
 import { handler, readJson } from "@/lib/api";
 import { requireApiActor } from "@/lib/auth/api";
 
@@ -7,6 +7,6 @@ import { requireApiActor } from "@/lib/auth/api";
 export const POST = handler(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const actor = await requireApiActor("assessments:submit");
   const { id } = await params;
-  await submitRevision(actor, id, await readJson(request));
-  return NextResponse.json({ status: "submitted" });
+  const { mail } = await submitRevision(actor, id, await readJson(request));
+  return NextResponse.json({ status: "submitted", mail });
 });

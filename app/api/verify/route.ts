@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { verifyPack } from "@/assessments/revisions/approval";
+import { handler } from "@/lib/api";
+import { AppError } from "@/lib/errors";
+
+export const MAX_VERIFY_BYTES = 20 * 1024 * 1024;
+
+/**
+ * Public: anyone holding a pack may check it. Upload as multipart/form-data (`file`); only PDFs,
+ * at most 20 MB. The answer names the revision only for a pack Heftwise issued or an altered copy of one.
+ */
+export const POST = handler(async (request: Request) => {
+  if (!(request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) throw new AppError("unsupported_media_type", "Upload the PDF as multipart/form-data");
+  if (Number(request.headers.get("content-length") ?? "0") > MAX_VERIFY_BYTES + 64 * 1024) throw new AppError("payload_too_large", "The file is larger than 20 MB");
+  const form = await request.formData().catch(() => {
+    throw new AppError("bad_request", "The upload could not be read");
+  });
+  const file = form.get("file");
+  if (!(file instanceof File) || file.size === 0) throw new AppError("validation", "Choose a PDF", [{ path: "file", message: "Choose a PDF" }]);
+  if (file.size > MAX_VERIFY_BYTES) throw new AppError("payload_too_large", "The file is larger than 20 MB");
+  const data = new Uint8Array(await file.arrayBuffer());
+  if (Buffer.from(data.subarray(0, 5)).toString("latin1") !== "%PDF-") throw new AppError("unsupported_media_type", "This file is not a PDF");
+  return NextResponse.json(await verifyPack(data));
+});

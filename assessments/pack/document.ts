@@ -1,0 +1,297 @@
+/**
+ * The assessment pack as a PDF (pdf-lib, the fonts shipped in fonts/): cover, summary of bands,
+ * each task's inputs, factors, limit, index, band, reasons and sources, lift plans with the sling
+ * drawn, the method statement, the hazard register, signatures — and on every page the safety
+ * caution, the revision, its content hash and the page number.
+ */
+import fontkit from "@pdf-lib/fontkit";
+import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
+import type { LiftResult } from "../lift-plan/lift";
+import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
+import { adviceForClear } from "../method-statement/advice";
+import type { TaskScore } from "../method-statement/score-task";
+import { fmt } from "../rules/format";
+import { worstBand } from "../rules/bands";
+import type { Band, Reason, Warning } from "../rules/types";
+import { COLOURS, MARGIN, Writer } from "./layout";
+
+export const PACK_CAUTION =
+  "Heftwise supports, and does not replace, the judgement of a competent person. Check every result on site, and follow local regulations, your organisation's procedures and licensed practice.";
+
+export interface PackFonts {
+  regular: Uint8Array;
+  bold: Uint8Array;
+  italic: Uint8Array;
+}
+
+export interface PackInput {
+  organisation: string;
+  title: string;
+  job: { name: string; client: string; location: string; lineReference: string | null; mileage: string | null; accessPoint: string | null; siteContactName: string | null; siteContactPhone: string | null };
+  revision: {
+    id: string;
+    number: number;
+    status: string;
+    authorName: string | null;
+    approverName: string | null;
+    submittedAt: Date | null;
+    approvedAt: Date | null;
+    reviewDate: string | null;
+    contentHash: string;
+  };
+  content: Content;
+  scores: TaskScore[];
+  componentNames: Record<string, string>;
+  signatures: { name: string; role: string; signedAt: Date; png: Uint8Array }[];
+  verifyUrl: string;
+  /** PNG of a QR code of `verifyUrl`. */
+  qrPng: Uint8Array;
+}
+
+const date = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 16).replace("T", " ") + " UTC" : "—");
+
+/** Builds the pack; the caller saves it (and signs it, for an approved revision). */
+export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise<PDFDocument> {
+  const doc = await PDFDocument.create();
+  doc.registerFontkit(fontkit);
+  const fonts = {
+    regular: await doc.embedFont(fontBytes.regular, { subset: true }),
+    bold: await doc.embedFont(fontBytes.bold, { subset: true }),
+    italic: await doc.embedFont(fontBytes.italic, { subset: true }),
+  };
+  const glyphs = new Set(fonts.regular.getCharacterSet());
+  const w = new Writer(doc, fonts, (cp) => glyphs.has(cp));
+  const { content, scores, revision } = input;
+
+  doc.setTitle(`${input.title} — revision ${revision.number}`);
+  doc.setAuthor(revision.authorName ?? input.organisation);
+  doc.setSubject(`Manual-handling and lift-plan assessment, ${input.job.name}`);
+  doc.setCreator("Heftwise");
+  doc.setProducer("Heftwise");
+  doc.setCreationDate(revision.approvedAt ?? revision.submittedAt ?? new Date(0));
+  doc.setModificationDate(revision.approvedAt ?? revision.submittedAt ?? new Date(0));
+  // A plain (uncompressed) entry, so /verify can name the revision even in an altered copy.
+  // pdf-lib keeps the Info dictionary private; its trailer reference is public.
+  const info = doc.context.lookup(doc.context.trailerInfo.Info);
+  (info as import("pdf-lib").PDFDict).set(PDFName.of("HeftwiseRevision"), PDFString.of(`heftwise-revision:${revision.id}`));
+
+  // Cover
+  w.page.drawRectangle({ x: 0, y: w.page.getHeight() - 70, width: w.page.getWidth(), height: 70, color: COLOURS.frame });
+  w.page.drawText("Heftwise", { x: MARGIN, y: w.page.getHeight() - 44, size: 20, font: fonts.bold, color: rgb(0.953, 0.937, 0.894) });
+  w.page.drawText(w.safe(input.organisation), { x: MARGIN + 120, y: w.page.getHeight() - 42, size: 11, font: fonts.regular, color: rgb(0.953, 0.937, 0.894) });
+  w.y -= 60;
+  w.heading(input.title, 1);
+  w.text(`${revision.status === "approved" ? "Approved" : revision.status === "superseded" ? "Superseded" : "Draft for approval — not for use on site"} · revision ${revision.number}`, { size: 12, font: fonts.bold, color: revision.status === "approved" ? COLOURS.band.clear : COLOURS.band.act });
+  w.space(6);
+  w.pairs([
+    ["Job", input.job.name],
+    ["Client", input.job.client],
+    ["Location", input.job.location],
+    ...(input.job.lineReference ? ([["Line and mileage", [input.job.lineReference, input.job.mileage].filter(Boolean).join(", ")]] as [string, string][]) : []),
+    ["Access point", input.job.accessPoint ?? "—"],
+    ["Site contact", [input.job.siteContactName, input.job.siteContactPhone].filter(Boolean).join(", ") || "—"],
+    ["Author", revision.authorName ?? "—"],
+    ["Approver", revision.approverName ?? "—"],
+    ["Submitted", date(revision.submittedAt)],
+    ["Approved", date(revision.approvedAt)],
+    ["Review by", revision.reviewDate ?? "—"],
+    ["Content hash (SHA-256)", revision.contentHash],
+  ]);
+  w.space(8);
+  const worst = worstBand(scores.map((s) => s.band).filter((b): b is Band => b !== null));
+  w.ensure(30);
+  w.page.drawText("Worst band of the tasks:", { x: MARGIN, y: w.y - 12, size: 11, font: fonts.bold, color: COLOURS.ink });
+  w.band(scores.some((s) => s.band) ? worst : null, MARGIN + 140, w.y - 16, 11);
+  w.y -= 30;
+  const qr = await doc.embedPng(input.qrPng);
+  w.ensure(130);
+  w.page.drawImage(qr, { x: MARGIN, y: w.y - 110, width: 110, height: 110 });
+  w.page.drawText("Check this document", { x: MARGIN + 124, y: w.y - 30, size: 11, font: fonts.bold, color: COLOURS.ink });
+  w.page.drawText(w.safe(input.verifyUrl), { x: MARGIN + 124, y: w.y - 46, size: 9.5, font: fonts.regular, color: COLOURS.band.clear });
+  w.page.drawText("Upload it there to see whether it is the approved revision, unaltered.", { x: MARGIN + 124, y: w.y - 62, size: 9, font: fonts.regular, color: COLOURS.muted });
+  w.y -= 124;
+  w.text(PACK_CAUTION, { size: 10, font: fonts.italic, color: COLOURS.muted });
+
+  // Summary of bands
+  w.newPage();
+  w.heading("Summary of bands");
+  w.table(
+    ["#", "Task", "Operation", "Component", "Load", "Band"],
+    content.tasks.map((t, i) => [
+      String(i + 1),
+      t.description || "—",
+      OPERATION_LABELS[t.operation],
+      t.componentId ? (input.componentNames[t.componentId] ?? "—") : "—",
+      scores[i].load !== null ? `${fmt(scores[i].load!)} kg${scores[i].estimatedMass ? " (estimated)" : ""}` : "—",
+      scores[i].band ? scores[i].band!.toUpperCase() : "not scored",
+    ]),
+    [0.05, 0.33, 0.16, 0.26, 0.1, 0.1],
+  );
+
+  // Each task
+  content.tasks.forEach((task, i) => {
+    const s = scores[i];
+    w.heading(`Task ${i + 1}: ${task.description || OPERATION_LABELS[task.operation]}`, 2);
+    w.ensure(24);
+    const bw = w.band(s.band);
+    w.page.drawText(w.safe(`${OPERATION_LABELS[task.operation]} · rules version ${s.rulesVersion}`), { x: MARGIN + bw + 8, y: w.y - 11, size: 9.5, font: fonts.regular, color: COLOURS.muted });
+    w.y -= 22;
+    if (s.load !== null) w.pairs([["Load", `${fmt(s.load)} kg${task.quantity > 1 ? ` (${task.quantity} × ${input.componentNames[task.componentId!] ?? "component"})` : ""}${s.estimatedMass ? " — ESTIMATED MASS: confirm by weighing" : ""}`]]);
+    const { niosh, filter, push, lift } = s.results;
+    if (niosh) {
+      w.heading("Revised NIOSH Lifting Equation", 3);
+      const o = niosh.inputs.origin;
+      const d = niosh.inputs.destination;
+      w.pairs([
+        ["Hands at start (H, V, twist)", `${fmt(o.h)} cm, ${fmt(o.v)} cm, ${fmt(o.a)}°`],
+        ["Hands at end (H, V, twist)", `${fmt(d.h)} cm, ${fmt(d.v)} cm, ${fmt(d.a)}°`],
+        ["Frequency, duration, grip", `${fmt(niosh.inputs.frequency)}/min, ${fmt(niosh.inputs.durationHours)} h, ${niosh.inputs.coupling}`],
+        ["HM, VM, DM, AM, FM, CM", [niosh.origin.hm, niosh.origin.vm, niosh.origin.dm, niosh.origin.am, niosh.origin.fm, niosh.origin.cm].map((x) => fmt(x, 2)).join(", ")],
+        ["RWL (limit)", `${fmt(niosh.limit)} kg`],
+        ["Lifting index", niosh.li === null ? "none: outside the equation's range" : fmt(niosh.li)],
+      ]);
+      reasons(w, niosh.reasons, niosh.warnings);
+    }
+    if (filter) {
+      w.heading("Guideline weights (HSE L23)", 3);
+      w.pairs([
+        ["Figures for, zone, reach", `${filter.inputs.sex === "male" ? "men" : "women"}, ${filter.inputs.zone.replace(/-/g, " ")}, ${filter.inputs.reach}`],
+        ["Frequency, twist, team", `${fmt(filter.inputs.frequency)}/min, ${fmt(filter.inputs.twistDeg)}°, ${filter.inputs.teamSize}`],
+        ...(filter.inputs.carryDistanceM ? ([["Carried", `${fmt(filter.inputs.carryDistanceM)} m`]] as [string, string][]) : []),
+        ["Table figure, kept after reductions", `${fmt(filter.baseGuideline)} kg, ${fmt(filter.reductionFactor * 100, 0)} %`],
+        ["Guideline (limit)", `${fmt(filter.guideline)} kg`],
+        ["Index", filter.index === null ? "none: no guideline weight remains" : fmt(filter.index)],
+      ]);
+      reasons(w, filter.reasons, filter.warnings);
+    }
+    if (push) {
+      w.heading("Pushing and pulling", 3);
+      w.pairs([
+        ["Mass, gradient", `${fmt(push.inputs.mass)} kg, ${fmt(push.inputs.gradient * 100, 1)} %`],
+        ["Force to start (limit)", `${fmt(push.startForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
+        ["Force to keep moving (limit)", `${fmt(push.sustainedForceN, 0)} N (${fmt(push.guidelineSustainedN, 0)} N)`],
+        ["Index", fmt(push.index)],
+      ]);
+      reasons(w, push.reasons, push.warnings);
+    }
+    if (lift) liftSection(w, lift, input.content.tasks[i].lift?.exclusionZoneM, input.content.tasks[i].lift?.groundBearingNotes);
+    const advice = adviceForClear(s);
+    if (advice.length) {
+      w.text("What would bring it to clear:", { size: 9.5, font: fonts.bold });
+      for (const a of advice) w.text(`- ${a}`, { size: 9.5, indent: 8 });
+    }
+    if (s.incomplete.length) w.text(`Incomplete: ${s.incomplete.join("; ")}.`, { size: 9.5, color: COLOURS.band.act });
+  });
+
+  // Method statement
+  w.newPage();
+  w.heading("Method statement");
+  w.heading("Scope", 3);
+  w.text(content.scope.summary || "—");
+  if (content.scope.startDate || content.scope.durationShifts) w.text(`Planned start ${content.scope.startDate || "—"}; ${content.scope.durationShifts} shift(s).`, { color: COLOURS.muted });
+  w.heading("Sequence of work", 3);
+  content.sequence.forEach((s, i) => w.text(`${i + 1}. ${s.text}`, { indent: 4 }));
+  w.heading("People", 3);
+  w.table(["Role", "Name", "Competence"], content.people.roles.map((r) => [r.role, r.name, r.competence]), [0.34, 0.33, 0.33]);
+  w.heading("Plant and equipment", 3);
+  w.text(content.people.plant.filter(Boolean).join("; ") || "—");
+  w.heading("PPE", 3);
+  w.text(content.people.ppe.filter(Boolean).join("; ") || "—");
+  w.heading("Emergency and environment", 3);
+  w.pairs([
+    ["Nearest hospital (A&E)", content.emergency.nearestHospital || "—"],
+    ["Arrangements", content.emergency.arrangements || "—"],
+    ["Environment", content.emergency.environment || "—"],
+  ]);
+
+  // Hazard register
+  w.heading("Hazard register");
+  w.table(
+    ["Hazard", "Who", "Before", "Controls (hierarchy of control)", "After"],
+    content.hazards.map((h) => [
+      h.hazard,
+      h.whoIsAtRisk,
+      `${h.likelihoodBefore} × ${h.severityBefore} = ${riskRating(h.likelihoodBefore, h.severityBefore)}`,
+      h.controls.map((c) => `${CONTROL_LEVEL_LABELS[c.level]}: ${c.text}`).join("\n"),
+      `${h.likelihoodAfter} × ${h.severityAfter} = ${riskRating(h.likelihoodAfter, h.severityAfter)}`,
+    ]),
+    [0.22, 0.13, 0.11, 0.43, 0.11],
+  );
+
+  // Signatures
+  w.heading("Signatures");
+  if (input.signatures.length === 0) w.text("Not yet countersigned.", { color: COLOURS.muted });
+  for (const sig of input.signatures) {
+    const image = await doc.embedPng(sig.png);
+    const scale = Math.min(200 / image.width, 70 / image.height, 1);
+    w.ensure(100);
+    w.page.drawImage(image, { x: MARGIN, y: w.y - image.height * scale - 4, width: image.width * scale, height: image.height * scale });
+    w.page.drawText(w.safe(`${sig.name}, ${sig.role}`), { x: MARGIN + 220, y: w.y - 20, size: 11, font: fonts.bold, color: COLOURS.ink });
+    w.page.drawText(`Countersigned ${date(sig.signedAt)}`, { x: MARGIN + 220, y: w.y - 36, size: 9.5, font: fonts.regular, color: COLOURS.muted });
+    w.y -= Math.max(image.height * scale + 14, 50);
+  }
+
+  w.footer((n, total) => [
+    `Caution: ${PACK_CAUTION}`,
+    w.safe(`${input.title} · revision ${revision.number} (${revision.status}) · content SHA-256 ${revision.contentHash.slice(0, 16)}… · page ${n} of ${total}`),
+  ]);
+  return doc;
+}
+
+function reasons(w: Writer, list: Reason[], warnings: Warning[]) {
+  for (const warning of warnings) w.text(`Warning: ${warning.message}`, { size: 9.5, color: COLOURS.band.act, indent: 4 });
+  for (const r of list) {
+    w.text(r.text, { size: 9.5, indent: 4, gap: 1 });
+    w.text(`Source: ${r.source}`, { size: 8, color: COLOURS.muted, indent: 12 });
+  }
+}
+
+function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groundNotes?: string) {
+  const { fonts } = w;
+  w.heading(`Lift plan — category ${lift.category}`, 3);
+  const people = lift.inputs.people ?? {};
+  w.pairs([
+    ["Hook load", `${fmt(lift.hookLoad)} kg (load ${fmt(lift.inputs.load)} + rigging ${fmt(lift.inputs.riggingMass)} + hook block ${fmt(lift.inputs.hookBlockMass)})`],
+    ["Rated capacity, radius", `${fmt(lift.inputs.ratedCapacity)} kg at ${lift.inputs.radiusM !== undefined ? `${fmt(lift.inputs.radiusM, 1)} m` : "—"} (max ${lift.inputs.maxRadiusM !== undefined ? `${fmt(lift.inputs.maxRadiusM, 1)} m` : "—"})`],
+    ["Utilisation", `${fmt(lift.utilisation * 100, 0)} %`],
+    ["Sling", `${lift.inputs.sling.legs} leg(s), ${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical, ${lift.inputs.sling.hitch ?? "straight"}, WLL ${fmt(lift.inputs.sling.legWll)} kg per leg`],
+    ["Leg tension, sling rating", `${fmt(lift.legTension)} kg per leg; assembly rated ${fmt(lift.slingWll)} kg — ${lift.slingOk ? "passes" : "FAILS"}`],
+    ["Category because", lift.categoryReasons.join("; ")],
+    ["Lift date", lift.inputs.liftDate ?? "—"],
+    ...lift.examinations.map((e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string]),
+    ["Wind", lift.inputs.wind ? `forecast ${fmt(lift.inputs.wind.forecastMs, 1)} m/s, limit ${fmt(lift.inputs.wind.inServiceLimitMs, 1)} m/s` : "—"],
+    ["Exclusion zone", exclusionZoneM !== undefined ? `${fmt(exclusionZoneM, 1)} m radius` : "—"],
+    ["Ground bearing", groundNotes || "—"],
+    ["Appointed person", people.appointedPerson ? `${people.appointedPerson.name} (${people.appointedPerson.competenceRef})` : "—"],
+    ["Lift supervisor", people.liftSupervisor ? `${people.liftSupervisor.name} (${people.liftSupervisor.competenceRef})` : "—"],
+    ["Operator", people.operator ? `${people.operator.name} (${people.operator.competenceRef})` : "—"],
+    ["Slinger/signaller", people.slingerSignaller ? `${people.slingerSignaller.name} (${people.slingerSignaller.competenceRef})` : "—"],
+  ]);
+  // The sling, drawn: hook, legs at their angle, tension on each leg, the load.
+  const height = 150;
+  w.ensure(height + 10);
+  const top = w.y - 10;
+  const cx = MARGIN + w.width / 2;
+  const drop = 100;
+  const angle = (lift.inputs.sling.angleFromVerticalDeg * Math.PI) / 180;
+  const spread = Math.tan(angle) * drop;
+  const legs = lift.inputs.sling.legs;
+  const xs = legs === 1 ? [cx] : legs === 2 ? [cx - spread, cx + spread] : legs === 3 ? [cx - spread, cx, cx + spread] : [cx - spread, cx - spread / 3, cx + spread / 3, cx + spread];
+  w.page.drawCircle({ x: cx, y: top - 6, size: 4, color: COLOURS.ink });
+  const colour = lift.slingOk ? COLOURS.frame : COLOURS.band.act;
+  xs.forEach((x, i) => {
+    w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x, y: top - 6 - drop }, thickness: 2, color: colour });
+    if (legs !== 4 || i === 0 || i === 3)
+      w.page.drawText(`${fmt(lift.legTension, 0)} kg`, { x: (cx + x) / 2 + (x < cx ? -46 : 6), y: top - 6 - drop / 2, size: 9, font: fonts.bold, color: colour });
+  });
+  if (legs > 1) {
+    w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x: cx, y: top - 6 - drop }, thickness: 0.6, color: COLOURS.muted, dashArray: [3, 3] });
+    w.page.drawText(`${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical`, { x: cx + 8, y: top - 40, size: 9, font: fonts.regular, color: COLOURS.band.clear });
+  }
+  const loadWidth = Math.max(120, spread * 2 + 30);
+  w.page.drawRectangle({ x: cx - loadWidth / 2, y: top - 6 - drop - 30, width: loadWidth, height: 30, color: COLOURS.band.watch });
+  w.page.drawText(`${fmt(lift.slingLoad, 0)} kg`, { x: cx - 20, y: top - drop - 26, size: 10, font: fonts.bold, color: rgb(1, 1, 1) });
+  w.y = top - height;
+  if (legs === 4) w.text("Four legs drawn; three are taken to share the load.", { size: 8.5, color: COLOURS.muted });
+  reasons(w, lift.reasons, lift.warnings);
+}

@@ -1,0 +1,74 @@
+/**
+ * Renders the pack of one revision from what is stored: its content, the results snapshot saved with
+ * it (so an approved pack never changes when the rules do), names, signatures.
+ */
+import { readFile } from "node:fs/promises";
+import path from "node:path";
+import { asc, eq } from "drizzle-orm";
+import QRCode from "qrcode";
+import type { Db } from "@/db/client";
+import { assessments, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
+import { config } from "@/lib/config";
+import { contentSchema } from "../method-statement/content";
+import type { TaskScore } from "../method-statement/score-task";
+import { buildPack, type PackFonts } from "./document";
+import { savePack } from "./sign";
+
+let fonts: Promise<PackFonts> | undefined;
+function packFonts(): Promise<PackFonts> {
+  const dir = path.join(process.cwd(), "fonts");
+  fonts ??= Promise.all(
+    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map((f) => readFile(path.join(dir, f))),
+  ).then(([regular, bold, italic]) => ({ regular, bold, italic }));
+  return fonts;
+}
+
+export const verifyUrl = () => `${config().NEXTAUTH_URL.replace(/\/$/, "")}/verify`;
+
+type Tx = Db | Parameters<Parameters<Db["transaction"]>[0]>[0];
+
+/**
+ * The pack PDF of a revision; signed when the organisation's key is given (fetch it before any
+ * transaction: PGlite serves one connection, so a query outside an open transaction would wait on it).
+ */
+export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8Array; passphrase: string }): Promise<Uint8Array> {
+  const [row] = await tx
+    .select({ revision: revisions, assessment: assessments, job: jobs, organisation: organisations })
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .innerJoin(organisations, eq(organisations.id, revisions.organisationId))
+    .where(eq(revisions.id, revisionId));
+  const { revision, assessment, job, organisation } = row;
+  const nameOf = async (id: string | null) => (id ? ((await tx.select({ name: users.name }).from(users).where(eq(users.id, id)))[0]?.name ?? null) : null);
+  const register = await tx.select({ id: components.id, name: components.name }).from(components).where(eq(components.organisationId, organisation.id));
+  const signed = await tx.select().from(signatures).where(eq(signatures.revisionId, revisionId)).orderBy(asc(signatures.signedAt));
+  const url = verifyUrl();
+  const doc = await buildPack(
+    {
+      organisation: organisation.name,
+      title: assessment.title,
+      job,
+      revision: {
+        id: revision.id,
+        number: revision.number,
+        status: revision.status,
+        authorName: await nameOf(revision.authorId),
+        approverName: await nameOf(revision.approverId),
+        submittedAt: revision.submittedAt,
+        approvedAt: revision.approvedAt,
+        reviewDate: revision.reviewDate,
+        contentHash: revision.contentHash ?? "",
+      },
+      content: contentSchema.parse(revision.content),
+      scores: (revision.results ?? []) as TaskScore[],
+      componentNames: Object.fromEntries(register.map((c) => [c.id, c.name])),
+      signatures: signed.map((s) => ({ name: s.signerName, role: s.signerRole, signedAt: s.signedAt, png: s.image })),
+      verifyUrl: url,
+      qrPng: new Uint8Array(await QRCode.toBuffer(url, { type: "png", margin: 1, width: 220, errorCorrectionLevel: "M" })),
+    },
+    await packFonts(),
+  );
+  if (!key) return savePack(doc);
+  return savePack(doc, { p12: key.p12, passphrase: key.passphrase, signerName: organisation.name, location: job.location });
+}
