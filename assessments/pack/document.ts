@@ -281,7 +281,8 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
   const colour = lift.slingOk ? COLOURS.frame : COLOURS.band.act;
   xs.forEach((x, i) => {
     w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x, y: top - 6 - drop }, thickness: 2, color: colour });
-    if (legs !== 4 || i === 0 || i === 3)
+    // Every leg carries the same tension: label the outer legs only.
+    if (i === 0 || i === xs.length - 1)
       w.page.drawText(`${fmt(lift.legTension, 0)} kg`, { x: (cx + x) / 2 + (x < cx ? -46 : 6), y: top - 6 - drop / 2, size: 9, font: fonts.bold, color: colour });
   });
   if (legs > 1) {

@@ -114,12 +114,14 @@ export class Writer {
   /** Rows of label and value in two columns. */
   pairs(rows: [string, string][], labelWidth = 150) {
     for (const [label, value] of rows) {
+      const labelLines = this.lines(label, this.fonts.bold, 9.5, labelWidth - 10);
       const valueLines = this.lines(value, this.fonts.regular, 10, this.width - labelWidth);
-      this.ensure(13 * valueLines.length);
+      const count = Math.max(labelLines.length, valueLines.length);
+      this.ensure(13 * count);
       const top = this.y;
-      this.page.drawText(this.safe(label), { x: MARGIN, y: top - 10, size: 9.5, font: this.fonts.bold, color: COLOURS.muted });
+      labelLines.forEach((line, i) => this.page.drawText(line, { x: MARGIN, y: top - 10 - i * 13, size: 9.5, font: this.fonts.bold, color: COLOURS.muted }));
       valueLines.forEach((line, i) => this.page.drawText(line, { x: MARGIN + labelWidth, y: top - 10 - i * 13, size: 10, font: this.fonts.regular, color: COLOURS.ink }));
-      this.y = top - 13 * valueLines.length - 2;
+      this.y = top - 13 * count - 2;
     }
   }
 
@@ -165,12 +167,10 @@ export class Writer {
   /** Stamps the footer on every page: caution, revision, content hash, page n of N. */
   footer(lines: (pageNumber: number, pageCount: number) => string[]) {
     this.pages.forEach((page, i) => {
-      const texts = lines(i + 1, this.pages.length);
-      page.drawLine({ start: { x: MARGIN, y: MARGIN + 30 }, end: { x: A4.width - MARGIN, y: MARGIN + 30 }, thickness: 0.6, color: COLOURS.rule });
-      texts.forEach((t, j) => {
-        const wrapped = this.lines(t, this.fonts.regular, 7, this.width);
-        page.drawText(wrapped[0], { x: MARGIN, y: MARGIN + 20 - j * 9, size: 7, font: this.fonts.regular, color: COLOURS.muted });
-      });
+      const wrapped = lines(i + 1, this.pages.length).flatMap((t) => this.lines(t, this.fonts.regular, 7, this.width));
+      const top = MARGIN + 8 + wrapped.length * 9;
+      page.drawLine({ start: { x: MARGIN, y: top + 4 }, end: { x: A4.width - MARGIN, y: top + 4 }, thickness: 0.6, color: COLOURS.rule });
+      wrapped.forEach((line, j) => page.drawText(line, { x: MARGIN, y: top - 7 - j * 9, size: 7, font: this.fonts.regular, color: COLOURS.muted }));
     });
   }
 }

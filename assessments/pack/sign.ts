@@ -5,7 +5,7 @@
  */
 import { pdflibAddPlaceholder } from "@signpdf/placeholder-pdf-lib";
 import { P12Signer } from "@signpdf/signer-p12";
-import signpdf from "@signpdf/signpdf";
+import { SignPdf } from "@signpdf/signpdf";
 import type { PDFDocument } from "pdf-lib";
 
 export interface SigningMaterial {
@@ -27,5 +27,5 @@ export async function savePack(doc: PDFDocument, signing?: SigningMaterial): Pro
   });
   const unsigned = await doc.save({ useObjectStreams: false });
   const signer = new P12Signer(Buffer.from(signing.p12), { passphrase: signing.passphrase });
-  return new Uint8Array(await signpdf.sign(Buffer.from(unsigned), signer));
+  return new Uint8Array(await new SignPdf().sign(Buffer.from(unsigned), signer));
 }
