@@ -4,7 +4,7 @@
  * the organisation first; another organisation's record is "not found".
  */
 import { createHash } from "node:crypto";
-import { and, asc, desc, eq, ilike, inArray, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, components, jobs, revisions, users } from "@/db/schema";
@@ -36,6 +36,8 @@ export const assessmentListQuerySchema = pageQuerySchema.extend({
   jobId: z.uuid().optional(),
   worstBand: z.enum(["clear", "watch", "act", "stop"]).optional(),
   authorId: z.uuid().optional(),
+  /** "30": approved revisions whose review date falls within the next 30 days (or has passed). */
+  reviewDue: z.enum(["30"]).optional(),
   sort: z.enum(["updatedAt", "-updatedAt", "title", "-title"]).default("-updatedAt"),
 });
 
@@ -56,6 +58,10 @@ export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
   if (q.jobId) where.push(eq(assessments.jobId, q.jobId));
   if (q.worstBand) where.push(eq(revisions.worstBand, q.worstBand));
   if (q.authorId) where.push(eq(revisions.authorId, q.authorId));
+  if (q.reviewDue) {
+    const limit = new Date(Date.now() + Number(q.reviewDue) * 86_400_000).toISOString().slice(0, 10);
+    where.push(eq(revisions.status, "approved"), lte(revisions.reviewDate, limit));
+  }
   const column = q.sort.endsWith("title") ? assessments.title : revisions.updatedAt;
   const base = () =>
     db

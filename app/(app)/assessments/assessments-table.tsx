@@ -35,6 +35,16 @@ const columns: ColumnDef<Row, unknown>[] = [
   { id: "status", header: "Status", cell: ({ row }) => STATUS[row.original.status] },
   { id: "worstBand", header: "Worst band", cell: ({ row }) => <BandChip band={row.original.worstBand} /> },
   { id: "author", header: "Author", cell: ({ row }) => row.original.authorName ?? "—" },
+  {
+    id: "reviewDate",
+    header: "Review by",
+    cell: ({ row }) => {
+      const { reviewDate, status } = row.original;
+      if (!reviewDate) return "—";
+      const due = status === "approved" && Date.parse(reviewDate) <= Date.now() + 30 * 86_400_000;
+      return due ? <span className="rounded bg-band-watch px-1.5 py-0.5 font-bold text-white">{reviewDate} — due</span> : reviewDate;
+    },
+  },
   { id: "updatedAt", header: "Last saved", cell: ({ row }) => row.original.updatedAt.slice(0, 16).replace("T", " ") },
 ];
 
@@ -44,6 +54,7 @@ export function AssessmentsTable({ jobs, authors }: { jobs: { id: string; name: 
     { key: "jobId", label: "Job", options: jobs.map((j) => ({ value: j.id, label: j.name })) },
     { key: "worstBand", label: "Worst band", options: ["clear", "watch", "act", "stop"].map((b) => ({ value: b, label: b[0].toUpperCase() + b.slice(1) })) },
     { key: "authorId", label: "Author", options: authors.map((a) => ({ value: a.id, label: a.name })) },
+    { key: "reviewDue", label: "Review", options: [{ value: "30", label: "Due within 30 days" }] },
   ];
   return (
     <ServerTable<Row>

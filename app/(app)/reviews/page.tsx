@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { DataTable, EmptyState } from "@/app/_components/table";
 import { listAwaitingReview } from "@/assessments/revisions/queries";
 import { requirePermission } from "@/lib/auth/guard";
@@ -18,7 +19,11 @@ export default async function ReviewsPage() {
         <DataTable head={["Assessment", "Job", "Revision", "Submitted"]} caption="Awaiting review">
           {rows.map((r) => (
             <tr key={r.revisionId} className="border-t border-rule">
-              <td className="px-3 py-2 font-bold">{r.title}</td>
+              <td className="px-3 py-2 font-bold">
+                <Link href={`/reviews/${r.revisionId}`} className="text-accent underline">
+                  {r.title}
+                </Link>
+              </td>
               <td className="px-3 py-2">{r.jobName}</td>
               <td className="px-3 py-2">{r.number}</td>
               <td className="px-3 py-2">{r.submittedAt?.toISOString().slice(0, 10) ?? "—"}</td>

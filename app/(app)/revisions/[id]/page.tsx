@@ -1,9 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { BandChip } from "@/app/_components/results/band";
-import { TaskResult } from "@/app/_components/results/task-result";
-import { reviewContent } from "@/assessments/method-statement/score-task";
-import { OPERATION_LABELS } from "@/assessments/method-statement/content";
+import Link from "next/link";
+import type { TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
 import { requirePermission } from "@/lib/auth/guard";
@@ -11,6 +9,8 @@ import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { STEPS } from "./wizard/steps-list";
 import { Wizard } from "./wizard/wizard";
+import { NewRevisionButton } from "./new-revision-button";
+import { ReadOnlyRevision } from "./read-only-revision";
 
 export const metadata: Metadata = { title: "Assessment" };
 
@@ -27,6 +27,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
   const { revision, assessment, job, content, register } = data;
   const editable = revision.status === "draft" && can(actor, "assessments:write");
   const initialStep = STEPS.find((s) => s.key === step)?.key;
+  const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
 
   return (
     <div className="space-y-4">
@@ -34,10 +35,33 @@ export default async function RevisionPage({ params, searchParams }: { params: P
         <p className="text-sm text-muted">{job.name}</p>
         <h1 className="text-2xl font-bold">{assessment.title}</h1>
         <p className="text-sm">
-          Revision {revision.number} · <strong>{STATUS_TEXT[revision.status]}</strong>
-          {revision.returnComments ? " · returned with comments" : ""}
+          Revision {revision.number} · <strong data-testid="revision-status">{STATUS_TEXT[revision.status]}</strong>
+          {revision.reviewDate ? ` · review by ${revision.reviewDate}` : ""}
         </p>
       </header>
+      <nav className="flex flex-wrap gap-4 text-sm">
+        {revision.status !== "draft" && (
+          <a href={`/api/v1/revisions/${revision.id}/pack`} className="font-bold text-accent underline">
+            Download the {revision.status === "submitted" ? "draft" : "signed"} pack (PDF)
+          </a>
+        )}
+        <Link href={`/assessments/${assessment.id}/audit`} className="font-bold text-accent underline">
+          Audit trail
+        </Link>
+        {revision.status === "approved" && can(actor, "assessments:write") && <NewRevisionButton revisionId={revision.id} />}
+      </nav>
+      {revision.status === "draft" && returned && (
+        <section className="rounded-lg border-l-4 border-band-act bg-white p-4" aria-label="Returned with comments">
+          <h2 className="font-bold">Returned by {returned.by} with comments</h2>
+          <ul className="mt-1 space-y-1">
+            {Object.entries(returned.comments).map(([step, text]) => (
+              <li key={step}>
+                <strong>{STEPS.find((s) => s.key === step)?.label ?? step}:</strong> {text}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
       {editable ? (
         <Wizard
           revisionId={revision.id}
@@ -48,38 +72,8 @@ export default async function RevisionPage({ params, searchParams }: { params: P
           initialStep={initialStep}
         />
       ) : (
-        <ReadOnlyRevision content={content} register={register} worstBand={revision.worstBand as Band | null} />
+        <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
       )}
-    </div>
-  );
-}
-
-function ReadOnlyRevision({ content, register, worstBand }: { content: Awaited<ReturnType<typeof getRevision>>["content"]; register: Awaited<ReturnType<typeof getRevision>>["register"]; worstBand: Band | null }) {
-  const review = reviewContent(content, register);
-  return (
-    <div className="space-y-4">
-      <p className="rounded border-l-4 border-band-watch bg-white p-3 text-sm">This revision is no longer a draft and cannot be edited here.</p>
-      <div className="flex items-center gap-2">
-        <span className="font-bold">Worst band:</span> <BandChip band={worstBand} large />
-      </div>
-      <section className="rounded-lg border border-rule bg-white p-4">
-        <h2 className="text-xl font-bold">Scope</h2>
-        <p className="whitespace-pre-line">{content.scope.summary}</p>
-        <h2 className="mt-4 text-xl font-bold">Sequence of work</h2>
-        <ol className="list-decimal pl-6">
-          {content.sequence.map((s) => (
-            <li key={s.id}>{s.text}</li>
-          ))}
-        </ol>
-      </section>
-      {content.tasks.map((t, i) => (
-        <section key={t.id} className="space-y-2 rounded-lg border border-rule bg-white p-4">
-          <h2 className="font-bold">
-            Task {i + 1}: {t.description} <span className="font-normal text-muted">— {OPERATION_LABELS[t.operation]}</span>
-          </h2>
-          <TaskResult score={review.scores[i]} />
-        </section>
-      ))}
     </div>
   );
 }

@@ -1,0 +1,46 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { SafetyCaution } from "@/app/_components/safety-caution";
+import type { TaskScore } from "@/assessments/method-statement/score-task";
+import { getReview } from "@/assessments/revisions/approval";
+import type { Band } from "@/assessments/rules/types";
+import { requirePermission } from "@/lib/auth/guard";
+import { AppError } from "@/lib/errors";
+import { ReadOnlyRevision } from "../../revisions/[id]/read-only-revision";
+import { ReviewActions } from "./review-actions";
+
+export const metadata: Metadata = { title: "Review" };
+
+export default async function ReviewPage({ params }: { params: Promise<{ id: string }> }) {
+  const actor = await requirePermission("reviews:read");
+  const { id } = await params;
+  const review = await getReview(actor, id).catch((err) => {
+    if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
+    throw err;
+  });
+  const { revision, assessment, job, content, author, signatures } = review;
+  return (
+    <div className="space-y-4">
+      <header>
+        <p className="text-sm text-muted">{job.name}</p>
+        <h1 className="text-2xl font-bold">Review: {assessment.title}</h1>
+        <p className="text-sm">
+          Revision {revision.number} by {author?.name ?? "—"}, submitted {revision.submittedAt?.toISOString().slice(0, 16).replace("T", " ")} UTC · review by {revision.reviewDate ?? "—"} ·{" "}
+          <strong data-testid="review-status">{revision.status === "submitted" ? "Waiting for your decision" : revision.status === "approved" ? "Approved" : revision.status}</strong>
+        </p>
+        <a href={`/api/v1/revisions/${revision.id}/pack`} className="mt-2 inline-block font-bold text-accent underline">
+          Download the {revision.status === "submitted" ? "draft" : "signed"} pack (PDF)
+        </a>
+      </header>
+      <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
+      {revision.status === "submitted" ? (
+        <ReviewActions revisionId={revision.id} version={revision.version} defaultName={actor.name} />
+      ) : (
+        <p className="rounded-lg border border-rule bg-white p-4">
+          {signatures.map((s) => `Countersigned by ${s.name}, ${s.role}, ${s.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC.`).join(" ")}
+        </p>
+      )}
+      <SafetyCaution />
+    </div>
+  );
+}

@@ -1,0 +1,138 @@
+"use client";
+
+import * as Dialog from "@radix-ui/react-dialog";
+import { useRouter } from "next/navigation";
+import { useRef, useState } from "react";
+import { FormMessage, PrimaryButton, SecondaryButton, TextField } from "@/app/_components/form";
+import { SignatureField, type SignatureFieldHandle } from "@/app/_components/signature-field";
+import { STEP_KEYS } from "@/assessments/revisions/schemas";
+
+const SECTION_LABELS: Record<(typeof STEP_KEYS)[number], string> = {
+  scope: "Scope",
+  sequence: "Sequence of work",
+  loads: "Loads & lifts",
+  hazards: "Hazards & controls",
+  people: "People, plant & PPE",
+  emergency: "Emergency & environment",
+};
+
+type Issues = Record<string, string>;
+
+export function ReviewActions({ revisionId, version, defaultName }: { revisionId: string; version: number; defaultName: string }) {
+  const router = useRouter();
+  const signature = useRef<SignatureFieldHandle>(null);
+  const [name, setName] = useState(defaultName);
+  const [role, setRole] = useState("");
+  const [issues, setIssues] = useState<Issues>({});
+  const [confirmOpen, setConfirmOpen] = useState(false);
+  const [drawn, setDrawn] = useState<string | null>(null);
+  const [comments, setComments] = useState<Record<string, string>>({});
+  const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  const post = async (path: string, body: unknown) => {
+    setBusy(true);
+    setOutcome(null);
+    const res = await fetch(`/api/v1/revisions/${revisionId}/${path}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+    const json = await res.json().catch(() => ({}));
+    setBusy(false);
+    return { ok: res.ok, json };
+  };
+
+  const askToSign = () => {
+    const image = signature.current?.toDataUrl() ?? null;
+    const found: Issues = {};
+    if (name.trim().length < 2) found.name = "Type your name";
+    if (role.trim().length < 2) found.role = "Type your role";
+    if (!image) found.signature = "Draw your signature";
+    setIssues(found);
+    if (Object.keys(found).length) return;
+    setDrawn(image);
+    setConfirmOpen(true);
+  };
+
+  const countersign = async () => {
+    setConfirmOpen(false);
+    const { ok, json } = await post("approve", { version, name, role, signature: drawn });
+    if (ok) {
+      setOutcome({ tone: "success", text: json.mail?.status === "failed" ? "Approved. The author could not be e-mailed: see Sent e-mail." : "Approved and countersigned. The author has been told." });
+      router.refresh();
+    } else {
+      setIssues(Object.fromEntries((json.error?.issues ?? []).map((i: { path: string; message: string }) => [i.path, i.message])));
+      setOutcome({ tone: "error", text: json.error?.message ?? "Could not approve." });
+    }
+  };
+
+  const sendBack = async () => {
+    const { ok, json } = await post("return", { version, comments });
+    if (ok) {
+      setOutcome({ tone: "success", text: "Returned to the author with your comments." });
+      router.refresh();
+    } else setOutcome({ tone: "error", text: json.error?.issues?.[0]?.message ?? json.error?.message ?? "Could not return it." });
+  };
+
+  return (
+    <div className="grid gap-4 lg:grid-cols-2">
+      <section aria-labelledby="countersign-heading" className="space-y-3 rounded-lg border-2 border-accent bg-white p-4">
+        <h2 id="countersign-heading" className="text-xl font-bold">
+          Countersign
+        </h2>
+        <p className="text-sm text-muted">Your signature approves this revision. It is then locked, and a digitally signed pack is issued.</p>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <TextField label="Your name" name="signer-name" value={name} onChange={(e) => setName(e.target.value)} error={issues.name} />
+          <TextField label="Your role" name="signer-role" placeholder="e.g. Contracts manager" value={role} onChange={(e) => setRole(e.target.value)} error={issues.role} />
+        </div>
+        <SignatureField ref={signature} label="Sign here" error={issues.signature} />
+        <PrimaryButton type="button" disabled={busy} onClick={askToSign}>
+          Countersign and approve…
+        </PrimaryButton>
+        <Dialog.Root open={confirmOpen} onOpenChange={setConfirmOpen}>
+          <Dialog.Portal>
+            <Dialog.Overlay className="fixed inset-0 bg-black/40" />
+            <Dialog.Content className="fixed left-1/2 top-1/2 w-[min(92vw,30rem)] -translate-x-1/2 -translate-y-1/2 rounded-lg bg-paper p-6 shadow-xl">
+              <Dialog.Title className="text-lg font-bold">Approve this revision?</Dialog.Title>
+              <Dialog.Description className="mt-2 text-sm text-muted">
+                You, {name} ({role}), approve it for use on site. It is locked and a signed pack is issued; changes then need a new revision.
+              </Dialog.Description>
+              {/* eslint-disable-next-line @next/next/no-img-element -- a data URL of the drawing just made */}
+              {drawn && <img src={drawn} alt="Your signature" className="mt-3 h-20 rounded border border-rule bg-white" />}
+              <div className="mt-5 flex justify-end gap-2">
+                <Dialog.Close asChild>
+                  <SecondaryButton type="button">Not yet</SecondaryButton>
+                </Dialog.Close>
+                <PrimaryButton type="button" onClick={countersign}>
+                  Approve and sign
+                </PrimaryButton>
+              </div>
+            </Dialog.Content>
+          </Dialog.Portal>
+        </Dialog.Root>
+      </section>
+      <section aria-labelledby="return-heading" className="space-y-3 rounded-lg border border-rule bg-white p-4">
+        <h2 id="return-heading" className="text-xl font-bold">
+          Return with comments
+        </h2>
+        <p className="text-sm text-muted">Comment on the sections that need changing. The author gets it back as a draft.</p>
+        {STEP_KEYS.map((key) => (
+          <label key={key} className="block text-sm font-bold">
+            {SECTION_LABELS[key]}
+            <textarea
+              rows={2}
+              value={comments[key] ?? ""}
+              onChange={(e) => setComments({ ...comments, [key]: e.target.value })}
+              className="mt-1 block w-full rounded border border-rule px-2 py-1.5 font-normal"
+            />
+          </label>
+        ))}
+        <SecondaryButton type="button" disabled={busy} onClick={sendBack}>
+          Return to the author
+        </SecondaryButton>
+      </section>
+      {outcome && (
+        <div className="lg:col-span-2">
+          <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>
+        </div>
+      )}
+    </div>
+  );
+}
