@@ -1,5 +1,10 @@
 import { expect, test } from "@playwright/test";
-import { signIn, steps } from "./helpers";
+import { readFileSync, writeFileSync } from "node:fs";
+import { signIn, steps, waitForMail } from "./helpers";
+
+// One story in order: the adviser plans the lifts and submits; the approver countersigns from the
+// e-mail; the signed pack is downloaded and checked on /verify.
+test.describe.configure({ mode: "serial" });
 
 test("an adviser plans a lift: sling diagram, bad input refused, a complete plan lets the assessment be submitted", async ({ page }) => {
   await signIn(page, "adviser@brackenfold.example");
@@ -47,4 +52,75 @@ test("an adviser plans a lift: sling diagram, bad input refused, a complete plan
   await page.getByRole("button", { name: "Submit for approval" }).click();
   await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
   await expect(page.getByText("cannot be edited here")).toBeVisible();
+});
+
+test("the approver opens the e-mailed link, draws a signature and approves; the adviser downloads the signed pack", async ({ browser }) => {
+  const mail = await waitForMail("approver@brackenfold.example");
+  expect(mail.subject).toContain("Review requested: Cabinet and chamber ring");
+  const link = mail.text.match(/https?:\/\/\S+\/reviews\/[0-9a-f-]+/)![0];
+
+  const approverContext = await browser.newContext();
+  const approver = await approverContext.newPage();
+  await signIn(approver, "approver@brackenfold.example");
+  await approver.goto(link);
+  await expect(approver.getByRole("heading", { name: /Review: Cabinet and chamber ring/ })).toBeVisible();
+  await expect(approver.getByText("Waiting for your decision")).toBeVisible();
+
+  // Nothing drawn: refused with the reason.
+  await approver.getByLabel("Your role").fill("Contracts manager");
+  await approver.getByRole("button", { name: "Countersign and approve…" }).click();
+  await expect(approver.getByText("Draw your signature")).toBeVisible();
+
+  const pad = approver.getByTestId("signature-pad");
+  await pad.scrollIntoViewIfNeeded();
+  const box = (await pad.boundingBox())!;
+  await approver.mouse.move(box.x + 20, box.y + box.height / 2);
+  await approver.mouse.down();
+  for (let i = 1; i <= 20; i++) await approver.mouse.move(box.x + 20 + i * 12, box.y + box.height / 2 + Math.sin(i) * 25, { steps: 2 });
+  await approver.mouse.up();
+  await approver.getByRole("button", { name: "Countersign and approve…" }).click();
+  const dialog = approver.getByRole("dialog");
+  await expect(dialog).toContainText("Approve this revision?");
+  await dialog.getByRole("button", { name: "Approve and sign" }).click();
+  await expect(approver.getByText(/Countersigned by Ruth Okonjo-Vale, Contracts manager/)).toBeVisible();
+  await expect(approver.getByTestId("review-status")).toHaveText("Approved");
+  await approverContext.close();
+
+  const approved = await waitForMail("adviser@brackenfold.example");
+  expect(approved.subject).toMatch(/^Approved: Cabinet and chamber ring/);
+
+  const adviserContext = await browser.newContext();
+  const adviser = await adviserContext.newPage();
+  await signIn(adviser, "adviser@brackenfold.example");
+  await adviser.goto(approved.text.match(/https?:\/\/\S+\/revisions\/[0-9a-f-]+/)![0]);
+  await expect(adviser.getByTestId("revision-status")).toHaveText("Approved");
+  const downloadPromise = adviser.waitForEvent("download");
+  await adviser.getByRole("link", { name: "Download the signed pack (PDF)" }).click();
+  const download = await downloadPromise;
+  const file = test.info().outputPath("pack.pdf");
+  await download.saveAs(file);
+  const pdf = readFileSync(file);
+  expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
+  expect(pdf.toString("latin1")).toContain("/adbe.pkcs7.detached");
+
+  // Anyone can check it on /verify, signed in or not; one changed byte is caught.
+  const anyone = await browser.newContext();
+  const visitor = await anyone.newPage();
+  await visitor.goto("/verify");
+  await visitor.getByLabel("Pack (PDF, at most 20 MB)").setInputFiles(file);
+  await visitor.getByRole("button", { name: "Check" }).click();
+  await expect(visitor.getByTestId("verify-answer")).toHaveAttribute("data-result", "authentic");
+  await expect(visitor.getByTestId("verify-answer")).toContainText("approved and current");
+  const tampered = Buffer.from(pdf);
+  tampered[tampered.indexOf("Hollin Vale")] = "J".charCodeAt(0);
+  const tamperedFile = test.info().outputPath("tampered.pdf");
+  writeFileSync(tamperedFile, tampered);
+  await visitor.getByLabel("Pack (PDF, at most 20 MB)").setInputFiles(tamperedFile);
+  await visitor.getByRole("button", { name: "Check" }).click();
+  await expect(visitor.getByTestId("verify-answer")).toHaveAttribute("data-result", "altered");
+  await visitor.getByLabel("Pack (PDF, at most 20 MB)").setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("plain words, not a PDF") });
+  await visitor.getByRole("button", { name: "Check" }).click();
+  await expect(visitor.getByText("This file is not a PDF")).toBeVisible();
+  await anyone.close();
+  await adviserContext.close();
 });

@@ -72,7 +72,13 @@ export default async function RevisionPage({ params, searchParams }: { params: P
           initialStep={initialStep}
         />
       ) : (
-        <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
+        <>
+          <p className="rounded border-l-4 border-band-watch bg-white p-3 text-sm">
+            {revision.status === "draft" ? "Your role can read this draft but not edit it." : "This revision is no longer a draft and cannot be edited here."}
+            {revision.status === "approved" && " To change it, start a new revision."}
+          </p>
+          <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
+        </>
       )}
     </div>
   );
