@@ -13,7 +13,7 @@ import { config } from "./config";
 
 const passphraseFor = (organisationId: string) => createHmac("sha256", config().secret).update(`heftwise-signing-key:${organisationId}`).digest("hex");
 
-function makeP12(organisationName: string, passphrase: string): { p12: Uint8Array; certificatePem: string } {
+export function makeP12(organisationName: string, passphrase: string): { p12: Uint8Array; certificatePem: string } {
   // Node makes the RSA key natively (milliseconds); node-forge wraps it in a certificate and PKCS#12.
   const { privateKey, publicKey } = generateKeyPairSync("rsa", { modulusLength: 2048, publicKeyEncoding: { type: "spki", format: "pem" }, privateKeyEncoding: { type: "pkcs8", format: "pem" } });
   const key = forge.pki.privateKeyFromPem(privateKey);

@@ -9,16 +9,18 @@ import QRCode from "qrcode";
 import type { Db } from "@/db/client";
 import { assessments, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
 import { config } from "@/lib/config";
+import { woffToTtf } from "@/lib/woff";
 import { contentSchema } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { buildPack, type PackFonts } from "./document";
 import { savePack } from "./sign";
 
 let fonts: Promise<PackFonts> | undefined;
-function packFonts(): Promise<PackFonts> {
+/** The shipped fonts, read and converted to TrueType once per process. */
+export function packFonts(): Promise<PackFonts> {
   const dir = path.join(process.cwd(), "fonts");
   fonts ??= Promise.all(
-    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map((f) => readFile(path.join(dir, f))),
+    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map(async (f) => woffToTtf(await readFile(path.join(dir, f)))),
   ).then(([regular, bold, italic]) => ({ regular, bold, italic }));
   return fonts;
 }
