@@ -190,6 +190,8 @@ export const revisions = pgTable(
     results: jsonb("results"),
     /** The worst band of the tasks as saved (null while none is scored), for lists and filters. */
     worstBand: text("worst_band"),
+    /** Set by a foreman's site change note: conditions differ from the assessment. */
+    needsReview: boolean("needs_review").notNull().default(false),
     contentHash: text("content_hash"),
     submittedAt: timestamp("submitted_at", { withTimezone: true }),
     approvedAt: timestamp("approved_at", { withTimezone: true }),
@@ -291,3 +293,76 @@ export const signingKeys = pgTable("signing_keys", {
   certificatePem: text("certificate_pem").notNull(),
   createdAt: createdAt(),
 });
+
+/** Foremen assigned to a job: they see its approved revisions and brief from them. */
+export const jobAssignments = pgTable(
+  "job_assignments",
+  {
+    organisationId: organisationId(),
+    jobId: uuid("job_id")
+      .notNull()
+      .references(() => jobs.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("job_assignments_unique").on(t.jobId, t.userId)],
+);
+
+/** A briefing of the gang against an approved revision. */
+export const briefings = pgTable(
+  "briefings",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    foremanId: uuid("foreman_id").references(() => users.id, { onDelete: "set null" }),
+    foremanName: text("foreman_name").notNull(),
+    place: text("place").notNull(),
+    startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
+    completedAt: timestamp("completed_at", { withTimezone: true }),
+    foremanSignature: bytea("foreman_signature"),
+  },
+  (t) => [index("briefings_revision_idx").on(t.revisionId)],
+);
+
+/** An operative's sign-on, sent once even when the phone retries: the device's key is unique. */
+export const briefingAttendees = pgTable(
+  "briefing_attendees",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    briefingId: uuid("briefing_id")
+      .notNull()
+      .references(() => briefings.id, { onDelete: "cascade" }),
+    idempotencyKey: text("idempotency_key").notNull(),
+    name: text("name").notNull(),
+    employer: text("employer").notNull(),
+    cardNumber: text("card_number").notNull(),
+    signature: bytea("signature").notNull(),
+    signedAt: timestamp("signed_at", { withTimezone: true }).notNull(),
+    receivedAt: createdAt(),
+  },
+  (t) => [uniqueIndex("briefing_attendees_key_unique").on(t.idempotencyKey), index("briefing_attendees_briefing_idx").on(t.briefingId)],
+);
+
+/** A foreman's record that site conditions differ from the assessment. */
+export const siteChangeNotes = pgTable(
+  "site_change_notes",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    authorName: text("author_name").notNull(),
+    text: text("text").notNull(),
+    photoFileId: uuid("photo_file_id").references(() => storedFiles.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("site_change_notes_revision_idx").on(t.revisionId)],
+);

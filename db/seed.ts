@@ -8,7 +8,9 @@ import { getDb, type Db } from "./client";
 import { DEMO_COMPONENTS, DEMO_EXAMINATIONS, DEMO_JOBS, DEMO_LIFT_DATE, DEMO_LIFT_TEAM, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
-import { components, jobs, organisations, users } from "./schema";
+const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
+const DEMO_REVIEW_DATE = "2027-06-30";
+import { components, jobAssignments, jobs, organisations, users } from "./schema";
 
 export async function seedDemo(db: Db): Promise<{ created: boolean; organisationId: string }> {
   const existing = await db.query.organisations.findFirst({ where: eq(organisations.name, DEMO_ORGANISATION) });
@@ -21,7 +23,9 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
       .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash })))
       .returning();
     const adviser = people.find((p) => p.role === "adviser")!;
-    await tx.insert(jobs).values(DEMO_JOBS.map((j) => ({ ...j, organisationId: org.id, createdBy: adviser.id })));
+    const jobRows = await tx.insert(jobs).values(DEMO_JOBS.map((j) => ({ ...j, organisationId: org.id, createdBy: adviser.id }))).returning({ id: jobs.id });
+    const foreman = people.find((p) => p.role === "foreman")!;
+    await tx.insert(jobAssignments).values(jobRows.map((j) => ({ organisationId: org.id, jobId: j.id, userId: foreman.id })));
     await tx.insert(components).values(DEMO_COMPONENTS.map((c) => ({ ...c, organisationId: org.id })));
     return { created: true, organisationId: org.id };
   });
@@ -59,4 +63,23 @@ async function seedDemoAssessments(organisationId: string) {
   ];
   await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
   await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base by hand at Carrowby", templateId: "equipment-base" });
+
+  // An approved revision for the foreman to brief from, at Hollin Vale (approved without e-mails).
+  const { submitRevision, approveRevision } = await import("@/assessments/revisions/approval");
+  const { drawnSignaturePng } = await import("@/lib/png");
+  const [approverRow] = await db.select().from(users).where(eq(users.email, DEMO_APPROVER_EMAIL));
+  const approver = { id: approverRow.id, organisationId, role: approverRow.role, name: approverRow.name, email: approverRow.email };
+  const base = await createAssessment(adviser, { jobId: hollinVale.id, title: "Equipment base by hand at Hollin Vale", templateId: "equipment-base" });
+  const baseDraft = await getRevision(adviser, base.revisionId);
+  const baseContent = structuredClone(baseDraft.content);
+  // The ground screws go in with the powered driver's own lifting frame at this site: no hand lift.
+  baseContent.tasks = baseContent.tasks.filter((t) => t.operation !== "lift");
+  baseContent.people.roles = [
+    { role: "Person in charge", name: "Dafydd Strand", competence: "PTS 88213" },
+    { role: "Operative", name: "Kieran Lusk", competence: "PTS 77120" },
+  ];
+  const saved = await saveRevision(adviser, base.revisionId, { version: baseDraft.revision.version, content: baseContent });
+  await submitRevision(adviser, base.revisionId, { version: saved.version, approverId: approver.id, reviewDate: DEMO_REVIEW_DATE }, { notify: false });
+  const submitted = await getRevision(adviser, base.revisionId);
+  await approveRevision(approver, base.revisionId, { version: submitted.revision.version, name: approver.name, role: "Contracts manager", signature: `data:image/png;base64,${drawnSignaturePng(5).toString("base64")}` }, { notify: false });
 }

@@ -40,7 +40,7 @@ async function person(id: string | null) {
 const packName = (title: string, number: number, kind: string) => `${title.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60)}-rev${number}-${kind}.pdf`;
 
 /** Submits a complete draft to a named approver; refused (422) while anything required is missing. */
-export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ mail: SendOutcome }> {
+export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "assessments:submit");
   const data = parseOrThrow(submitRevisionSchema, input);
   const current = await getRevision(actor, revisionId);
@@ -64,7 +64,7 @@ export async function submitRevision(actor: Actor | null, revisionId: string, in
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.submitted", entityType: "revision", entityId: revisionId, contentHash: hash, details: { approverId: approver.id } });
   });
   // After the commit: a failed e-mail is logged and shown, and never undoes the submission.
-  return { mail: await sendApprovalRequest(actor, revisionId) };
+  return { mail: notify ? await sendApprovalRequest(actor, revisionId) : null };
 }
 
 /** After submission: the draft pack, stored, and the approval request e-mailed to the approver with it. */
@@ -135,7 +135,7 @@ async function submittedToMe(actor: Actor, revisionId: string, version: number) 
 }
 
 /** Countersigns: locks the revision, supersedes the previous approved one, stores the signed pack. All or nothing. */
-export async function approveRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ mail: SendOutcome }> {
+export async function approveRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "reviews:decide");
   const data = parseOrThrow(approveSchema, input);
   const png = Buffer.from(data.signature.split(",")[1], "base64");
@@ -165,7 +165,7 @@ export async function approveRevision(actor: Actor | null, revisionId: string, i
     for (const s of superseded)
       await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.superseded", entityType: "revision", entityId: s.id, details: { by: revisionId } });
   });
-  return { mail: await notifyAuthor(actor, revisionId, "approved") };
+  return { mail: notify ? await notifyAuthor(actor, revisionId, "approved") : null };
 }
 
 /** Returns the revision to its author as a draft, with comments per section. */

@@ -1,0 +1,30 @@
+import { z } from "zod";
+
+const signature = z
+  .string()
+  .max(700_000, "The signature image is too large")
+  .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, "Sign in the box");
+
+export const startBriefingSchema = z.object({
+  revisionId: z.uuid("Choose an approved assessment"),
+  place: z.string().trim().min(2, "Say where the briefing is held").max(200),
+});
+
+/** One operative's sign-on. The key is made on the device, so a retry after lost signal adds no duplicate. */
+export const attendeeSchema = z.object({
+  key: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, "Invalid sign-on key"),
+  name: z.string().trim().min(2, "Enter your name").max(120),
+  employer: z.string().trim().min(2, "Enter your employer").max(120),
+  cardNumber: z.string().trim().min(3, "Enter your competence card number").max(40),
+  signature,
+  signedAt: z.iso.datetime({ offset: true, error: "Invalid time" }),
+});
+
+export const completeBriefingSchema = z.object({ signature });
+
+export const siteChangeSchema = z.object({
+  revisionId: z.uuid(),
+  text: z.string().trim().min(10, "Describe what is different (at least 10 characters)").max(2000),
+});
+
+export type AttendeeInput = z.infer<typeof attendeeSchema>;

@@ -1,0 +1,220 @@
+/**
+ * The foreman's side: assigned jobs with their approved revision, briefings with sign-on (idempotent,
+ * for phones that lose signal), completion with the foreman's own signature, site change notes, and
+ * the briefing sheet.
+ */
+import { and, asc, desc, eq, gte, inArray } from "drizzle-orm";
+import { z } from "zod";
+import { getDb } from "@/db/client";
+import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, revisions, siteChangeNotes, users } from "@/db/schema";
+import { recordAudit } from "@/lib/audit";
+import { config } from "@/lib/config";
+import { AppError, parseOrThrow } from "@/lib/errors";
+import { renderMail } from "@/lib/mail/layout";
+import { sendMail, type SendOutcome } from "@/lib/mail/send";
+import { authorize, type Actor } from "@/lib/permissions";
+import { putFile } from "@/lib/storage";
+import { contentSchema } from "../method-statement/content";
+import type { TaskScore } from "../method-statement/score-task";
+import { briefingScript } from "./instructions";
+import { attendeeSchema, completeBriefingSchema, siteChangeSchema, startBriefingSchema } from "./schemas";
+
+const isUuid = (s: string) => z.uuid().safeParse(s).success;
+const png = (dataUrl: string, path = "signature") => {
+  const bytes = Buffer.from(dataUrl.split(",")[1] ?? "", "base64");
+  if (bytes.byteLength < 100 || bytes.subarray(0, 8).toString("hex") !== "89504e470d0a1a0a")
+    throw new AppError("validation", "Some fields need attention", [{ path, message: "Sign in the box" }]);
+  return bytes;
+};
+const startOfToday = () => {
+  const d = new Date();
+  d.setUTCHours(0, 0, 0, 0);
+  return d;
+};
+
+/** The foreman's jobs, each with its current approved revision (never a draft) and today's briefings. */
+export async function listForemanJobs(actor: Actor | null) {
+  authorize(actor, "briefings:run");
+  const db = await getDb();
+  const assigned = await db
+    .select({ job: jobs })
+    .from(jobAssignments)
+    .innerJoin(jobs, eq(jobs.id, jobAssignments.jobId))
+    .where(and(eq(jobAssignments.userId, actor.id), eq(jobAssignments.organisationId, actor.organisationId)))
+    .orderBy(asc(jobs.name));
+  const jobIds = assigned.map((a) => a.job.id);
+  const approved = jobIds.length
+    ? await db
+        .select({ revisionId: revisions.id, number: revisions.number, reviewDate: revisions.reviewDate, needsReview: revisions.needsReview, worstBand: revisions.worstBand, title: assessments.title, jobId: assessments.jobId })
+        .from(revisions)
+        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+        .where(and(inArray(assessments.jobId, jobIds), eq(revisions.status, "approved")))
+        .orderBy(asc(assessments.title))
+    : [];
+  const today = approved.length
+    ? await db
+        .select({ id: briefings.id, revisionId: briefings.revisionId, startedAt: briefings.startedAt, completedAt: briefings.completedAt, place: briefings.place })
+        .from(briefings)
+        .where(and(inArray(briefings.revisionId, approved.map((a) => a.revisionId)), gte(briefings.startedAt, startOfToday())))
+        .orderBy(desc(briefings.startedAt))
+    : [];
+  return assigned.map(({ job }) => ({
+    job,
+    revisions: approved.filter((r) => r.jobId === job.id).map((r) => ({ ...r, briefingsToday: today.filter((b) => b.revisionId === r.revisionId) })),
+  }));
+}
+
+/** An approved revision of one of the foreman's jobs; anything else is "not found". */
+async function briefableRevision(actor: Actor, revisionId: string) {
+  const db = await getDb();
+  const [row] = isUuid(revisionId)
+    ? await db.select({ revision: revisions, assessment: assessments, job: jobs }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).innerJoin(jobs, eq(jobs.id, assessments.jobId)).where(eq(revisions.id, revisionId))
+    : [];
+  if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved") throw AppError.notFound("Approved revision");
+  const [assigned] = await db.select().from(jobAssignments).where(and(eq(jobAssignments.jobId, row.job.id), eq(jobAssignments.userId, actor.id)));
+  if (!assigned) throw AppError.notFound("Approved revision");
+  return row;
+}
+
+/** What the foreman reads out for a revision, with any site change notes to warn of. */
+export async function getBriefingScript(actor: Actor | null, revisionId: string) {
+  authorize(actor, "briefings:run");
+  const { revision, assessment, job } = await briefableRevision(actor, revisionId);
+  const db = await getDb();
+  const names = Object.fromEntries((await db.select({ id: components.id, name: components.name }).from(components).where(eq(components.organisationId, actor.organisationId))).map((c) => [c.id, c.name]));
+  const notes = await db.select().from(siteChangeNotes).where(eq(siteChangeNotes.revisionId, revisionId)).orderBy(desc(siteChangeNotes.createdAt));
+  const content = contentSchema.parse(revision.content);
+  return {
+    revision: { id: revision.id, number: revision.number, needsReview: revision.needsReview, reviewDate: revision.reviewDate },
+    title: assessment.title,
+    job: { name: job.name, accessPoint: job.accessPoint, siteContactName: job.siteContactName, siteContactPhone: job.siteContactPhone },
+    script: briefingScript(content, (revision.results ?? []) as TaskScore[], names),
+    siteChanges: notes.map((n) => ({ text: n.text, by: n.authorName, at: n.createdAt.toISOString() })),
+  };
+}
+
+export async function startBriefing(actor: Actor | null, input: unknown): Promise<{ briefingId: string }> {
+  authorize(actor, "briefings:run");
+  const data = parseOrThrow(startBriefingSchema, input);
+  await briefableRevision(actor, data.revisionId);
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(briefings).values({ organisationId: actor.organisationId, revisionId: data.revisionId, foremanId: actor.id, foremanName: actor.name, place: data.place }).returning({ id: briefings.id });
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.started", entityType: "revision", entityId: data.revisionId, details: { briefingId: row.id, place: data.place } });
+    return { briefingId: row.id };
+  });
+}
+
+async function ownBriefing(actor: Actor, briefingId: string) {
+  const db = await getDb();
+  const row = isUuid(briefingId) ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) }) : undefined;
+  if (!row || row.organisationId !== actor.organisationId || row.foremanId !== actor.id) throw AppError.notFound("Briefing");
+  return row;
+}
+
+/** Records one sign-on. Sending the same key again returns the first record: nothing is duplicated. */
+export async function recordAttendee(actor: Actor | null, briefingId: string, input: unknown): Promise<{ id: string; duplicate: boolean }> {
+  authorize(actor, "briefings:run");
+  const data = parseOrThrow(attendeeSchema, input);
+  const briefing = await ownBriefing(actor, briefingId);
+  if (briefing.completedAt) {
+    const db = await getDb();
+    const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
+    if (existing?.briefingId === briefingId) return { id: existing.id, duplicate: true };
+    throw new AppError("conflict", "This briefing is closed: the foreman has signed it off.");
+  }
+  const db = await getDb();
+  const [inserted] = await db
+    .insert(briefingAttendees)
+    .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: png(data.signature), signedAt: new Date(data.signedAt) })
+    .onConflictDoNothing({ target: briefingAttendees.idempotencyKey })
+    .returning({ id: briefingAttendees.id });
+  if (inserted) return { id: inserted.id, duplicate: false };
+  const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
+  if (!existing || existing.briefingId !== briefingId) throw new AppError("conflict", "This sign-on key belongs to another briefing.");
+  return { id: existing.id, duplicate: true };
+}
+
+/** The foreman signs last; the briefing is then closed. */
+export async function completeBriefing(actor: Actor | null, briefingId: string, input: unknown): Promise<void> {
+  authorize(actor, "briefings:run");
+  const data = parseOrThrow(completeBriefingSchema, input);
+  const briefing = await ownBriefing(actor, briefingId);
+  if (briefing.completedAt) throw new AppError("conflict", "This briefing is already signed off.");
+  const db = await getDb();
+  const attendees = await db.select({ id: briefingAttendees.id }).from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId));
+  if (attendees.length === 0) throw new AppError("validation", "At least one operative must sign on first", [{ path: "attendees", message: "At least one operative must sign on first" }]);
+  await db.transaction(async (tx) => {
+    await tx.update(briefings).set({ completedAt: new Date(), foremanSignature: png(data.signature) }).where(eq(briefings.id, briefingId));
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.completed", entityType: "revision", entityId: briefing.revisionId, details: { briefingId, attendees: attendees.length } });
+  });
+}
+
+/** A briefing with its attendees, for the record (the foreman who ran it, or the organisation's advisers). */
+export async function getBriefingRecord(actor: Actor | null, briefingId: string) {
+  if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
+  const db = await getDb();
+  const briefing = isUuid(briefingId) ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) }) : undefined;
+  if (!briefing || briefing.organisationId !== actor.organisationId) throw AppError.notFound("Briefing");
+  if (!(briefing.foremanId === actor.id || ["admin", "adviser"].includes(actor.role))) throw AppError.notFound("Briefing");
+  const [context] = await db.select({ title: assessments.title, number: revisions.number, job: jobs.name }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).innerJoin(jobs, eq(jobs.id, assessments.jobId)).where(eq(revisions.id, briefing.revisionId));
+  const attendees = await db.select().from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId)).orderBy(asc(briefingAttendees.signedAt));
+  return { briefing, context, attendees };
+}
+
+/** Conditions differ from the assessment: recorded with an optional photo, the revision marked, the adviser e-mailed. */
+export async function createSiteChangeNote(actor: Actor | null, input: unknown, photo?: { name: string; data: Uint8Array }): Promise<{ mail: SendOutcome }> {
+  authorize(actor, "site-notes:create");
+  const data = parseOrThrow(siteChangeSchema, input);
+  const { revision, assessment, job } = await briefableRevision(actor, data.revisionId);
+  let photoType: string | undefined;
+  if (photo) {
+    if (photo.data.byteLength > 10 * 1024 * 1024) throw new AppError("payload_too_large", "Photos can be at most 10 MB");
+    const { fileTypeFromBuffer } = await import("file-type");
+    photoType = (await fileTypeFromBuffer(photo.data))?.mime;
+    if (!photoType || !["image/jpeg", "image/png", "image/webp"].includes(photoType)) throw new AppError("unsupported_media_type", "Attach a photograph (JPEG, PNG or WebP)");
+  }
+  const db = await getDb();
+  await db.transaction(async (tx) => {
+    const file = photo && photoType ? await putFile(tx, actor.organisationId, photo.data, photoType) : null;
+    await tx.insert(siteChangeNotes).values({ organisationId: actor.organisationId, revisionId: revision.id, authorId: actor.id, authorName: actor.name, text: data.text, photoFileId: file?.id ?? null });
+    await tx.update(revisions).set({ needsReview: true }).where(eq(revisions.id, revision.id));
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.site-change", entityType: "revision", entityId: revision.id, details: { text: data.text, photo: !!file } });
+  });
+  const author = revision.authorId ? await db.query.users.findFirst({ where: eq(users.id, revision.authorId) }) : undefined;
+  if (!author) return { mail: { id: "", status: "failed", error: "The assessment has no author to tell" } };
+  const body = renderMail({
+    heading: `Site change: ${assessment.title}`,
+    paragraphs: [`Hello ${author.name},`, `${actor.name} reports that conditions at ${job.name} differ from revision ${revision.number}:`, data.text, "The revision is marked as needing review, and the next briefing shows this warning."],
+    action: { label: "Open the assessment", url: `${config().NEXTAUTH_URL.replace(/\/$/, "")}/revisions/${revision.id}` },
+  });
+  return { mail: await sendMail({ organisationId: actor.organisationId, kind: "site-change", to: author.email, subject: `Site change reported: ${assessment.title}`, ...body }) };
+}
+
+/** Foremen of the organisation and the jobs each is assigned to (for the job form). */
+export async function listForemen(actor: Actor | null, jobId: string) {
+  authorize(actor, "jobs:write");
+  const db = await getDb();
+  const foremen = await db.select({ id: users.id, name: users.name }).from(users).where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "foreman"), eq(users.active, true))).orderBy(asc(users.name));
+  const assigned = isUuid(jobId) ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId)) : [];
+  return foremen.map((f) => ({ ...f, assigned: assigned.some((a) => a.userId === f.id) }));
+}
+
+export const assignmentSchema = z.object({ foremanIds: z.array(z.uuid()).max(50) });
+
+export async function setJobForemen(actor: Actor | null, jobId: string, input: unknown): Promise<void> {
+  authorize(actor, "jobs:write");
+  const { foremanIds } = parseOrThrow(assignmentSchema, input);
+  const db = await getDb();
+  const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
+  if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
+  const valid = foremanIds.length
+    ? await db.select({ id: users.id }).from(users).where(and(inArray(users.id, foremanIds), eq(users.organisationId, actor.organisationId), eq(users.role, "foreman")))
+    : [];
+  if (valid.length !== new Set(foremanIds).size) throw new AppError("validation", "Some fields need attention", [{ path: "foremanIds", message: "Choose foremen of your organisation" }]);
+  await db.transaction(async (tx) => {
+    await tx.delete(jobAssignments).where(eq(jobAssignments.jobId, jobId));
+    if (valid.length) await tx.insert(jobAssignments).values(valid.map((v) => ({ organisationId: actor.organisationId, jobId, userId: v.id })));
+    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "job.foremen-assigned", entityType: "job", entityId: jobId, details: { foremanIds: valid.map((v) => v.id) } });
+  });
+}
