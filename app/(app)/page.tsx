@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { listJobs } from "@/assessments/jobs/queries";
 import { listComponents } from "@/assessments/load-register/queries";
-import { countRevisionsByStatus, listAwaitingReview, listBriefable } from "@/assessments/revisions/queries";
+import { listForemanJobs } from "@/assessments/briefing/service";
+import { countRevisionsByStatus, listAwaitingReview } from "@/assessments/revisions/queries";
 import { requireActor } from "@/lib/auth/session";
 import { can, type Actor } from "@/lib/permissions";
 
@@ -47,7 +48,7 @@ export default async function OverviewPage() {
         <Card title="Waiting for your countersignature" value={(await listAwaitingReview(actor)).length} href="/reviews" />
       )}
       {can(actor, "briefings:run") && (
-        <Card title="Approved assessments ready to brief" value={(await listBriefable(actor)).length} href="/briefings" />
+        <Card title="Approved assessments ready to brief" value={(await listForemanJobs(actor)).reduce((n, j) => n + j.revisions.length, 0)} href="/briefings" />
       )}
       {can(actor, "users:manage") && (
         <p className="text-sm text-muted">

@@ -218,3 +218,30 @@ export async function setJobForemen(actor: Actor | null, jobId: string, input: u
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "job.foremen-assigned", entityType: "job", entityId: jobId, details: { foremanIds: valid.map((v) => v.id) } });
   });
 }
+
+/** The briefing sheet PDF of a revision; with a briefing's record when one is named. */
+export async function briefingSheetPdf(actor: Actor | null, revisionId: string, briefingId?: string): Promise<{ filename: string; data: Uint8Array }> {
+  const { script, title, job, revision, siteChanges } = await getBriefingScript(actor, revisionId);
+  const { buildBriefingSheet } = await import("../pack/briefing-sheet");
+  const { packFonts } = await import("../pack/render");
+  let record;
+  if (briefingId) {
+    const r = await getBriefingRecord(actor, briefingId);
+    if (r.briefing.revisionId !== revisionId) throw AppError.notFound("Briefing");
+    record = { place: r.briefing.place, startedAt: r.briefing.startedAt, foremanName: r.briefing.foremanName, attendees: r.attendees };
+  }
+  const data = await buildBriefingSheet({ title, jobName: job.name, revisionNumber: revision.number, script, siteChanges, record }, await packFonts());
+  return { filename: `briefing-${title.replace(/[^A-Za-z0-9]+/g, "-").slice(0, 50)}-rev${revision.number}.pdf`, data };
+}
+
+/** E-mails the briefing sheet to the foreman asking for it. */
+export async function emailBriefingSheet(actor: Actor | null, revisionId: string): Promise<SendOutcome> {
+  const sheet = await briefingSheetPdf(actor, revisionId);
+  const { title, job } = await getBriefingScript(actor, revisionId);
+  const body = renderMail({
+    heading: `Briefing sheet: ${title}`,
+    paragraphs: [`Hello ${actor!.name},`, `The briefing sheet for ${job.name} is attached, for when the signal is poor at the access point.`],
+    footnote: "Brief from the approved revision only. If conditions differ on site, record a site change note in Heftwise.",
+  });
+  return sendMail({ organisationId: actor!.organisationId, kind: "briefing-sheet", to: actor!.email, subject: `Briefing sheet: ${title}`, attachments: [{ filename: sheet.filename, content: Buffer.from(sheet.data), contentType: "application/pdf" }], ...body });
+}

@@ -56,7 +56,7 @@ const date = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 16).r
  * character is encoded and measured once through pdf-lib itself — which also records the glyph for
  * the subset and the widths table — and strings are assembled from that cache. Kerning is dropped.
  */
-function withFastText(font: PDFFont): PDFFont {
+export function withFastText(font: PDFFont): PDFFont {
   const encodeOne = font.encodeText.bind(font);
   const widthOne = font.widthOfTextAtSize.bind(font);
   const hex = new Map<string, string>();

@@ -27,19 +27,6 @@ export async function listAwaitingReview(actor: Actor | null) {
     .orderBy(desc(revisions.submittedAt));
 }
 
-/** Approved revisions a foreman can brief from — never a draft. */
-export async function listBriefable(actor: Actor | null) {
-  authorize(actor, "briefings:run");
-  const db = await getDb();
-  return db
-    .select(summaryColumns)
-    .from(revisions)
-    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "approved")))
-    .orderBy(desc(revisions.approvedAt));
-}
-
 /** Revision counts by status, for the overview. */
 export async function countRevisionsByStatus(actor: Actor | null) {
   authorize(actor, "assessments:read");

@@ -3,7 +3,9 @@ import { notFound } from "next/navigation";
 import { getJob } from "@/assessments/jobs/service";
 import { requirePermission } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
+import { listForemen } from "@/assessments/briefing/service";
 import { JobForm } from "../../job-form";
+import { ForemenForm } from "./foremen-form";
 
 export const metadata: Metadata = { title: "Edit job" };
 
@@ -19,6 +21,7 @@ export default async function EditJobPage({ params }: { params: Promise<{ id: st
     <div className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-bold">Edit job</h1>
       <JobForm jobId={job.id} initial={{ name, client, location, lineReference, mileage, accessPoint, nearestHospital, emergencyArrangements, siteContactName, siteContactPhone }} />
+      <ForemenForm jobId={job.id} foremen={await listForemen(actor, job.id)} />
     </div>
   );
 }

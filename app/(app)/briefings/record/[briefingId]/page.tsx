@@ -1,0 +1,70 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { getBriefingRecord } from "@/assessments/briefing/service";
+import { requireActor } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { can } from "@/lib/permissions";
+import { PrintButton } from "./print-button";
+
+export const metadata: Metadata = { title: "Briefing record" };
+
+const when = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+
+export default async function BriefingRecordPage({ params }: { params: Promise<{ briefingId: string }> }) {
+  const actor = await requireActor();
+  const { briefingId } = await params;
+  const { briefing, context, attendees } = await getBriefingRecord(actor, briefingId).catch((err) => {
+    if (err instanceof AppError && err.code === "not_found") notFound();
+    throw err;
+  });
+  return (
+    <div className="space-y-4 print:text-black">
+      <div className="flex flex-wrap items-center justify-between gap-2 print:hidden">
+        <h1 className="text-2xl font-bold">Briefing record</h1>
+        <div className="flex gap-2">
+          <PrintButton />
+          {can(actor, "briefings:run") && (
+            <a href={`/api/v1/revisions/${briefing.revisionId}/briefing-sheet?briefing=${briefing.id}`} className="rounded border border-rule bg-white px-4 py-2 font-bold">
+              Briefing sheet with this record (PDF)
+            </a>
+          )}
+        </div>
+      </div>
+      <section className="rounded-lg border border-rule bg-white p-4">
+        <p className="text-lg font-bold">{context.title}</p>
+        <p>
+          {context.job} · revision {context.number}
+        </p>
+        <p>
+          Held at {briefing.place} on {when(briefing.startedAt)} by {briefing.foremanName}.{" "}
+          <strong data-testid="record-state">{briefing.completedAt ? `Signed off ${when(briefing.completedAt)}.` : "Not yet signed off by the foreman."}</strong>
+        </p>
+      </section>
+      <table className="w-full rounded-lg border border-rule bg-white text-left text-sm" data-testid="attendees">
+        <thead className="bg-paper">
+          <tr>
+            <th className="px-3 py-2">Name</th>
+            <th className="px-3 py-2">Employer</th>
+            <th className="px-3 py-2">Card</th>
+            <th className="px-3 py-2">Signed</th>
+            <th className="px-3 py-2">Signature</th>
+          </tr>
+        </thead>
+        <tbody>
+          {attendees.map((a) => (
+            <tr key={a.id} className="border-t border-rule">
+              <td className="px-3 py-2 font-bold">{a.name}</td>
+              <td className="px-3 py-2">{a.employer}</td>
+              <td className="px-3 py-2">{a.cardNumber}</td>
+              <td className="px-3 py-2">{when(a.signedAt)}</td>
+              <td className="px-3 py-2">
+                {/* eslint-disable-next-line @next/next/no-img-element -- the stored signature, inline */}
+                <img src={`data:image/png;base64,${Buffer.from(a.signature).toString("base64")}`} alt={`Signature of ${a.name}`} className="h-10" />
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

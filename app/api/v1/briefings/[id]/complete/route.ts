@@ -1,0 +1,11 @@
+import { NextResponse } from "next/server";
+import { completeBriefing } from "@/assessments/briefing/service";
+import { handler, readJson } from "@/lib/api";
+import { requireApiActor } from "@/lib/auth/api";
+
+/** The foreman signs last: `{signature}`. */
+export const POST = handler(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
+  const actor = await requireApiActor("briefings:run");
+  await completeBriefing(actor, (await params).id, await readJson(request));
+  return NextResponse.json({ status: "completed" });
+});

@@ -1,0 +1,75 @@
+/**
+ * The foreman's briefing sheet: large type, one block per load with the controls that matter, the
+ * hazards, PPE and emergency arrangements — and, when a briefing has been held, its record.
+ */
+import fontkit from "@pdf-lib/fontkit";
+import { PDFDocument } from "pdf-lib";
+import type { BriefingScript } from "../briefing/instructions";
+import { PACK_CAUTION, withFastText, type PackFonts } from "./document";
+import { COLOURS, Writer } from "./layout";
+
+export interface BriefingSheetInput {
+  title: string;
+  jobName: string;
+  revisionNumber: number;
+  script: BriefingScript;
+  siteChanges: { text: string; by: string; at: string }[];
+  record?: { place: string; startedAt: Date; foremanName: string; attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; signature: Uint8Array }[] };
+}
+
+export async function buildBriefingSheet(input: BriefingSheetInput, fontBytes: PackFonts): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.registerFontkit(fontkit);
+  const fonts = {
+    regular: withFastText(await doc.embedFont(fontBytes.regular, { subset: true })),
+    bold: withFastText(await doc.embedFont(fontBytes.bold, { subset: true })),
+    italic: withFastText(await doc.embedFont(fontBytes.italic, { subset: true })),
+  };
+  doc.setTitle(`Briefing sheet: ${input.title}`);
+  doc.setCreator("Heftwise");
+  const glyphs = new Set(fonts.regular.getCharacterSet());
+  const w = new Writer(doc, fonts, (cp) => glyphs.has(cp));
+  const big = { size: 14 };
+  w.heading(`Briefing: ${input.title}`, 1);
+  w.text(`${input.jobName} · revision ${input.revisionNumber}`, { size: 13, color: COLOURS.muted });
+  for (const change of input.siteChanges) w.text(`SITE CHANGE reported by ${change.by}: ${change.text}`, { size: 14, font: fonts.bold, color: COLOURS.band.act });
+  w.heading("Sequence of work");
+  input.script.sequence.forEach((s, i) => w.text(`${i + 1}. ${s}`, big));
+  w.heading("Each load");
+  for (const load of input.script.loads) {
+    w.ensure(60);
+    w.text(load.title, { size: 15, font: fonts.bold });
+    const bw = w.band(load.band, undefined, w.y - 18, 12);
+    w.page.drawText(w.safe(load.component), { x: 48 + bw + 10, y: w.y - 14, size: 12, font: fonts.regular, color: COLOURS.muted });
+    w.y -= 26;
+    for (const line of load.lines) w.text(`- ${line}`, { ...big, indent: 10 });
+    if (load.lift) for (const r of load.lift.roles) w.text(`${r.role}: ${r.name || "—"}`, { size: 12, indent: 10 });
+    w.space(6);
+  }
+  w.heading("Hazards and controls");
+  for (const h of input.script.hazards) {
+    w.text(h.hazard, { size: 14, font: fonts.bold });
+    for (const c of h.controls) w.text(`- ${c}`, { ...big, indent: 10 });
+  }
+  w.heading("PPE");
+  w.text(input.script.ppe.join(" · ") || "—", big);
+  w.heading("Emergency");
+  w.text(`Nearest hospital (A&E): ${input.script.emergency.nearestHospital || "—"}`, { size: 14, font: fonts.bold });
+  w.text(input.script.emergency.arrangements || "—", big);
+  if (input.record) {
+    w.newPage();
+    w.heading("Briefing record");
+    w.text(`Held at ${input.record.place}, ${input.record.startedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, by ${input.record.foremanName}.`, { size: 12 });
+    for (const a of input.record.attendees) {
+      const image = await doc.embedPng(a.signature);
+      const scale = Math.min(140 / image.width, 40 / image.height, 1);
+      w.ensure(52);
+      w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}`), { x: 48, y: w.y - 14, size: 11, font: fonts.bold, color: COLOURS.ink });
+      w.page.drawText(`signed ${a.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC`, { x: 48, y: w.y - 28, size: 9, font: fonts.regular, color: COLOURS.muted });
+      w.page.drawImage(image, { x: 360, y: w.y - 44, width: image.width * scale, height: image.height * scale });
+      w.y -= 50;
+    }
+  }
+  w.footer((n, total) => [`Caution: ${PACK_CAUTION}`, w.safe(`Briefing sheet · ${input.title} · revision ${input.revisionNumber} · page ${n} of ${total}`)]);
+  return doc.save({ useObjectStreams: false, objectsPerTick: Infinity });
+}
