@@ -36,7 +36,12 @@ export function instructionFor(task: Task, score: TaskScore, componentName: stri
       break;
     case "carry":
       lines.push("Carry it against your body, hands at waist height.");
-      if (filter?.inputs.carryDistanceM) lines.push(`At most ${fmt(filter.inputs.carryDistanceM, 0)} m, then rest; clear the route first.`);
+      if (filter?.inputs.carryDistanceM)
+        lines.push(
+          filter.inputs.carryDistanceM > 10
+            ? `Carried about ${fmt(filter.inputs.carryDistanceM, 0)} m: put it down and rest at least every 10 m. Clear the route first.`
+            : `Carried up to ${fmt(filter.inputs.carryDistanceM, 0)} m. Clear the route first.`,
+        );
       break;
     case "push":
       if (push) lines.push(`${push.inputs.teamSize > 1 ? `${push.inputs.teamSize} people push` : "Push"}: start slowly, keep it moving steadily.`);

@@ -17,8 +17,8 @@ export const COLOURS = {
   paper: rgb(0.965, 0.957, 0.933),
   band: {
     clear: rgb(0.059, 0.463, 0.431),
-    watch: rgb(0.718, 0.475, 0.122),
-    act: rgb(0.851, 0.282, 0.059),
+    watch: rgb(0.541, 0.353, 0.043),
+    act: rgb(0.722, 0.227, 0.043),
     stop: rgb(0.106, 0.106, 0.106),
   } satisfies Record<Band, RGB>,
 };

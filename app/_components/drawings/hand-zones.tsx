@@ -34,13 +34,13 @@ export function HandZonesDrawing({ highlight }: { highlight?: (typeof ZONES)[num
         <line x1="70" y1="66" x2="84" y2="100" />
         <line x1="84" y1="100" x2="122" y2="118" />
       </g>
-      <rect x="118" y="104" width="40" height="26" rx="3" fill="#b7791f" />
+      <rect x="118" y="104" width="40" height="26" rx="3" fill="#8a5a0b" />
       {/* H */}
-      <g stroke="#d9480f" strokeWidth="2" markerEnd="url(#hz-arrow)">
+      <g stroke="#b83a0b" strokeWidth="2" markerEnd="url(#hz-arrow)">
         <line x1="66" y1="228" x2="136" y2="228" />
       </g>
-      <line x1="136" y1="130" x2="136" y2="232" stroke="#d9480f" strokeDasharray="3 3" />
-      <text x="100" y="234" fontSize="11" fontWeight="700" fill="#d9480f" textAnchor="middle">
+      <line x1="136" y1="130" x2="136" y2="232" stroke="#b83a0b" strokeDasharray="3 3" />
+      <text x="100" y="234" fontSize="11" fontWeight="700" fill="#b83a0b" textAnchor="middle">
         H
       </text>
       {/* V */}
@@ -53,7 +53,7 @@ export function HandZonesDrawing({ highlight }: { highlight?: (typeof ZONES)[num
       </text>
       <defs>
         <marker id="hz-arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto">
-          <path d="M0 0 L10 5 L0 10 z" fill="#d9480f" />
+          <path d="M0 0 L10 5 L0 10 z" fill="#b83a0b" />
         </marker>
         <marker id="hz-arrow-v" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto">
           <path d="M0 0 L10 5 L0 10 z" fill="#0f766e" />

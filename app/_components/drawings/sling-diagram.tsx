@@ -42,13 +42,13 @@ export function SlingDiagram({ legs, angleDeg, tension, legWll, load }: { legs: 
       )}
       {ends.map((x, i) => (
         <g key={i}>
-          <line x1={hook.x} y1={hook.y} x2={x} y2={bottom} stroke={over ? "#d9480f" : "#16302b"} strokeWidth="4" />
-          <text x={(hook.x + x) / 2 + (x < hook.x ? -8 : 8)} y={(hook.y + bottom) / 2 + 30} fontSize="12" textAnchor={x < hook.x ? "end" : "start"} fill={over ? "#d9480f" : "#17201c"} fontWeight="700">
+          <line x1={hook.x} y1={hook.y} x2={x} y2={bottom} stroke={over ? "#b83a0b" : "#16302b"} strokeWidth="4" />
+          <text x={(hook.x + x) / 2 + (x < hook.x ? -8 : 8)} y={(hook.y + bottom) / 2 + 30} fontSize="12" textAnchor={x < hook.x ? "end" : "start"} fill={over ? "#b83a0b" : "#17201c"} fontWeight="700">
             {legs === 4 && (i === 1 || i === 2) ? "" : `${fmt(tension, 0)} kg`}
           </text>
         </g>
       ))}
-      <rect x={hook.x - loadWidth / 2} y={bottom} width={loadWidth} height="50" rx="4" fill="#b7791f" />
+      <rect x={hook.x - loadWidth / 2} y={bottom} width={loadWidth} height="50" rx="4" fill="#8a5a0b" />
       <text x={hook.x} y={bottom + 30} fontSize="14" textAnchor="middle" fill="#fff" fontWeight="700">
         {fmt(load, 0)} kg
       </text>

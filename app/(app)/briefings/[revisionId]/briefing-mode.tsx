@@ -211,7 +211,6 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
           )}
         </nav>
       )}
-      <p className="text-sm text-muted">Heftwise supports, and does not replace, the judgement of a competent person. Follow local regulations, your organisation&apos;s procedures and licensed practice.</p>
     </div>
   );
 }

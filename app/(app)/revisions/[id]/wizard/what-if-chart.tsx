@@ -80,7 +80,7 @@ export function WhatIfChart({ task, component }: { task: Task; component: Regist
             <Tooltip formatter={(v) => [typeof v === "number" ? v.toFixed(2) : String(v), "index"]} />
             <ReferenceLine y={1} stroke="#0f766e" strokeDasharray="4 4" label={{ value: "1: clear up to here", fontSize: 10, position: "insideTopLeft" }} />
             <ReferenceLine y={3} stroke="#1b1b1b" strokeDasharray="4 4" />
-            <Line type="monotone" dataKey="index" stroke="#d9480f" strokeWidth={2} dot={false} isAnimationActive={false} connectNulls={false} />
+            <Line type="monotone" dataKey="index" stroke="#b83a0b" strokeWidth={2} dot={false} isAnimationActive={false} connectNulls={false} />
           </LineChart>
         </ResponsiveContainer>
       </div>

@@ -1,0 +1,129 @@
+import AxeBuilder from "@axe-core/playwright";
+import { expect, test, type Page } from "@playwright/test";
+import { signIn, waitForMail } from "./helpers";
+
+test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
+
+async function sign(page: Page) {
+  const pad = page.getByTestId("signature-pad").last();
+  await pad.scrollIntoViewIfNeeded();
+  const box = (await pad.boundingBox())!;
+  await page.mouse.move(box.x + 15, box.y + box.height / 2);
+  await page.mouse.down();
+  for (let i = 1; i <= 12; i++) await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.sin(i) * 20, { steps: 2 });
+  await page.mouse.up();
+}
+
+async function signOn(page: Page, name: string, employer: string, card: string) {
+  await page.getByLabel("Your name").fill(name);
+  await page.getByLabel("Employer").fill(employer);
+  await page.getByLabel("Competence card number").fill(card);
+  await sign(page);
+  await page.getByRole("button", { name: "Sign on" }).click();
+}
+
+async function axe(page: Page) {
+  const results = await new AxeBuilder({ page }).analyze();
+  return results.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`);
+}
+
+test("a foreman briefs from a phone: three operatives and the foreman sign, one of them while offline, each recorded once", async ({ page, context }) => {
+  await signIn(page, "foreman@brackenfold.example");
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Briefings" }).click();
+  expect(await axe(page)).toEqual([]);
+  await page.getByRole("link", { name: "Brief the gang" }).click();
+  await page.getByLabel("Where are you briefing?").fill("Gorsey Lane access gate");
+  await page.getByRole("button", { name: "Start" }).click();
+  await expect(page.getByRole("heading", { name: "The job, step by step" })).toBeVisible();
+  expect(await axe(page)).toEqual([]);
+  await page.getByRole("button", { name: "Next" }).click();
+  await expect(page.getByText("Load 1 of")).toBeVisible();
+  await expect(page.getByText(/rest at least every 10 m/)).toBeVisible();
+  expect(await axe(page)).toEqual([]);
+  // Through the loads, hazards, PPE and emergency to sign-on.
+  while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible())) await page.getByRole("button", { name: "Next" }).click();
+  expect(await axe(page)).toEqual([]);
+
+  // Bad input: nothing signed on.
+  await page.getByRole("button", { name: "Sign on" }).click();
+  await expect(page.getByText("Enter your name")).toBeVisible();
+  await expect(page.getByText("Sign in the box")).toBeVisible();
+
+  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on");
+
+  // The signal drops: the next sign-on waits on the phone.
+  await context.setOffline(true);
+  await signOn(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
+  await expect(page.getByTestId("sign-on-list")).toContainText("Aled Menhenick (Tarnbrook Plant Hire) — waiting for signal");
+  await expect(page.getByTestId("sign-on-status")).toContainText("1 waiting to send");
+  await page.getByRole("button", { name: "Next" }).click();
+  await expect(page.getByText(/still waiting for signal/)).toBeVisible();
+  await expect(page.getByRole("button", { name: "Sign off the briefing" })).toBeDisabled();
+  await page.getByRole("button", { name: "Back" }).click();
+
+  // Signal back: sent, once.
+  await context.setOffline(false);
+  await expect(page.getByTestId("sign-on-list")).toContainText("Aled Menhenick (Tarnbrook Plant Hire) — recorded");
+  await expect(page.getByTestId("sign-on-status")).toContainText("2 signed on");
+  await signOn(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
+  await expect(page.getByTestId("sign-on-status")).toContainText("3 signed on");
+
+  // A phone retrying an old sign-on (same key) records nothing new.
+  const replay = await page.evaluate(async () => {
+    const key = Object.keys(localStorage).find((k) => k.startsWith("heftwise-sign-ons-"))!;
+    const briefingId = key.replace("heftwise-sign-ons-", "");
+    const first = JSON.parse(localStorage.getItem(key)!)[0];
+    const res = await fetch(`/api/v1/briefings/${briefingId}/attendees`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(first) });
+    return { status: res.status, body: await res.json() };
+  });
+  expect(replay.status).toBe(200);
+  expect(replay.body.duplicate).toBe(true);
+
+  await page.getByRole("button", { name: "Next" }).click();
+  await sign(page);
+  await page.getByRole("button", { name: "Sign off the briefing" }).click();
+  await expect(page.getByRole("heading", { name: "Briefing recorded" })).toBeVisible();
+  await page.getByRole("link", { name: "See the briefing record" }).click();
+  await expect(page.getByTestId("record-state")).toContainText("Signed off");
+  const rows = page.getByTestId("attendees").locator("tbody tr");
+  await expect(rows).toHaveCount(3);
+  await expect(page.getByTestId("attendees")).toContainText("Aled Menhenick");
+});
+
+test("a foreman cannot see drafts or another organisation's work", async ({ page, browser }) => {
+  const adviserContext = await browser.newContext();
+  const adviser = await adviserContext.newPage();
+  await signIn(adviser, "adviser@brackenfold.example");
+  const drafts = await adviser.evaluate(async () => (await (await fetch("/api/v1/assessments?status=draft")).json()).items as { revisionId: string }[]);
+  await adviserContext.close();
+  expect(drafts.length).toBeGreaterThan(0);
+
+  await signIn(page, "foreman@brackenfold.example");
+  await page.goto("/briefings");
+  for (const d of drafts) await expect(page.getByTestId(`briefable-${d.revisionId}`)).toHaveCount(0);
+  expect((await page.goto(`/briefings/${drafts[0].revisionId}`))?.status()).toBe(404);
+  expect((await page.goto(`/revisions/${drafts[0].revisionId}`))?.status()).toBe(403);
+  expect((await page.goto("/briefings/7b1e9c52-0d6f-4c1a-9a51-2f7d0f1e9a10"))?.status()).toBe(404);
+  const api = await page.evaluate(async (id) => (await fetch(`/api/v1/revisions/${id}/briefing-sheet`)).status, drafts[0].revisionId);
+  expect(api).toBe(404);
+});
+
+test("a site change note reaches the adviser's inbox and warns the next briefing", async ({ page }) => {
+  await signIn(page, "foreman@brackenfold.example");
+  await page.goto("/briefings");
+  await page.getByRole("link", { name: "Report a site change" }).first().click();
+  await page.getByRole("button", { name: "Send the site change" }).click();
+  await expect(page.getByText(/at least 10 characters/)).toBeVisible();
+  await page.getByLabel("What is different?").fill("Access point moved to the north gate: carry distance now 60 m.");
+  await page.getByRole("button", { name: "Send the site change" }).click();
+  await expect(page.getByText("Recorded, and the safety adviser has been e-mailed.")).toBeVisible();
+  const mail = await waitForMail("adviser@brackenfold.example");
+  expect(mail.subject).toContain("Site change reported");
+  expect(mail.text).toContain("carry distance now 60 m");
+
+  await page.goto("/briefings");
+  await expect(page.getByText("Site change reported — needs review")).toBeVisible();
+  await page.getByRole("link", { name: "Brief the gang" }).first().click();
+  await expect(page.getByRole("alert").filter({ hasText: "Site change reported" })).toContainText("carry distance now 60 m");
+});
