@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { DataTable, EmptyState } from "@/app/_components/table";
 import { requirePermission } from "@/lib/auth/guard";
 import { listOutboundEmails } from "@/lib/mail/log";
 
@@ -14,34 +15,21 @@ export default async function MailLogPage() {
       <h1 className="text-2xl font-bold">Sent e-mail</h1>
       <p className="text-sm text-muted">Every e-mail Heftwise sends for your organisation, newest first. Failed ones were tried three times.</p>
       {rows.length === 0 ? (
-        <p className="rounded-lg border border-rule bg-white p-4">Nothing sent yet.</p>
+        <EmptyState>Nothing sent yet.</EmptyState>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-rule bg-white">
-          <table className="w-full text-left text-sm">
-            <thead className="bg-paper">
-              <tr>
-                <th className="px-3 py-2">Created</th>
-                <th className="px-3 py-2">To</th>
-                <th className="px-3 py-2">Subject</th>
-                <th className="px-3 py-2">Kind</th>
-                <th className="px-3 py-2">Outcome</th>
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((row) => (
-                <tr key={row.id} className="border-t border-rule">
-                  <td className="px-3 py-2">{when(row.createdAt)}</td>
-                  <td className="px-3 py-2">{row.toAddress}</td>
-                  <td className="px-3 py-2">{row.subject}</td>
-                  <td className="px-3 py-2">{row.kind}</td>
-                  <td className="px-3 py-2">
-                    {row.status === "sent" ? `Sent ${when(row.sentAt)}` : row.status === "failed" ? <span className="font-bold text-danger">Failed: {row.lastError}</span> : "Sending"}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable head={["Created", "To", "Subject", "Kind", "Outcome"]} caption="Sent e-mail">
+          {rows.map((row) => (
+            <tr key={row.id} className="border-t border-rule">
+              <td className="px-3 py-2">{when(row.createdAt)}</td>
+              <td className="px-3 py-2">{row.toAddress}</td>
+              <td className="px-3 py-2">{row.subject}</td>
+              <td className="px-3 py-2">{row.kind}</td>
+              <td className="px-3 py-2">
+                {row.status === "sent" ? `Sent ${when(row.sentAt)}` : row.status === "failed" ? <span className="font-bold text-danger">Failed: {row.lastError}</span> : "Sending"}
+              </td>
+            </tr>
+          ))}
+        </DataTable>
       )}
     </div>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { DataTable } from "@/app/_components/table";
 import { getBriefingRecord } from "@/assessments/briefing/service";
 import { requireActor } from "@/lib/auth/session";
 import { AppError } from "@/lib/errors";
@@ -40,17 +41,8 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
           <strong data-testid="record-state">{briefing.completedAt ? `Signed off ${when(briefing.completedAt)}.` : "Not yet signed off by the foreman."}</strong>
         </p>
       </section>
-      <table className="w-full rounded-lg border border-rule bg-white text-left text-sm" data-testid="attendees">
-        <thead className="bg-paper">
-          <tr>
-            <th className="px-3 py-2">Name</th>
-            <th className="px-3 py-2">Employer</th>
-            <th className="px-3 py-2">Card</th>
-            <th className="px-3 py-2">Signed</th>
-            <th className="px-3 py-2">Signature</th>
-          </tr>
-        </thead>
-        <tbody>
+      <div data-testid="attendees">
+        <DataTable head={["Name", "Employer", "Card", "Signed", "Signature"]} caption="Operatives who signed on">
           {attendees.map((a) => (
             <tr key={a.id} className="border-t border-rule">
               <td className="px-3 py-2 font-bold">{a.name}</td>
@@ -63,8 +55,8 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
               </td>
             </tr>
           ))}
-        </tbody>
-      </table>
+        </DataTable>
+      </div>
     </div>
   );
 }
