@@ -40,11 +40,35 @@ export function makeP12(organisationName: string, passphrase: string): { p12: Ui
   return { p12: new Uint8Array(Buffer.from(der, "binary")), certificatePem: forge.pki.certificateToPem(cert) };
 }
 
+/** Whether the stored PKCS#12 opens with the passphrase (it does not after NEXTAUTH_SECRET changes). */
+function opens(p12: Uint8Array, passphrase: string): boolean {
+  try {
+    forge.pkcs12.pkcs12FromAsn1(forge.asn1.fromDer(Buffer.from(p12).toString("binary")), false, passphrase);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+const checked = new Set<string>();
+
 export async function getSigningKey(organisationId: string, organisationName: string): Promise<{ p12: Uint8Array; passphrase: string; certificatePem: string }> {
   const db = await getDb();
   const passphrase = passphraseFor(organisationId);
   const existing = await db.query.signingKeys.findFirst({ where: eq(signingKeys.organisationId, organisationId) });
-  if (existing) return { p12: existing.p12, passphrase, certificatePem: existing.certificatePem };
+  if (existing && (checked.has(organisationId) || opens(existing.p12, passphrase))) {
+    checked.add(organisationId);
+    return { p12: existing.p12, passphrase, certificatePem: existing.certificatePem };
+  }
+  if (existing) {
+    // The secret changed since the key was made: a new certificate signs from now on. Packs signed
+    // before stay verifiable on /verify (it compares their bytes, not the key).
+    console.warn(`signing key of organisation ${organisationId} no longer opens with NEXTAUTH_SECRET: making a new one`);
+    const made = makeP12(organisationName, passphrase);
+    await db.update(signingKeys).set({ p12: made.p12, certificatePem: made.certificatePem, createdAt: new Date() }).where(eq(signingKeys.organisationId, organisationId));
+    checked.add(organisationId);
+    return { p12: made.p12, passphrase, certificatePem: made.certificatePem };
+  }
   const made = makeP12(organisationName, passphrase);
   // Two first uses at once: the second insert does nothing and both read the one stored key.
   await db.insert(signingKeys).values({ organisationId, p12: made.p12, certificatePem: made.certificatePem }).onConflictDoNothing();

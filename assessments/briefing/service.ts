@@ -6,14 +6,17 @@
 import { and, asc, desc, eq, gte, inArray } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
-import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, revisions, siteChangeNotes, users } from "@/db/schema";
+import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, organisations, revisions, siteChangeNotes, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, type Actor } from "@/lib/permissions";
+import { getSigningKey } from "@/lib/signing-keys";
 import { putFile } from "@/lib/storage";
+import { renderPack } from "../pack/render";
+import { storePack } from "../revisions/approval";
 import { contentSchema } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { briefingScript } from "./instructions";
@@ -144,8 +147,14 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   const db = await getDb();
   const attendees = await db.select({ id: briefingAttendees.id }).from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId));
   if (attendees.length === 0) throw new AppError("validation", "At least one operative must sign on first", [{ path: "attendees", message: "At least one operative must sign on first" }]);
+  // The briefing record joins the pack: the organisation re-issues the approved pack with it, newly
+  // signed and recorded for /verify (earlier issues stay verifiable). Key fetched before the transaction.
+  const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
+  const key = await getSigningKey(actor.organisationId, org!.name);
   await db.transaction(async (tx) => {
     await tx.update(briefings).set({ completedAt: new Date(), foremanSignature: png(data.signature) }).where(eq(briefings.id, briefingId));
+    const pdf = await renderPack(tx, briefing.revisionId, key);
+    await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.completed", entityType: "revision", entityId: briefing.revisionId, details: { briefingId, attendees: attendees.length } });
   });
 }

@@ -43,6 +43,8 @@ export interface PackInput {
   scores: TaskScore[];
   componentNames: Record<string, string>;
   signatures: { name: string; role: string; signedAt: Date; png: Uint8Array }[];
+  /** Briefings held against this revision and signed off, with who signed on. */
+  briefings: { place: string; startedAt: Date; completedAt: Date; foremanName: string; foremanSignature: Uint8Array | null; attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; png: Uint8Array }[] }[];
   verifyUrl: string;
   /** PNG of a QR code of `verifyUrl`. */
   qrPng: Uint8Array;
@@ -267,6 +269,23 @@ export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise
     w.page.drawText(w.safe(`${sig.name}, ${sig.role}`), { x: MARGIN + 220, y: w.y - 20, size: 11, font: fonts.bold, color: COLOURS.ink });
     w.page.drawText(`Countersigned ${date(sig.signedAt)}`, { x: MARGIN + 220, y: w.y - 36, size: 9.5, font: fonts.regular, color: COLOURS.muted });
     w.y -= Math.max(image.height * scale + 14, 50);
+  }
+
+  // Briefing record
+  if (input.briefings.length) {
+    w.heading("Briefing record");
+    for (const b of input.briefings) {
+      w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, { font: fonts.bold });
+      for (const a of b.attendees) {
+        const image = await doc.embedPng(a.png);
+        const scale = Math.min(120 / image.width, 32 / image.height, 1);
+        w.ensure(40);
+        w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}, ${date(a.signedAt)}`), { x: MARGIN, y: w.y - 14, size: 9.5, font: fonts.regular, color: COLOURS.ink });
+        w.page.drawImage(image, { x: MARGIN + 360, y: w.y - 34, width: image.width * scale, height: image.height * scale });
+        w.y -= 40;
+      }
+      w.space(6);
+    }
   }
 
   w.footer((n, total) => [

@@ -4,10 +4,10 @@
  */
 import { readFile } from "node:fs/promises";
 import path from "node:path";
-import { asc, eq } from "drizzle-orm";
+import { and, asc, eq, inArray, isNotNull } from "drizzle-orm";
 import QRCode from "qrcode";
 import type { Db } from "@/db/client";
-import { assessments, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
+import { assessments, briefingAttendees, briefings, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
 import { config } from "@/lib/config";
 import { woffToTtf } from "@/lib/woff";
 import { contentSchema } from "../method-statement/content";
@@ -45,6 +45,8 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
   const nameOf = async (id: string | null) => (id ? ((await tx.select({ name: users.name }).from(users).where(eq(users.id, id)))[0]?.name ?? null) : null);
   const register = await tx.select({ id: components.id, name: components.name }).from(components).where(eq(components.organisationId, organisation.id));
   const signed = await tx.select().from(signatures).where(eq(signatures.revisionId, revisionId)).orderBy(asc(signatures.signedAt));
+  const held = await tx.select().from(briefings).where(and(eq(briefings.revisionId, revisionId), isNotNull(briefings.completedAt))).orderBy(asc(briefings.startedAt));
+  const attendees = held.length ? await tx.select().from(briefingAttendees).where(inArray(briefingAttendees.briefingId, held.map((b) => b.id))).orderBy(asc(briefingAttendees.signedAt)) : [];
   const url = verifyUrl();
   const doc = await buildPack(
     {
@@ -66,6 +68,14 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
       scores: (revision.results ?? []) as TaskScore[],
       componentNames: Object.fromEntries(register.map((c) => [c.id, c.name])),
       signatures: signed.map((s) => ({ name: s.signerName, role: s.signerRole, signedAt: s.signedAt, png: s.image })),
+      briefings: held.map((b) => ({
+        place: b.place,
+        startedAt: b.startedAt,
+        completedAt: b.completedAt!,
+        foremanName: b.foremanName,
+        foremanSignature: b.foremanSignature,
+        attendees: attendees.filter((a) => a.briefingId === b.id).map((a) => ({ name: a.name, employer: a.employer, cardNumber: a.cardNumber, signedAt: a.signedAt, png: a.signature })),
+      })),
       verifyUrl: url,
       qrPng: new Uint8Array(await QRCode.toBuffer(url, { type: "png", margin: 1, width: 220, errorCorrectionLevel: "M" })),
     },

@@ -26,7 +26,7 @@ const appUrl = () => config().NEXTAUTH_URL.replace(/\/$/, "");
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 type Tx = Parameters<Parameters<Awaited<ReturnType<typeof getDb>>["transaction"]>[0]>[0];
 
-async function storePack(tx: Tx, organisationId: string, revisionId: string, pdf: Uint8Array, kind: "draft" | "approved") {
+export async function storePack(tx: Tx, organisationId: string, revisionId: string, pdf: Uint8Array, kind: "draft" | "approved") {
   const file = await putFile(tx, organisationId, pdf, "application/pdf");
   await tx.insert(issuedPacks).values({ organisationId, revisionId, fileId: file.id, sha256: file.sha256, kind });
 }

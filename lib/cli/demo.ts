@@ -78,7 +78,9 @@ async function main() {
     NEXTAUTH_URL: origin,
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET || demoSecret(),
   };
-  Object.assign(process.env, { HEFTWISE_DATA_DIR: dataDir, NEXTAUTH_URL: origin });
+  // The seed below runs in this process: it must see the server's configuration (the signing key's
+  // passphrase is derived from NEXTAUTH_SECRET).
+  Object.assign(process.env, { HEFTWISE_DATA_DIR: dataDir, NEXTAUTH_URL: origin, NEXTAUTH_SECRET: env.NEXTAUTH_SECRET, SMTP_URL: env.SMTP_URL });
 
   buildIfNeeded(env);
 

@@ -40,6 +40,7 @@ async function main() {
     scores: review.scores,
     componentNames: Object.fromEntries(register.map((c) => [c.id, c.name])),
     signatures: [{ name: "Ruth Okonjo-Vale", role: "Contracts manager", signedAt: new Date(), png: drawnSignaturePng(2) }],
+    briefings: [],
     verifyUrl: "http://localhost:3000/verify",
     qrPng: new Uint8Array(await QRCode.toBuffer("http://localhost:3000/verify", { type: "png", margin: 1, width: 220 })),
   };

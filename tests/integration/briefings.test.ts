@@ -1,0 +1,99 @@
+/** Briefings on the server: approved revisions of assigned jobs only, sign-on once per key, sign-off, site changes. */
+import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { beforeAll, describe, expect, it } from "vitest";
+import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
+import { briefingSheetPdf, completeBriefing, createSiteChangeNote, getBriefingRecord, getBriefingScript, listForemanJobs, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
+import { listAssessments } from "@/assessments/revisions/service";
+import { AppError } from "@/lib/errors";
+import type { Actor } from "@/lib/permissions";
+import { drawnSignaturePng } from "@/lib/png";
+import { actorFor, demoOrganisation, otherOrganisation } from "./helpers";
+
+let foreman: Actor;
+let adviser: Actor;
+let approvedId: string;
+const signature = `data:image/png;base64,${drawnSignaturePng(7).toString("base64")}`;
+const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
+const attendee = (key: string, name = "Kieran Lusk") => ({ key, name, employer: "Brackenfold Lineside", cardNumber: "PTS 77120", signature, signedAt: new Date().toISOString() });
+
+beforeAll(async () => {
+  process.env.SMTP_URL = "smtp://127.0.0.1:9";
+  const { organisationId } = await demoOrganisation();
+  foreman = await actorFor("foreman", organisationId);
+  adviser = await actorFor("adviser", organisationId);
+  approvedId = (await listAssessments(adviser)).find((a) => a.status === "approved")!.revisionId;
+});
+
+describe("what a foreman sees", () => {
+  it("assigned jobs with their approved revisions only, never drafts", async () => {
+    const jobs = await listForemanJobs(foreman);
+    const revisions = jobs.flatMap((j) => j.revisions.map((r) => r.revisionId));
+    expect(revisions).toEqual([approvedId]);
+    const drafts = (await listAssessments(adviser)).filter((a) => a.status === "draft");
+    for (const d of drafts) expect(await code(getBriefingScript(foreman, d.revisionId))).toBe("not_found");
+    expect(await code(listForemanJobs(adviser))).toBe("forbidden");
+  });
+
+  it("the script reads each load in plain words, with the band and the caution-worthy lines", async () => {
+    const { script } = await getBriefingScript(foreman, approvedId);
+    expect(script.loads.length).toBeGreaterThan(0);
+    const carry = script.loads.find((l) => l.lines.some((x) => x.startsWith("Carry it against your body")))!;
+    expect(carry.lines.join(" ")).toMatch(/rest at least every 10 m/);
+    expect(script.emergency.nearestHospital).toContain("Hollin Vale General Hospital");
+  });
+
+  it("unassigning the foreman hides the job; another organisation gets 404", async () => {
+    const jobId = (await listForemanJobs(foreman)).find((j) => j.revisions.length)!.job.id;
+    await setJobForemen(adviser, jobId, { foremanIds: [] });
+    expect(await code(getBriefingScript(foreman, approvedId))).toBe("not_found");
+    await setJobForemen(adviser, jobId, { foremanIds: [foreman.id] });
+    const other = await otherOrganisation();
+    expect(await code(setJobForemen(other.admin, jobId, { foremanIds: [] }))).toBe("not_found");
+  });
+});
+
+describe("a briefing", () => {
+  it("records each sign-on once, however often the phone sends it, then closes at the foreman's signature", async () => {
+    expect(await code(startBriefing(foreman, { revisionId: approvedId, place: "" }))).toBe("validation");
+    const { briefingId } = await startBriefing(foreman, { revisionId: approvedId, place: "Gorsey Lane gate" });
+    expect(await code(completeBriefing(foreman, briefingId, { signature }))).toBe("validation");
+    const first = await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"));
+    const again = await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"));
+    expect(again).toEqual({ id: first.id, duplicate: true });
+    await recordAttendee(foreman, briefingId, attendee("key-bbbbbbbbbbbbbbbb", "Aled Menhenick"));
+    expect(await code(recordAttendee(foreman, briefingId, { ...attendee("key-cccccccccccccccc"), cardNumber: "" }))).toBe("validation");
+    expect(await code(recordAttendee(foreman, briefingId, { ...attendee("key-dddddddddddddddd"), signature: "data:image/png;base64,AAAA" }))).toBe("validation");
+    await completeBriefing(foreman, briefingId, { signature });
+    expect(await code(recordAttendee(foreman, briefingId, attendee("key-eeeeeeeeeeeeeeee")))).toBe("conflict");
+    expect(await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"))).toEqual({ id: first.id, duplicate: true });
+    const record = await getBriefingRecord(foreman, briefingId);
+    expect(record.attendees.map((a) => a.name).sort()).toEqual(["Aled Menhenick", "Kieran Lusk"]);
+    expect(record.briefing.completedAt).not.toBeNull();
+    const sheet = await briefingSheetPdf(foreman, approvedId, briefingId);
+    expect(Buffer.from(sheet.data).subarray(0, 5).toString()).toBe("%PDF-");
+    // The briefing record joins the signed pack, re-issued and verifiable.
+    const pack = await getPackFile(adviser, approvedId);
+    expect(Buffer.from(pack.data).toString("latin1")).toContain("/adbe.pkcs7.detached");
+    expect(await verifyPack(pack.data)).toMatchObject({ result: "authentic", status: "approved" });
+    if (spawnSync("which", ["pdftotext"]).status === 0) {
+      const file = path.join(mkdtempSync(path.join(tmpdir(), "heftwise-brief-")), "pack.pdf");
+      writeFileSync(file, pack.data);
+      const text = execFileSync("pdftotext", [file, "-"], { encoding: "utf8" });
+      expect(text).toContain("Briefing record");
+      expect(text).toContain("Aled Menhenick (Brackenfold Lineside), card PTS 77120");
+    }
+  });
+
+  it("a site change note marks the revision and shows on the next briefing, even when the e-mail fails", async () => {
+    const { mail } = await createSiteChangeNote(foreman, { revisionId: approvedId, text: "Access point moved: carry now 60 m." });
+    expect(mail.status).toBe("failed");
+    const { revision, siteChanges } = await getBriefingScript(foreman, approvedId);
+    expect(revision.needsReview).toBe(true);
+    expect(siteChanges[0].text).toBe("Access point moved: carry now 60 m.");
+    expect(await code(createSiteChangeNote(foreman, { revisionId: approvedId, text: "short" }))).toBe("validation");
+    expect(await code(createSiteChangeNote(adviser, { revisionId: approvedId, text: "Access point moved again." }))).toBe("forbidden");
+  });
+});
