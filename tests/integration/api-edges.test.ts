@@ -1,0 +1,69 @@
+/**
+ * Every route that takes JSON, through the same edges: no session (401), a role the permission
+ * table refuses (403), malformed JSON (400), another content type (415), an oversize body (413).
+ */
+import { beforeAll, describe, expect, it, vi } from "vitest";
+import type { Role } from "@/db/schema";
+import type { Actor } from "@/lib/permissions";
+import { actorFor, demoOrganisation } from "./helpers";
+
+const session = vi.hoisted(() => ({ actor: null as Actor | null }));
+vi.mock("@/lib/auth/session", () => ({ getActor: async () => session.actor }));
+
+type Handler = (request: Request, context: { params: Promise<Record<string, string>> }) => Promise<Response>;
+const id = "5d1c0f7e-2b8a-4c61-9d3e-7a0b1c2d3e4f";
+
+const routes: { name: string; load: () => Promise<Handler>; method: string; allowed: Role; refused: Role | null; params?: Record<string, string> }[] = [
+  { name: "POST /score", load: async () => (await import("@/app/api/v1/score/route")).POST as Handler, method: "POST", allowed: "foreman", refused: null },
+  { name: "POST /jobs", load: async () => (await import("@/app/api/v1/jobs/route")).POST as Handler, method: "POST", allowed: "adviser", refused: "approver" },
+  { name: "PUT /jobs/{id}", load: async () => (await import("@/app/api/v1/jobs/[id]/route")).PUT as Handler, method: "PUT", allowed: "adviser", refused: "foreman", params: { id } },
+  { name: "PUT /jobs/{id}/foremen", load: async () => (await import("@/app/api/v1/jobs/[id]/foremen/route")).PUT as Handler, method: "PUT", allowed: "admin", refused: "approver", params: { id } },
+  { name: "POST /components", load: async () => (await import("@/app/api/v1/components/route")).POST as Handler, method: "POST", allowed: "adviser", refused: "foreman" },
+  { name: "PUT /components/{id}", load: async () => (await import("@/app/api/v1/components/[id]/route")).PUT as Handler, method: "PUT", allowed: "adviser", refused: "approver", params: { id } },
+  { name: "POST /assessments", load: async () => (await import("@/app/api/v1/assessments/route")).POST as Handler, method: "POST", allowed: "adviser", refused: "foreman" },
+  { name: "PUT /revisions/{id}", load: async () => (await import("@/app/api/v1/revisions/[id]/route")).PUT as Handler, method: "PUT", allowed: "adviser", refused: "approver", params: { id } },
+  { name: "POST /revisions/{id}/submit", load: async () => (await import("@/app/api/v1/revisions/[id]/submit/route")).POST as Handler, method: "POST", allowed: "adviser", refused: "foreman", params: { id } },
+  { name: "POST /revisions/{id}/tasks", load: async () => (await import("@/app/api/v1/revisions/[id]/tasks/route")).POST as Handler, method: "POST", allowed: "adviser", refused: "approver", params: { id } },
+  { name: "PUT /revisions/{id}/tasks/{taskId}", load: async () => (await import("@/app/api/v1/revisions/[id]/tasks/[taskId]/route")).PUT as Handler, method: "PUT", allowed: "adviser", refused: "foreman", params: { id, taskId: "t-1" } },
+  { name: "DELETE /revisions/{id}/tasks/{taskId}", load: async () => (await import("@/app/api/v1/revisions/[id]/tasks/[taskId]/route")).DELETE as Handler, method: "DELETE", allowed: "adviser", refused: "foreman", params: { id, taskId: "t-1" } },
+  { name: "POST /revisions/{id}/approve", load: async () => (await import("@/app/api/v1/revisions/[id]/approve/route")).POST as Handler, method: "POST", allowed: "approver", refused: "adviser", params: { id } },
+  { name: "POST /revisions/{id}/return", load: async () => (await import("@/app/api/v1/revisions/[id]/return/route")).POST as Handler, method: "POST", allowed: "approver", refused: "adviser", params: { id } },
+  { name: "POST /briefings", load: async () => (await import("@/app/api/v1/briefings/route")).POST as Handler, method: "POST", allowed: "foreman", refused: "adviser" },
+  { name: "POST /briefings/{id}/attendees", load: async () => (await import("@/app/api/v1/briefings/[id]/attendees/route")).POST as Handler, method: "POST", allowed: "foreman", refused: "approver", params: { id } },
+  { name: "POST /briefings/{id}/complete", load: async () => (await import("@/app/api/v1/briefings/[id]/complete/route")).POST as Handler, method: "POST", allowed: "foreman", refused: "adviser", params: { id } },
+];
+
+const actors = {} as Record<Role, Actor>;
+beforeAll(async () => {
+  const { organisationId } = await demoOrganisation();
+  for (const role of ["admin", "adviser", "approver", "foreman"] as const) actors[role] = await actorFor(role, organisationId);
+});
+
+async function send(handler: Handler, method: string, params: Record<string, string>, body: string, type = "application/json") {
+  const res = await handler(new Request("http://localhost/api/v1/x", { method, headers: { "content-type": type }, body }), { params: Promise.resolve(params) });
+  return { status: res.status, body: await res.json() };
+}
+
+describe.each(routes)("$name", ({ load, method, allowed, refused, params = {} }) => {
+  it("answers 401 without a session, 403 for a refused role, and never a stack trace", async () => {
+    const handler = await load();
+    session.actor = null;
+    const anonymous = await send(handler, method, params, "{}");
+    expect(anonymous.status).toBe(401);
+    expect(anonymous.body).toEqual({ error: { code: "unauthenticated", message: "Sign in to continue" } });
+    if (refused) {
+      session.actor = actors[refused];
+      const denied = await send(handler, method, params, "{}");
+      expect(denied.status).toBe(403);
+      expect(JSON.stringify(denied.body)).not.toMatch(/at .*\.ts:\d+/);
+    }
+  });
+
+  it("answers 400 to malformed JSON, 415 to another content type, 413 to an oversize body", async () => {
+    const handler = await load();
+    session.actor = actors[allowed];
+    expect((await send(handler, method, params, "{not json")).status).toBe(400);
+    expect((await send(handler, method, params, "{}", "text/plain")).status).toBe(415);
+    expect((await send(handler, method, params, JSON.stringify({ pad: "x".repeat(1_100_000) }))).status).toBe(413);
+  });
+});
