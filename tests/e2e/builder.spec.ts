@@ -39,6 +39,7 @@ test("an adviser imports a CSV: a bad file is refused row by row, a good one is 
 
   await page.goto("/load-register");
   await page.getByLabel("Search by name").fill("Handrail");
+  await expect(page.getByRole("table", { name: "Load register" }).getByRole("row")).toHaveCount(2);
   await expect(page.getByRole("link", { name: "Handrail post" })).toBeVisible();
   await expect(page.getByText("Estimated — confirm")).toBeVisible();
 });

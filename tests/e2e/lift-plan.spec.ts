@@ -51,6 +51,7 @@ test("an adviser plans a lift: sling diagram, bad input refused, a complete plan
   await expect(page.getByText("Nothing required is missing.")).toBeVisible();
   await page.getByRole("button", { name: "Submit for approval" }).click();
   await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
+  await expect(page.getByText("The approver has been e-mailed the link and the draft pack.")).toBeVisible();
   await expect(page.getByText("cannot be edited here")).toBeVisible();
 });
 
@@ -83,6 +84,7 @@ test("the approver opens the e-mailed link, draws a signature and approves; the 
   await expect(dialog).toContainText("Approve this revision?");
   await dialog.getByRole("button", { name: "Approve and sign" }).click();
   await expect(approver.getByText(/Countersigned by Ruth Okonjo-Vale, Contracts manager/)).toBeVisible();
+  await expect(approver.getByText("Approved and countersigned. The signed pack is issued")).toBeVisible();
   await expect(approver.getByTestId("review-status")).toHaveText("Approved");
   await approverContext.close();
 

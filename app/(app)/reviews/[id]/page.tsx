@@ -4,6 +4,7 @@ import { SafetyCaution } from "@/app/_components/safety-caution";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import { getReview } from "@/assessments/revisions/approval";
 import type { Band } from "@/assessments/rules/types";
+import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { ReadOnlyRevision } from "../../revisions/[id]/read-only-revision";
@@ -11,9 +12,10 @@ import { ReviewActions } from "./review-actions";
 
 export const metadata: Metadata = { title: "Review" };
 
-export default async function ReviewPage({ params }: { params: Promise<{ id: string }> }) {
+export default async function ReviewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ notice?: string }> }) {
   const actor = await requirePermission("reviews:read");
   const { id } = await params;
+  const { notice } = await searchParams;
   const review = await getReview(actor, id).catch((err) => {
     if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
     throw err;
@@ -32,6 +34,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
           Download the {revision.status === "submitted" ? "draft" : "signed"} pack (PDF)
         </a>
       </header>
+      <Notice code={notice} />
       <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
       {revision.status === "submitted" ? (
         <ReviewActions revisionId={revision.id} version={revision.version} defaultName={actor.name} />

@@ -55,7 +55,7 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
     setConfirmOpen(false);
     const { ok, json } = await post("approve", { version, name, role, signature: drawn });
     if (ok) {
-      setOutcome({ tone: "success", text: json.mail?.status === "failed" ? "Approved. The author could not be e-mailed: see Sent e-mail." : "Approved and countersigned. The author has been told." });
+      router.replace(`/reviews/${revisionId}?notice=${json.mail?.status === "failed" ? "mail-failed" : "approved"}`);
       router.refresh();
     } else {
       setIssues(Object.fromEntries((json.error?.issues ?? []).map((i: { path: string; message: string }) => [i.path, i.message])));
@@ -66,7 +66,7 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
   const sendBack = async () => {
     const { ok, json } = await post("return", { version, comments });
     if (ok) {
-      setOutcome({ tone: "success", text: "Returned to the author with your comments." });
+      router.replace(`/reviews/${revisionId}?notice=${json.mail?.status === "failed" ? "mail-failed" : "returned"}`);
       router.refresh();
     } else setOutcome({ tone: "error", text: json.error?.issues?.[0]?.message ?? json.error?.message ?? "Could not return it." });
   };

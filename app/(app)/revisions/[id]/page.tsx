@@ -4,6 +4,7 @@ import Link from "next/link";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
+import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
 import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
@@ -16,10 +17,10 @@ export const metadata: Metadata = { title: "Assessment" };
 
 const STATUS_TEXT = { draft: "Draft", submitted: "Submitted — waiting for approval", approved: "Approved", superseded: "Superseded" } as const;
 
-export default async function RevisionPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ step?: string }> }) {
+export default async function RevisionPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ step?: string; notice?: string }> }) {
   const actor = await requirePermission("assessments:read");
   const { id } = await params;
-  const { step } = await searchParams;
+  const { step, notice } = await searchParams;
   const data = await getRevision(actor, id).catch((err) => {
     if (err instanceof AppError && err.code === "not_found") notFound();
     throw err;
@@ -39,6 +40,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
           {revision.reviewDate ? ` · review by ${revision.reviewDate}` : ""}
         </p>
       </header>
+      <Notice code={notice} />
       <nav className="flex flex-wrap gap-4 text-sm">
         {revision.status !== "draft" && (
           <a href={`/api/v1/revisions/${revision.id}/pack`} className="font-bold text-accent underline">

@@ -201,7 +201,8 @@ function ReviewStep({
     const body = await res.json();
     setBusy(false);
     if (res.ok) {
-      setOutcome({ tone: "success", text: "Submitted for approval." });
+      // The page re-renders read-only; the notice says whether the approver was e-mailed.
+      router.replace(`/revisions/${revisionId}?notice=${body.mail?.status === "failed" ? "mail-failed" : "submitted"}`);
       router.refresh();
       return;
     }
