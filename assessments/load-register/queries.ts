@@ -3,9 +3,6 @@ import { getDb } from "@/db/client";
 import { components } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/permissions";
 
-export const MASS_SOURCE_LABELS = { weighed: "Weighed", datasheet: "Maker's data sheet", estimated: "Estimated" } as const;
-export const GRIP_LABELS = { good: "Good", fair: "Fair", poor: "Poor" } as const;
-
 export async function listComponents(actor: Actor | null) {
   authorize(actor, "components:read");
   const db = await getDb();

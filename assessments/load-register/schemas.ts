@@ -41,3 +41,6 @@ Trough lid 1 m,14,1000,250,50,poor,weighed,
 `;
 
 export const MAX_IMPORT_ROWS = 500;
+
+export const MASS_SOURCE_LABELS = { weighed: "Weighed", datasheet: "Maker's data sheet", estimated: "Estimated" } as const;
+export const GRIP_LABELS = { good: "Good", fair: "Fair", poor: "Poor" } as const;

@@ -5,8 +5,7 @@ import Link from "next/link";
 import { ServerTable } from "@/app/_components/server-table";
 import type { Component } from "@/db/schema";
 
-const GRIP = { good: "Good", fair: "Fair", poor: "Poor" } as const;
-const SOURCE = { weighed: "Weighed", datasheet: "Maker's data sheet", estimated: "Estimated" } as const;
+import { GRIP_LABELS as GRIP, MASS_SOURCE_LABELS as SOURCE } from "@/assessments/load-register/schemas";
 
 const columns: ColumnDef<Component, unknown>[] = [
   {
