@@ -15,7 +15,6 @@ export default async function ImportPage() {
       <h1 className="text-2xl font-bold">Import components from CSV</h1>
       <p className="text-sm text-muted">
         One component a row. Every row is checked first; the import adds all rows or none.{" "}
-        {/* eslint-disable-next-line @next/next/no-html-link-for-pages -- a file download from the API, not a page */}
         <a href="/api/v1/components/import/template" download className="font-bold text-accent underline">
           Download the CSV template
         </a>
