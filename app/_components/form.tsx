@@ -1,10 +1,10 @@
 /** Form parts shared by every Heftwise form: a labelled field with its error, and buttons. */
 import { forwardRef } from "react";
 
-export function FieldError({ id, message }: { id: string; message?: string }) {
+export function FieldError({ id, message, compact = false }: { id?: string; message?: string; compact?: boolean }) {
   if (!message) return null;
   return (
-    <p id={id} role="alert" className="mt-1 text-sm font-bold text-danger">
+    <p id={id} role="alert" className={`font-bold text-danger ${compact ? "mt-0.5 text-xs" : "mt-1 text-sm"}`}>
       {message}
     </p>
   );

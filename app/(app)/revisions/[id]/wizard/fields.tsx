@@ -1,14 +1,12 @@
 "use client";
 
 /** Small inputs bound to the wizard's form by path, with the field's error beside it. */
-import { useFormContext, type FieldPath, type FieldValues } from "react-hook-form";
+import { get, useFormContext, type FieldErrors, type FieldPath } from "react-hook-form";
+import { FieldError } from "@/app/_components/form";
 import type { Content } from "@/assessments/method-statement/content";
 
-function errorAt(errors: FieldValues, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const part of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[part];
-  return (node as { message?: string } | undefined)?.message;
-}
+/** The error message at a dotted path ("tasks.0.niosh.origin.h"), read with react-hook-form's own helper. */
+export const errorAt = (errors: FieldErrors, path: string): string | undefined => (get(errors, path) as { message?: string } | undefined)?.message;
 
 const inputClass = (error?: string) => `mt-1 block w-full rounded border bg-white px-2 py-1.5 ${error ? "border-danger" : "border-rule"}`;
 
@@ -31,11 +29,7 @@ export function Num({ name, label, unit, optional = false, step = "any" }: { nam
         className={inputClass(error)}
         {...register(name, { setValueAs: (v: string | number) => (v === "" || v === null ? (optional ? undefined : Number.NaN) : Number(v)) })}
       />
-      {error && (
-        <p role="alert" className="mt-0.5 text-xs font-bold text-danger">
-          {error}
-        </p>
-      )}
+      <FieldError compact message={error} />
     </div>
   );
 }
@@ -51,11 +45,7 @@ export function Text({ name, label, area = false, hint }: { name: FieldPath<Cont
       </label>
       {hint && <p className="text-xs text-muted">{hint}</p>}
       {area ? <textarea id={id} rows={4} className={inputClass(error)} aria-invalid={error ? true : undefined} {...register(name)} /> : <input id={id} className={inputClass(error)} aria-invalid={error ? true : undefined} {...register(name)} />}
-      {error && (
-        <p role="alert" className="mt-0.5 text-xs font-bold text-danger">
-          {error}
-        </p>
-      )}
+      <FieldError compact message={error} />
     </div>
   );
 }
@@ -76,11 +66,7 @@ export function Choice({ name, label, options, asNumber = false }: { name: Field
           </option>
         ))}
       </select>
-      {error && (
-        <p role="alert" className="mt-0.5 text-xs font-bold text-danger">
-          {error}
-        </p>
-      )}
+      <FieldError compact message={error} />
     </div>
   );
 }

@@ -6,9 +6,10 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { SlingDiagram } from "@/app/_components/drawings/sling-diagram";
-import { FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
+import { FieldError, FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
 import { TaskResult } from "@/app/_components/results/task-result";
 import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
+import { errorAt } from "../../wizard/fields";
 import { scoreTask } from "@/assessments/method-statement/score-task";
 import { COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
 
@@ -20,12 +21,6 @@ const ROLES = [
   ["operator", "Operator"],
   ["slingerSignaller", "Slinger/signaller"],
 ] as const;
-
-function messageAt(errors: Record<string, unknown>, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const part of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[part];
-  return (node as { message?: string } | undefined)?.message;
-}
 
 interface Props {
   revisionId: string;
@@ -47,7 +42,6 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
   const exams = useFieldArray({ control, name: "examinations" });
   const plan = useWatch({ control }) as Plan;
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
-  const errors = formState.errors as Record<string, unknown>;
 
   const score = useMemo(() => {
     const parsed = liftPlanInputsSchema.safeParse(plan);
@@ -55,7 +49,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
   }, [plan, load, task]);
 
   const num = (name: string, label: string, unit?: string, optional = false) => {
-    const error = messageAt(errors, name);
+    const error = errorAt(formState.errors, name);
     return (
       <div>
         <label htmlFor={`lp-${name}`} className="block text-sm font-bold">
@@ -72,11 +66,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
           className={`mt-1 block w-full rounded border bg-white px-2 py-1.5 ${error ? "border-danger" : "border-rule"}`}
           {...register(name as "riggingMass", { setValueAs: (v: string | number) => (v === "" ? (optional ? undefined : Number.NaN) : Number(v)) })}
         />
-        {error && (
-          <p role="alert" className="mt-0.5 text-xs font-bold text-danger">
-            {error}
-          </p>
-        )}
+        <FieldError compact message={error} />
       </div>
     );
   };
@@ -87,7 +77,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
         {label}
       </label>
       <input id={`lp-${name}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(name as "groundBearingNotes", optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined)} />
-      {messageAt(errors, name) && <p role="alert" className="mt-0.5 text-xs font-bold text-danger">{messageAt(errors, name)}</p>}
+      <FieldError compact message={errorAt(formState.errors, name)} />
     </div>
   );
 
