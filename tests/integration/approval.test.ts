@@ -38,13 +38,25 @@ afterAll(() => fake.close());
 const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
 const craneRevision = async () => (await listAssessments(adviser)).find((a) => a.title.includes("lorry-loader"))!.revisionId;
 
+/**
+ * Length of the DER value at the start of `bytes`, header included. The /Contents hole is padded with
+ * zeros after the signature; its own length header says where it ends (trimming trailing zeros would
+ * also cut a signature whose last byte happens to be 00).
+ */
+function derLength(bytes: Buffer) {
+  const first = bytes[1];
+  if (first < 0x80) return 2 + first;
+  const size = first & 0x7f;
+  return 2 + size + bytes.subarray(2, 2 + size).reduce((n, b) => n * 256 + b, 0);
+}
+
 /** Checks the CMS signature in a signed PDF independently of the signing code. */
 function checkPdfSignature(pdf: Buffer) {
   const text = pdf.toString("latin1");
   const byteRange = text.match(/\/ByteRange\s*\[\s*(\d+)\s+(\d+)\s+(\d+)\s+(\d+)\s*\]/)!.slice(1).map(Number);
   const signedBytes = Buffer.concat([pdf.subarray(byteRange[0], byteRange[0] + byteRange[1]), pdf.subarray(byteRange[2], byteRange[2] + byteRange[3])]);
-  const hex = pdf.subarray(byteRange[0] + byteRange[1] + 1, byteRange[2] - 1).toString("latin1").replace(/0+$/, "");
-  const p7 = forge.pkcs7.messageFromAsn1(forge.asn1.fromDer(forge.util.hexToBytes(hex.length % 2 ? `${hex}0` : hex))) as forge.pkcs7.PkcsSignedData & { rawCapture: { authenticatedAttributes: forge.asn1.Asn1[]; signature: string } };
+  const contents = Buffer.from(pdf.subarray(byteRange[0] + byteRange[1] + 1, byteRange[2] - 1).toString("latin1"), "hex");
+  const p7 = forge.pkcs7.messageFromAsn1(forge.asn1.fromDer(contents.subarray(0, derLength(contents)).toString("binary"))) as forge.pkcs7.PkcsSignedData & { rawCapture: { authenticatedAttributes: forge.asn1.Asn1[]; signature: string } };
   const cert = p7.certificates[0];
   const attrs = p7.rawCapture.authenticatedAttributes;
   const digestAttr = attrs.find((a) => forge.asn1.derToOid((a.value as forge.asn1.Asn1[])[0].value as string) === forge.pki.oids.messageDigest)!;
