@@ -1,9 +1,7 @@
 import { z } from "zod";
+import { drawnSignatureSchema } from "@/lib/drawn-signature";
 
-const signature = z
-  .string()
-  .max(700_000, "The signature image is too large")
-  .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, "Sign in the box");
+const signature = drawnSignatureSchema("Sign in the box");
 
 export const startBriefingSchema = z.object({
   revisionId: z.uuid("Choose an approved assessment"),

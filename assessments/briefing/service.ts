@@ -23,12 +23,6 @@ import { briefingScript } from "./instructions";
 import { attendeeSchema, completeBriefingSchema, siteChangeSchema, startBriefingSchema } from "./schemas";
 
 const isUuid = (s: string) => z.uuid().safeParse(s).success;
-const png = (dataUrl: string, path = "signature") => {
-  const bytes = Buffer.from(dataUrl.split(",")[1] ?? "", "base64");
-  if (bytes.byteLength < 100 || bytes.subarray(0, 8).toString("hex") !== "89504e470d0a1a0a")
-    throw new AppError("validation", "Some fields need attention", [{ path, message: "Sign in the box" }]);
-  return bytes;
-};
 const startOfToday = () => {
   const d = new Date();
   d.setUTCHours(0, 0, 0, 0);
@@ -129,7 +123,7 @@ export async function recordAttendee(actor: Actor | null, briefingId: string, in
   const db = await getDb();
   const [inserted] = await db
     .insert(briefingAttendees)
-    .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: png(data.signature), signedAt: new Date(data.signedAt) })
+    .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: data.signature, signedAt: new Date(data.signedAt) })
     .onConflictDoNothing({ target: briefingAttendees.idempotencyKey })
     .returning({ id: briefingAttendees.id });
   if (inserted) return { id: inserted.id, duplicate: false };
@@ -152,7 +146,7 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
   const key = await getSigningKey(actor.organisationId, org!.name);
   await db.transaction(async (tx) => {
-    await tx.update(briefings).set({ completedAt: new Date(), foremanSignature: png(data.signature) }).where(eq(briefings.id, briefingId));
+    await tx.update(briefings).set({ completedAt: new Date(), foremanSignature: data.signature }).where(eq(briefings.id, briefingId));
     const pdf = await renderPack(tx, briefing.revisionId, key);
     await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.completed", entityType: "revision", entityId: briefing.revisionId, details: { briefingId, attendees: attendees.length } });

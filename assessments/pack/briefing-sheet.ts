@@ -2,10 +2,11 @@
  * The foreman's briefing sheet: large type, one block per load with the controls that matter, the
  * hazards, PPE and emergency arrangements — and, when a briefing has been held, its record.
  */
-import fontkit from "@pdf-lib/fontkit";
 import { PDFDocument } from "pdf-lib";
 import type { BriefingScript } from "../briefing/instructions";
-import { PACK_CAUTION, withFastText, type PackFonts } from "./document";
+import { PACK_CAUTION } from "./document";
+import type { PackFonts } from "./fonts";
+import { embedPng } from "./images";
 import { COLOURS, Writer } from "./layout";
 
 export interface BriefingSheetInput {
@@ -17,18 +18,11 @@ export interface BriefingSheetInput {
   record?: { place: string; startedAt: Date; foremanName: string; attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; signature: Uint8Array }[] };
 }
 
-export async function buildBriefingSheet(input: BriefingSheetInput, fontBytes: PackFonts): Promise<Uint8Array> {
+export async function buildBriefingSheet(input: BriefingSheetInput, fonts: PackFonts): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
-  doc.registerFontkit(fontkit);
-  const fonts = {
-    regular: withFastText(await doc.embedFont(fontBytes.regular, { subset: true })),
-    bold: withFastText(await doc.embedFont(fontBytes.bold, { subset: true })),
-    italic: withFastText(await doc.embedFont(fontBytes.italic, { subset: true })),
-  };
   doc.setTitle(`Briefing sheet: ${input.title}`);
   doc.setCreator("Heftwise");
-  const glyphs = new Set(fonts.regular.getCharacterSet());
-  const w = new Writer(doc, fonts, (cp) => glyphs.has(cp));
+  const w = new Writer(doc, fonts);
   const big = { size: 14 };
   w.heading(`Briefing: ${input.title}`, 1);
   w.text(`${input.jobName} · revision ${input.revisionNumber}`, { size: 13, color: COLOURS.muted });
@@ -61,7 +55,7 @@ export async function buildBriefingSheet(input: BriefingSheetInput, fontBytes: P
     w.heading("Briefing record");
     w.text(`Held at ${input.record.place}, ${input.record.startedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, by ${input.record.foremanName}.`, { size: 12 });
     for (const a of input.record.attendees) {
-      const image = await doc.embedPng(a.signature);
+      const image = embedPng(doc, a.signature);
       const scale = Math.min(140 / image.width, 40 / image.height, 1);
       w.ensure(52);
       w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}`), { x: 48, y: w.y - 14, size: 11, font: fonts.bold, color: COLOURS.ink });
@@ -70,6 +64,6 @@ export async function buildBriefingSheet(input: BriefingSheetInput, fontBytes: P
       w.y -= 50;
     }
   }
-  w.footer((n, total) => [`Caution: ${PACK_CAUTION}`, w.safe(`Briefing sheet · ${input.title} · revision ${input.revisionNumber} · page ${n} of ${total}`)]);
+  w.finish((n, total) => [`Caution: ${PACK_CAUTION}`, w.safe(`Briefing sheet · ${input.title} · revision ${input.revisionNumber} · page ${n} of ${total}`)]);
   return doc.save({ useObjectStreams: false, objectsPerTick: Infinity });
 }

@@ -4,8 +4,8 @@
  * drawn, the method statement, the hazard register, signatures — and on every page the safety
  * caution, the revision, its content hash and the page number.
  */
-import fontkit from "@pdf-lib/fontkit";
-import { PDFDocument, PDFHexString, PDFName, PDFString, rgb, type PDFFont } from "pdf-lib";
+import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
+import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
 import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
 import { adviceForClear } from "../method-statement/advice";
@@ -13,16 +13,12 @@ import type { TaskScore } from "../method-statement/score-task";
 import { fmt } from "../rules/format";
 import { worstBand } from "../rules/bands";
 import type { Band, Reason, Warning } from "../rules/types";
+import type { PackFonts } from "./fonts";
+import { embedPng } from "./images";
 import { COLOURS, MARGIN, Writer } from "./layout";
 
 export const PACK_CAUTION =
   "Heftwise supports, and does not replace, the judgement of a competent person. Check every result on site, and follow local regulations, your organisation's procedures and licensed practice.";
-
-export interface PackFonts {
-  regular: Uint8Array;
-  bold: Uint8Array;
-  italic: Uint8Array;
-}
 
 export interface PackInput {
   organisation: string;
@@ -45,62 +41,16 @@ export interface PackInput {
   signatures: { name: string; role: string; signedAt: Date; png: Uint8Array }[];
   /** Briefings held against this revision and signed off, with who signed on. */
   briefings: { place: string; startedAt: Date; completedAt: Date; foremanName: string; foremanSignature: Uint8Array | null; attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; png: Uint8Array }[] }[];
+  /** The public check page; printed on the cover with a QR code of it. */
   verifyUrl: string;
-  /** PNG of a QR code of `verifyUrl`. */
-  qrPng: Uint8Array;
 }
 
 const date = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 16).replace("T", " ") + " UTC" : "—");
 
-/**
- * pdf-lib shapes every string with fontkit's full layout engine (about 0.3 ms a call), which made a
- * 30-task pack take seconds. Text here needs no shaping (Latin, no ligatures required), so each
- * character is encoded and measured once through pdf-lib itself — which also records the glyph for
- * the subset and the widths table — and strings are assembled from that cache. Kerning is dropped.
- */
-export function withFastText(font: PDFFont): PDFFont {
-  const encodeOne = font.encodeText.bind(font);
-  const widthOne = font.widthOfTextAtSize.bind(font);
-  const hex = new Map<string, string>();
-  const width = new Map<string, number>();
-  font.encodeText = (text: string) => {
-    let out = "";
-    for (const ch of text) {
-      let h = hex.get(ch);
-      if (h === undefined) {
-        h = encodeOne(ch).toString().slice(1, -1);
-        hex.set(ch, h);
-      }
-      out += h;
-    }
-    return PDFHexString.of(out);
-  };
-  font.widthOfTextAtSize = (text: string, size: number) => {
-    let total = 0;
-    for (const ch of text) {
-      let w = width.get(ch);
-      if (w === undefined) {
-        w = widthOne(ch, 1000) / 1000;
-        width.set(ch, w);
-      }
-      total += w;
-    }
-    return total * size;
-  };
-  return font;
-}
-
 /** Builds the pack; the caller saves it (and signs it, for an approved revision). */
-export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise<PDFDocument> {
+export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDFDocument> {
   const doc = await PDFDocument.create();
-  doc.registerFontkit(fontkit);
-  const fonts = {
-    regular: withFastText(await doc.embedFont(fontBytes.regular, { subset: true })),
-    bold: withFastText(await doc.embedFont(fontBytes.bold, { subset: true })),
-    italic: withFastText(await doc.embedFont(fontBytes.italic, { subset: true })),
-  };
-  const glyphs = new Set(fonts.regular.getCharacterSet());
-  const w = new Writer(doc, fonts, (cp) => glyphs.has(cp));
+  const w = new Writer(doc, fonts);
   const { content, scores, revision } = input;
 
   doc.setTitle(`${input.title} — revision ${revision.number}`);
@@ -143,9 +93,8 @@ export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise
   w.page.drawText("Worst band of the tasks:", { x: MARGIN, y: w.y - 12, size: 11, font: fonts.bold, color: COLOURS.ink });
   w.band(scores.some((s) => s.band) ? worst : null, MARGIN + 140, w.y - 16, 11);
   w.y -= 30;
-  const qr = await doc.embedPng(input.qrPng);
   w.ensure(130);
-  w.page.drawImage(qr, { x: MARGIN, y: w.y - 110, width: 110, height: 110 });
+  w.page.fillRectangles(qrModules(input.verifyUrl, MARGIN, w.y - 110, 110), COLOURS.ink);
   w.page.drawText("Check this document", { x: MARGIN + 124, y: w.y - 30, size: 11, font: fonts.bold, color: COLOURS.ink });
   w.page.drawText(w.safe(input.verifyUrl), { x: MARGIN + 124, y: w.y - 46, size: 9.5, font: fonts.regular, color: COLOURS.band.clear });
   w.page.drawText("Upload it there to see whether it is the approved revision, unaltered.", { x: MARGIN + 124, y: w.y - 62, size: 9, font: fonts.regular, color: COLOURS.muted });
@@ -262,7 +211,7 @@ export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise
   w.heading("Signatures");
   if (input.signatures.length === 0) w.text("Not yet countersigned.", { color: COLOURS.muted });
   for (const sig of input.signatures) {
-    const image = await doc.embedPng(sig.png);
+    const image = embedPng(doc, sig.png);
     const scale = Math.min(200 / image.width, 70 / image.height, 1);
     w.ensure(100);
     w.page.drawImage(image, { x: MARGIN, y: w.y - image.height * scale - 4, width: image.width * scale, height: image.height * scale });
@@ -277,7 +226,7 @@ export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise
     for (const b of input.briefings) {
       w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, { font: fonts.bold });
       for (const a of b.attendees) {
-        const image = await doc.embedPng(a.png);
+        const image = embedPng(doc, a.png);
         const scale = Math.min(120 / image.width, 32 / image.height, 1);
         w.ensure(40);
         w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}, ${date(a.signedAt)}`), { x: MARGIN, y: w.y - 14, size: 9.5, font: fonts.regular, color: COLOURS.ink });
@@ -288,11 +237,33 @@ export async function buildPack(input: PackInput, fontBytes: PackFonts): Promise
     }
   }
 
-  w.footer((n, total) => [
+  w.finish((n, total) => [
     `Caution: ${PACK_CAUTION}`,
     w.safe(`${input.title} · revision ${revision.number} (${revision.status}) · content SHA-256 ${revision.contentHash.slice(0, 16)}… · page ${n} of ${total}`),
   ]);
   return doc;
+}
+
+/**
+ * A QR code drawn as vector squares (sharp at any print size), with a one-module quiet zone inside
+ * the given square. Dark modules next to each other in a row are joined into one rectangle.
+ */
+function qrModules(text: string, x: number, y: number, side: number) {
+  const { modules } = QRCode.create(text, { errorCorrectionLevel: "M" });
+  const cell = side / (modules.size + 2);
+  const rects: { x: number; y: number; width: number; height: number }[] = [];
+  for (let row = 0; row < modules.size; row++) {
+    for (let col = 0; col < modules.size; ) {
+      if (!modules.get(row, col)) {
+        col++;
+        continue;
+      }
+      const start = col;
+      while (col < modules.size && modules.get(row, col)) col++;
+      rects.push({ x: x + (start + 1) * cell, y: y + side - (row + 2) * cell, width: (col - start) * cell, height: cell });
+    }
+  }
+  return rects;
 }
 
 function reasons(w: Writer, list: Reason[], warnings: Warning[]) {

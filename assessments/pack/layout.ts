@@ -1,9 +1,11 @@
 /**
- * A small flowing-text layout on pdf-lib: headings, wrapped paragraphs, key–value rows, tables,
- * band markers, page breaks, and a footer stamped on every page at the end.
+ * A small flowing-text layout for the pack's PDFs: headings, wrapped paragraphs, key–value rows,
+ * tables, band markers, page breaks, and a footer stamped on every page at the end.
  */
-import { rgb, type PDFDocument, type PDFFont, type PDFPage, type RGB } from "pdf-lib";
+import { rgb, type PDFDocument, type RGB } from "pdf-lib";
 import type { Band } from "../rules/types";
+import { PackResources, PageCanvas } from "./canvas";
+import type { PackFont, PackFonts } from "./fonts";
 
 export const A4 = { width: 595.28, height: 841.89 };
 export const MARGIN = 48;
@@ -23,25 +25,20 @@ export const COLOURS = {
   } satisfies Record<Band, RGB>,
 };
 
-export interface Fonts {
-  regular: PDFFont;
-  bold: PDFFont;
-  italic: PDFFont;
-}
-
 /** Characters outside the shipped fonts' Latin set, written the long way rather than dropped. */
 const REPLACEMENTS: Record<string, string> = { "β": "beta ", "≤": "<=", "≥": ">=", "→": "->", "←": "<-", "✕": "x", "•": "-", "▲": "", "▼": "", "\u2212": "-", "\u00a0": " " };
 
 export class Writer {
-  page!: PDFPage;
+  page!: PageCanvas;
   y = 0;
-  readonly pages: PDFPage[] = [];
+  readonly pages: PageCanvas[] = [];
+  private readonly resources: PackResources;
 
   constructor(
     readonly doc: PDFDocument,
-    readonly fonts: Fonts,
-    private readonly supported: (codePoint: number) => boolean,
+    readonly fonts: PackFonts,
   ) {
+    this.resources = new PackResources(doc, fonts);
     this.newPage();
   }
 
@@ -51,17 +48,18 @@ export class Writer {
 
   /** Text the fonts can draw: known replacements, and "?" for anything else. */
   safe(text: string): string {
+    if (this.fonts.regular.canDraw(text)) return text;
     let out = "";
     for (const ch of text) {
       if (REPLACEMENTS[ch] !== undefined) out += REPLACEMENTS[ch];
-      else if (ch === "\n" || this.supported(ch.codePointAt(0)!)) out += ch;
+      else if (ch === "\n" || this.fonts.regular.canDraw(ch)) out += ch;
       else out += "?";
     }
     return out;
   }
 
   newPage() {
-    this.page = this.doc.addPage([A4.width, A4.height]);
+    this.page = new PageCanvas(this.doc.addPage([A4.width, A4.height]), this.resources);
     this.pages.push(this.page);
     this.y = A4.height - MARGIN;
   }
@@ -74,16 +72,22 @@ export class Writer {
     this.y -= h;
   }
 
-  lines(text: string, font: PDFFont, size: number, width = this.width): string[] {
+  lines(text: string, font: PackFont, size: number, width = this.width): string[] {
     const out: string[] = [];
+    const space = font.widthOfTextAtSize(" ", size);
     for (const paragraph of this.safe(text).split("\n")) {
+      // Widths add up (no kerning), so each word is measured once.
       let line = "";
-      for (const word of paragraph.split(/\s+/).filter(Boolean)) {
-        const candidate = line ? `${line} ${word}` : word;
-        if (font.widthOfTextAtSize(candidate, size) <= width || !line) line = candidate;
-        else {
+      let lineWidth = 0;
+      for (const word of paragraph.split(/\s+/).flatMap((w) => this.fitWord(w, font, size, width))) {
+        const wordWidth = font.widthOfTextAtSize(word, size);
+        if (!line || lineWidth + space + wordWidth <= width) {
+          lineWidth = line ? lineWidth + space + wordWidth : wordWidth;
+          line = line ? `${line} ${word}` : word;
+        } else {
           out.push(line);
           line = word;
+          lineWidth = wordWidth;
         }
       }
       out.push(line);
@@ -91,7 +95,24 @@ export class Writer {
     return out;
   }
 
-  text(text: string, { size = 10, font = this.fonts.regular, color = COLOURS.ink, indent = 0, gap = 3 }: { size?: number; font?: PDFFont; color?: RGB; indent?: number; gap?: number } = {}) {
+  /** A word wider than the line (a content hash, a long reference) cut into pieces that fit. */
+  private fitWord(word: string, font: PackFont, size: number, width: number): string[] {
+    if (!word) return [];
+    if (font.widthOfTextAtSize(word, size) <= width) return [word];
+    const pieces: string[] = [];
+    let piece = "";
+    for (const ch of word) {
+      if (piece && font.widthOfTextAtSize(piece + ch, size) > width) {
+        pieces.push(piece);
+        piece = "";
+      }
+      piece += ch;
+    }
+    pieces.push(piece);
+    return pieces;
+  }
+
+  text(text: string, { size = 10, font = this.fonts.regular, color = COLOURS.ink, indent = 0, gap = 3 }: { size?: number; font?: PackFont; color?: RGB; indent?: number; gap?: number } = {}) {
     for (const line of this.lines(text, font, size, this.width - indent)) {
       this.ensure(size + gap);
       this.y -= size;
@@ -164,13 +185,17 @@ export class Writer {
     return width;
   }
 
-  /** Stamps the footer on every page: caution, revision, content hash, page n of N. */
-  footer(lines: (pageNumber: number, pageCount: number) => string[]) {
+  /**
+   * Ends the document: stamps the footer on every page (caution, revision, content hash, page n of
+   * N) and writes each page's content into the PDF.
+   */
+  finish(footer: (pageNumber: number, pageCount: number) => string[]) {
     this.pages.forEach((page, i) => {
-      const wrapped = lines(i + 1, this.pages.length).flatMap((t) => this.lines(t, this.fonts.regular, 7, this.width));
+      const wrapped = footer(i + 1, this.pages.length).flatMap((t) => this.lines(t, this.fonts.regular, 7, this.width));
       const top = MARGIN + 8 + wrapped.length * 9;
       page.drawLine({ start: { x: MARGIN, y: top + 4 }, end: { x: A4.width - MARGIN, y: top + 4 }, thickness: 0.6, color: COLOURS.rule });
       wrapped.forEach((line, j) => page.drawText(line, { x: MARGIN, y: top - 7 - j * 9, size: 7, font: this.fonts.regular, color: COLOURS.muted }));
+      page.finish();
     });
   }
 }

@@ -5,22 +5,22 @@
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { and, asc, eq, inArray, isNotNull } from "drizzle-orm";
-import QRCode from "qrcode";
 import type { Db } from "@/db/client";
 import { assessments, briefingAttendees, briefings, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
 import { config } from "@/lib/config";
 import { woffToTtf } from "@/lib/woff";
 import { contentSchema } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
-import { buildPack, type PackFonts } from "./document";
+import { buildPack } from "./document";
+import { PackFont, type PackFonts } from "./fonts";
 import { savePack } from "./sign";
 
 let fonts: Promise<PackFonts> | undefined;
-/** The shipped fonts, read and converted to TrueType once per process. */
+/** The shipped fonts, read, converted to TrueType and prepared for PDFs once per process. */
 export function packFonts(): Promise<PackFonts> {
   const dir = path.join(process.cwd(), "fonts");
   fonts ??= Promise.all(
-    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map(async (f) => woffToTtf(await readFile(path.join(dir, f)))),
+    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map(async (f) => PackFont.load(woffToTtf(await readFile(path.join(dir, f))))),
   ).then(([regular, bold, italic]) => ({ regular, bold, italic }));
   return fonts;
 }
@@ -47,7 +47,6 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
   const signed = await tx.select().from(signatures).where(eq(signatures.revisionId, revisionId)).orderBy(asc(signatures.signedAt));
   const held = await tx.select().from(briefings).where(and(eq(briefings.revisionId, revisionId), isNotNull(briefings.completedAt))).orderBy(asc(briefings.startedAt));
   const attendees = held.length ? await tx.select().from(briefingAttendees).where(inArray(briefingAttendees.briefingId, held.map((b) => b.id))).orderBy(asc(briefingAttendees.signedAt)) : [];
-  const url = verifyUrl();
   const doc = await buildPack(
     {
       organisation: organisation.name,
@@ -76,8 +75,7 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
         foremanSignature: b.foremanSignature,
         attendees: attendees.filter((a) => a.briefingId === b.id).map((a) => ({ name: a.name, employer: a.employer, cardNumber: a.cardNumber, signedAt: a.signedAt, png: a.signature })),
       })),
-      verifyUrl: url,
-      qrPng: new Uint8Array(await QRCode.toBuffer(url, { type: "png", margin: 1, width: 220, errorCorrectionLevel: "M" })),
+      verifyUrl: verifyUrl(),
     },
     await packFonts(),
   );

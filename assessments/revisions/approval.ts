@@ -11,6 +11,7 @@ import { getDb } from "@/db/client";
 import { assessments, auditEvents, issuedPacks, organisations, revisions, signatures, storedFiles, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
+import { drawnSignatureSchema } from "@/lib/drawn-signature";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
@@ -113,10 +114,7 @@ export async function getReview(actor: Actor | null, revisionId: string) {
 export const approveSchema = z.object({
   name: z.string().trim().min(2, "Type your name").max(120),
   role: z.string().trim().min(2, "Type your role").max(120),
-  signature: z
-    .string()
-    .max(700_000, "The signature image is too large")
-    .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, "Draw your signature"),
+  signature: drawnSignatureSchema("Draw your signature"),
   version: z.number().int().min(1),
 });
 
@@ -138,9 +136,7 @@ async function submittedToMe(actor: Actor, revisionId: string, version: number) 
 export async function approveRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "reviews:decide");
   const data = parseOrThrow(approveSchema, input);
-  const png = Buffer.from(data.signature.split(",")[1], "base64");
-  if (png.byteLength < 100 || png.subarray(0, 8).toString("hex") !== "89504e470d0a1a0a")
-    throw new AppError("validation", "Some fields need attention", [{ path: "signature", message: "Draw your signature" }]);
+  const png = data.signature;
   const revision = await submittedToMe(actor, revisionId, data.version);
   const db = await getDb();
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });

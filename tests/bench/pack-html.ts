@@ -5,7 +5,7 @@ import { PACK_CAUTION, type PackInput } from "@/assessments/pack/document";
 const esc = (s: unknown) => String(s ?? "").replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
 
 /** Fonts (the same files, as data URLs), the QR code, the signature and a drawn sling per lift: the same content as the PDF. */
-export function packHtml(input: PackInput, fonts: { regular: Uint8Array; bold: Uint8Array }): string {
+export function packHtml(input: PackInput, fonts: { regular: Uint8Array; bold: Uint8Array }, qrPng: Uint8Array): string {
   const font = (bytes: Uint8Array, weight: number) => `@font-face{font-family:Pack;font-weight:${weight};src:url(data:font/ttf;base64,${Buffer.from(bytes).toString("base64")})}`;
   const png = (bytes: Uint8Array) => `data:image/png;base64,${Buffer.from(bytes).toString("base64")}`;
   const sling = (legs: number, angle: number, tension: number) => {
@@ -25,6 +25,6 @@ export function packHtml(input: PackInput, fonts: { regular: Uint8Array; bold: U
     .join("");
   const hazards = input.content.hazards.map((h) => `<tr><td>${esc(h.hazard)}</td><td>${esc(h.whoIsAtRisk)}</td><td>${h.controls.map((c) => esc(c.text)).join("<br>")}</td></tr>`).join("");
   return `<!doctype html><html><head><meta charset="utf-8"><style>${font(fonts.regular, 400)}${font(fonts.bold, 700)}body{font-family:Pack,sans-serif;font-size:10pt;margin:2cm}h2{border-bottom:1px solid #ccc}table{border-collapse:collapse;width:100%}td{border:1px solid #ccc;padding:4px}footer{font-size:7pt;color:#555}</style></head><body>
-<h1>${esc(input.title)}</h1><img src="${png(input.qrPng)}" width="110" height="110" alt="QR"><p>${esc(input.organisation)} · ${esc(input.job.name)} · revision ${input.revision.number}</p>
+<h1>${esc(input.title)}</h1><img src="${png(qrPng)}" width="110" height="110" alt="QR"><p>${esc(input.organisation)} · ${esc(input.job.name)} · revision ${input.revision.number}</p>
 ${tasks}<h2>Hazard register</h2><table>${hazards}</table>${input.signatures.map((g) => `<p><img src="${png(g.png)}" height="60" alt="signature"> ${esc(g.name)}, ${esc(g.role)}</p>`).join("")}<footer>${esc(PACK_CAUTION)}</footer></body></html>`;
 }

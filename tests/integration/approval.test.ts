@@ -14,7 +14,7 @@ import { approveRevision, getPackFile, getReview, returnRevision, startNewRevisi
 import { getRevision, listAssessments, saveRevision } from "@/assessments/revisions/service";
 import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
-import { drawnSignaturePng } from "@/lib/png";
+import { drawnSignaturePng, encodePng } from "@/lib/png";
 import type { Actor } from "@/lib/permissions";
 import { actorFor, demoOrganisation } from "./helpers";
 
@@ -91,6 +91,17 @@ describe("submit and countersign", () => {
     expect((noName as AppError).issues!.map((i) => i.path).sort()).toEqual(["name", "signature"]);
     const notPng = await approveRevision(approver, id, { version: revision.version, name: "Ruth", role: "Contracts manager", signature: "data:image/png;base64,AAAA" }).catch((e: AppError) => e);
     expect((notPng as AppError).issues!.map((i) => i.path)).toEqual(["signature"]);
+    // A real PNG header over damaged data, a blank (fully transparent) drawing, and a header that
+    // claims an enormous image: each refused on the field before anything is written.
+    const good = drawnSignaturePng(3);
+    const damaged = Buffer.concat([good.subarray(0, 40), Buffer.alloc(200, 7)]);
+    const blank = encodePng(240, 80, new Uint8Array(240 * 80 * 4));
+    const huge = Buffer.from(good);
+    huge.writeUInt32BE(100_000, 16);
+    for (const png of [damaged, blank, huge]) {
+      const refused = await approveRevision(approver, id, { version: revision.version, name: "Ruth", role: "Contracts manager", signature: `data:image/png;base64,${png.toString("base64")}` }).catch((e: AppError) => e);
+      expect((refused as AppError).issues).toEqual([{ path: "signature", message: "Draw your signature" }]);
+    }
     expect((await getReview(approver, id)).revision.status).toBe("submitted");
   });
 

@@ -1,0 +1,38 @@
+/**
+ * A signature drawn on a canvas, sent as a PNG data URL. It is decoded here, so a damaged or blank
+ * image is refused with a field message when it arrives, instead of breaking the pack that will
+ * carry it later. The size in the PNG header is checked before decoding: a small file can declare
+ * an enormous image.
+ */
+import { PNG } from "pngjs";
+import { z } from "zod";
+
+const MAX_SIDE = 4000;
+
+function decodable(bytes: Buffer): boolean {
+  if (bytes.byteLength < 33 || bytes.subarray(0, 8).toString("hex") !== "89504e470d0a1a0a") return false;
+  const width = bytes.readUInt32BE(16);
+  const height = bytes.readUInt32BE(20);
+  if (width === 0 || height === 0 || width > MAX_SIDE || height > MAX_SIDE) return false;
+  try {
+    const { data } = PNG.sync.read(bytes);
+    // Something drawn: at least one pixel that is not fully transparent.
+    for (let i = 3; i < data.length; i += 4) if (data[i] !== 0) return true;
+    return false;
+  } catch {
+    return false;
+  }
+}
+
+/** The schema of a drawn signature; its output is the PNG's bytes. `message` says what to do. */
+export const drawnSignatureSchema = (message: string) =>
+  z
+    .string()
+    .max(700_000, "The signature image is too large")
+    .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, message)
+    .transform((dataUrl, ctx) => {
+      const bytes = Buffer.from(dataUrl.slice(dataUrl.indexOf(",") + 1), "base64");
+      if (decodable(bytes)) return bytes;
+      ctx.addIssue({ code: "custom", message });
+      return z.NEVER;
+    });
