@@ -208,7 +208,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   );
 
   // Signatures
-  w.heading("Signatures");
+  w.heading("Signatures", 2, 100); // with the first signature
   if (input.signatures.length === 0) w.text("Not yet countersigned.", { color: COLOURS.muted });
   for (const sig of input.signatures) {
     const image = embedPng(doc, sig.png);
@@ -222,7 +222,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
 
   // Briefing record
   if (input.briefings.length) {
-    w.heading("Briefing record");
+    w.heading("Briefing record", 2, 60);
     for (const b of input.briefings) {
       w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, { font: fonts.bold });
       for (const a of b.attendees) {

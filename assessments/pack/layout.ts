@@ -121,9 +121,10 @@ export class Writer {
     }
   }
 
-  heading(text: string, level: 1 | 2 | 3 = 2) {
+  /** A heading, kept on one page with at least `keepWith` points of what follows it. */
+  heading(text: string, level: 1 | 2 | 3 = 2, keepWith = 40) {
     const size = level === 1 ? 20 : level === 2 ? 14 : 11.5;
-    this.ensure(size + 40);
+    this.ensure(size + 16 + keepWith);
     this.space(level === 1 ? 4 : 10);
     this.text(text, { size, font: this.fonts.bold, gap: 6 });
     if (level < 3) {
