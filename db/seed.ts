@@ -9,7 +9,8 @@ import { DEMO_COMPONENTS, DEMO_EXAMINATIONS, DEMO_JOBS, DEMO_LIFT_DATE, DEMO_LIF
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
-const DEMO_REVIEW_DATE = "2027-06-30";
+/** Three weeks from seeding: the approved demo assessment shows as due for review within 30 days. */
+const demoReviewDate = () => new Date(Date.now() + 21 * 86_400_000).toISOString().slice(0, 10);
 import { components, jobAssignments, jobs, organisations, users } from "./schema";
 
 export async function seedDemo(db: Db): Promise<{ created: boolean; organisationId: string }> {
@@ -79,7 +80,7 @@ async function seedDemoAssessments(organisationId: string) {
     { role: "Operative", name: "Kieran Lusk", competence: "PTS 77120" },
   ];
   const saved = await saveRevision(adviser, base.revisionId, { version: baseDraft.revision.version, content: baseContent });
-  await submitRevision(adviser, base.revisionId, { version: saved.version, approverId: approver.id, reviewDate: DEMO_REVIEW_DATE }, { notify: false });
+  await submitRevision(adviser, base.revisionId, { version: saved.version, approverId: approver.id, reviewDate: demoReviewDate() }, { notify: false });
   const submitted = await getRevision(adviser, base.revisionId);
   await approveRevision(approver, base.revisionId, { version: submitted.revision.version, name: approver.name, role: "Contracts manager", signature: `data:image/png;base64,${drawnSignaturePng(5).toString("base64")}` }, { notify: false });
 }

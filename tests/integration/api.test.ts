@@ -5,7 +5,7 @@
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import type { Role } from "@/db/schema";
 import type { Actor } from "@/lib/permissions";
-import { actorFor, demoOrganisation, otherOrganisation } from "./helpers";
+import { actorFor, demoOrganisation, otherOrganisation, reviewDateIn } from "./helpers";
 
 const session = vi.hoisted(() => ({ actor: null as Actor | null }));
 vi.mock("@/lib/auth/session", () => ({ getActor: async () => session.actor }));
@@ -198,7 +198,7 @@ describe("assessments, revisions and tasks", () => {
     expect(badSave.status).toBe(422);
     expect(badSave.json.error.issues[0].path).toBe("content.tasks");
 
-    const notReady = await call(actors.adviser, submitRoute.POST as Handler, { body: { version: now.json.version, approverId: actors.approver.id, reviewDate: "2027-06-01" }, params: { id } });
+    const notReady = await call(actors.adviser, submitRoute.POST as Handler, { body: { version: now.json.version, approverId: actors.approver.id, reviewDate: reviewDateIn(180) }, params: { id } });
     expect(notReady.status).toBe(422);
     expect(notReady.json.error.issues.length).toBeGreaterThan(0);
     expect((await call(actors.approver, submitRoute.POST as Handler, { body: {}, params: { id } })).status).toBe(403);

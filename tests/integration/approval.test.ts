@@ -16,7 +16,7 @@ import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
 import { drawnSignaturePng, encodePng } from "@/lib/png";
 import type { Actor } from "@/lib/permissions";
-import { actorFor, demoOrganisation } from "./helpers";
+import { actorFor, demoOrganisation, reviewDateIn } from "./helpers";
 
 let fake: MailFake;
 let adviser: Actor;
@@ -72,7 +72,7 @@ describe("submit and countersign", () => {
   it("submission e-mails the named approver a link and the draft pack", async () => {
     const id = await craneRevision();
     const current = await getRevision(adviser, id);
-    const { mail } = await submitRevision(adviser, id, { version: current.revision.version, approverId: approver.id, reviewDate: "2027-07-01" });
+    const { mail } = await submitRevision(adviser, id, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(210) });
     expect(mail!.status).toBe("sent");
     const message = fake.messages.find((m) => m.to.includes(approver.email))!;
     expect(message.subject).toContain("Review requested");
@@ -151,7 +151,7 @@ describe("submit and countersign", () => {
     expect(await code(startNewRevision(adviser, first))).toBe("conflict");
     const draft = await getRevision(adviser, revisionId);
     expect(draft.revision.number).toBe(2);
-    const { mail } = await submitRevision(adviser, revisionId, { version: draft.revision.version, approverId: approver.id, reviewDate: "2027-08-01" });
+    const { mail } = await submitRevision(adviser, revisionId, { version: draft.revision.version, approverId: approver.id, reviewDate: reviewDateIn(240) });
     expect(mail!.status).toBe("sent");
     const { revision } = await getReview(approver, revisionId);
     await approveRevision(approver, revisionId, { version: revision.version, name: "Ruth Okonjo-Vale", role: "Contracts manager", signature: SIGNATURE });
@@ -171,7 +171,7 @@ describe("return with comments", () => {
     content.people.roles = [{ role: "Person in charge", name: "Dafydd Strand", competence: "PTS 1234" }];
     content.tasks = content.tasks.filter((t) => t.operation !== "lift");
     const saved = await saveRevision(adviser, id, { version: current.revision.version, content });
-    await submitRevision(adviser, id, { version: saved.version, approverId: approver.id, reviewDate: "2027-07-01" });
+    await submitRevision(adviser, id, { version: saved.version, approverId: approver.id, reviewDate: reviewDateIn(210) });
     const { revision } = await getReview(approver, id);
     expect(await code(returnRevision(approver, id, { version: revision.version, comments: { scope: "" } }))).toBe("validation");
     const { mail } = await returnRevision(approver, id, { version: revision.version, comments: { loads: "Show how the top frame is lifted at height.", scope: "" } });

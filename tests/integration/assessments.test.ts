@@ -8,7 +8,8 @@ import { createAssessment, getRevision, listAssessments, saveRevision } from "@/
 import { RULES_VERSION } from "@/assessments/rules/version";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
-import { actorFor, demoOrganisation, otherOrganisation } from "./helpers";
+import { reviewDateProblem, reviewDateRange } from "@/assessments/revisions/schemas";
+import { actorFor, demoOrganisation, otherOrganisation, reviewDateIn } from "./helpers";
 
 let adviser: Actor;
 let approver: Actor;
@@ -86,9 +87,34 @@ describe("submission", () => {
     const list = await listAssessments(adviser);
     const draft = list.find((a) => a.title === "Equipment base by hand at Carrowby")!;
     const current = await getRevision(adviser, draft.revisionId);
-    const err = await submitRevision(adviser, draft.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: "2027-06-01" }).catch((e: AppError) => e);
+    const err = await submitRevision(adviser, draft.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(180) }).catch((e: AppError) => e);
     expect((err as AppError).code).toBe("validation");
     expect((err as AppError).issues!.some((i) => /names? the people|Name the people/i.test(i.message))).toBe(true);
+  });
+
+  it("needs a review date that exists, lies after today and within three years (Heftwise policy)", async () => {
+    const crane = (await listAssessments(adviser)).find((a) => a.title.includes("lorry-loader"))!;
+    const current = await getRevision(adviser, crane.revisionId);
+    const problem = async (reviewDate: string) => {
+      const err = await submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate }).catch((e: AppError) => e);
+      return (err as AppError).issues?.filter((i) => i.path === "reviewDate").map((i) => i.message);
+    };
+    expect(await problem(reviewDateIn(0))).toEqual(["The review date must be after today"]);
+    expect(await problem(reviewDateIn(-30))).toEqual(["The review date must be after today"]);
+    expect(await problem(reviewDateIn(4 * 366))).toEqual(["Choose a review date within 3 years"]);
+    expect(await problem("2030-02-30")).toEqual(["Choose a date that exists"]);
+    expect(await problem("next spring")).toEqual(["Choose a review date"]);
+    expect((await getRevision(adviser, crane.revisionId)).revision.status).toBe("draft");
+  });
+
+  it("review dates: the first accepted is tomorrow, the last three years on, from a leap day the limit rolls on to 1 March", () => {
+    expect(reviewDateRange(new Date("2027-03-10T23:30:00Z"))).toEqual({ earliest: "2027-03-11", latest: "2030-03-10" });
+    expect(reviewDateRange(new Date("2028-02-29T08:00:00Z"))).toEqual({ earliest: "2028-03-01", latest: "2031-03-01" });
+    const now = new Date("2027-03-10T12:00:00Z");
+    expect(reviewDateProblem("2027-03-11", now)).toBeNull();
+    expect(reviewDateProblem("2030-03-10", now)).toBeNull();
+    expect(reviewDateProblem("2030-03-11", now)).toBe("Choose a review date within 3 years");
+    expect(reviewDateProblem("2027-03-10", now)).toBe("The review date must be after today");
   });
 
   it("is refused while a planned lift is incomplete (no appointed person)", async () => {
@@ -98,7 +124,7 @@ describe("submission", () => {
     const content = structuredClone(current.content);
     content.tasks[0].lift!.people = { ...content.tasks[0].lift!.people, appointedPerson: { name: "", competenceRef: "" } };
     const saved = await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
-    const err = await submitRevision(adviser, crane.revisionId, { version: saved.version, approverId: approver.id, reviewDate: "2027-06-01" }).catch((e: AppError) => e);
+    const err = await submitRevision(adviser, crane.revisionId, { version: saved.version, approverId: approver.id, reviewDate: reviewDateIn(180) }).catch((e: AppError) => e);
     expect((err as AppError).issues!.some((i) => i.message.includes("appointed person"))).toBe(true);
     // put it back
     await saveRevision(adviser, crane.revisionId, { version: saved.version, content: current.content });
@@ -108,8 +134,8 @@ describe("submission", () => {
     const list = await listAssessments(adviser);
     const crane = list.find((a) => a.title.includes("lorry-loader"))!;
     const current = await getRevision(adviser, crane.revisionId);
-    expect(await code(submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: foreman.id, reviewDate: "2027-06-01" }))).toBe("validation");
-    await submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: "2027-06-01" });
+    expect(await code(submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: foreman.id, reviewDate: reviewDateIn(180) }))).toBe("validation");
+    await submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(180) });
     const db = await getDb();
     const [row] = await db.select().from(revisions).where(eq(revisions.id, crane.revisionId));
     expect(row.status).toBe("submitted");

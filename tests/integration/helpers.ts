@@ -26,3 +26,6 @@ export async function otherOrganisation(): Promise<{ organisationId: string; adm
     .returning();
   return { organisationId: org.id, adminId: admin.id, admin: { id: admin.id, organisationId: org.id, role: "admin", name: admin.name, email: admin.email } };
 }
+
+/** A review date the given number of days from today (YYYY-MM-DD): review dates must lie ahead. */
+export const reviewDateIn = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);

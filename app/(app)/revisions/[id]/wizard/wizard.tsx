@@ -4,11 +4,12 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
-import { FormMessage, PrimaryButton } from "@/app/_components/form";
+import { FormMessage, PrimaryButton, SelectField, TextField } from "@/app/_components/form";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import { contentSchema, type Content } from "@/assessments/method-statement/content";
 import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
+import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
 import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
 import { STEPS, type StepKey } from "./steps-list";
@@ -180,34 +181,39 @@ function ReviewStep({
   goTo: (key: StepKey) => void;
 }) {
   const router = useRouter();
-  const [approverId, setApproverId] = useState(approvers[0]?.id ?? "");
-  const [reviewDate, setReviewDate] = useState(() => new Date(Date.now() + 180 * 86_400_000).toISOString().slice(0, 10));
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string; items?: string[] } | null>(null);
-  const [busy, setBusy] = useState(false);
+  // Fixed when the step opens: the accepted range, and six months ahead as the suggestion.
+  const [dates] = useState(() => ({ ...reviewDateRange(), suggested: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10) }));
+  const { register, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
+    resolver: zodResolver(submitFormSchema),
+    defaultValues: { approverId: approvers[0]?.id ?? "", reviewDate: dates.suggested },
+  });
 
-  const submit = async () => {
-    setBusy(true);
+  const submit = handleSubmit(async (values) => {
     setOutcome(null);
     if (!(await saveNow())) {
-      setBusy(false);
       setOutcome({ tone: "error", text: "Save the draft first: see the message above." });
       return;
     }
     const res = await fetch(`/api/v1/revisions/${revisionId}/submit`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ version: version.current, approverId, reviewDate }),
+      body: JSON.stringify({ ...values, version: version.current }),
     });
     const body = await res.json();
-    setBusy(false);
     if (res.ok) {
       // The page re-renders read-only; the notice says whether the approver was e-mailed.
       router.replace(`/revisions/${revisionId}?notice=${body.mail?.status === "failed" ? "mail-failed" : "submitted"}`);
       router.refresh();
       return;
     }
-    setOutcome({ tone: "error", text: body.error?.message ?? "Could not submit.", items: body.error?.issues?.map((i: { message: string }) => i.message) });
-  };
+    // Field problems go beside their field; anything else (what the draft still lacks) is listed.
+    const issues: { path: string; message: string }[] = body.error?.issues ?? [];
+    const fieldIssues = issues.filter((i) => i.path === "approverId" || i.path === "reviewDate");
+    for (const issue of fieldIssues) setError(issue.path as keyof SubmitFormInput, { message: issue.message });
+    const rest = issues.filter((i) => !fieldIssues.includes(i)).map((i) => i.message);
+    setOutcome({ tone: "error", text: body.error?.message ?? "Could not submit.", items: rest.length ? rest : undefined });
+  });
 
   return (
     <div className="space-y-4">
@@ -231,26 +237,23 @@ function ReviewStep({
       ) : (
         <FormMessage tone="success">Nothing required is missing.</FormMessage>
       )}
-      <fieldset className="grid max-w-xl gap-3 rounded border border-rule p-3 sm:grid-cols-2">
-        <legend className="px-1 font-bold">Submit for approval</legend>
-        <label className="text-sm font-bold">
-          Approver
-          <select className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5 font-normal" value={approverId} onChange={(e) => setApproverId(e.target.value)}>
+      <form noValidate onSubmit={submit}>
+        <fieldset className="grid max-w-xl gap-3 rounded border border-rule p-3 sm:grid-cols-2">
+          <legend className="px-1 font-bold">Submit for approval</legend>
+          <SelectField label="Approver" error={formState.errors.approverId?.message} {...register("approverId")}>
+            {approvers.length === 0 && <option value="">No approver in your organisation</option>}
             {approvers.map((a) => (
               <option key={a.id} value={a.id}>
                 {a.name}
               </option>
             ))}
-          </select>
-        </label>
-        <label className="text-sm font-bold">
-          Review by
-          <input type="date" className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5 font-normal" value={reviewDate} onChange={(e) => setReviewDate(e.target.value)} />
-        </label>
-        <PrimaryButton type="button" disabled={busy || missing.length > 0 || !approverId} onClick={submit} className="sm:col-span-2">
-          {busy ? "Submitting…" : "Submit for approval"}
-        </PrimaryButton>
-      </fieldset>
+          </SelectField>
+          <TextField label="Review by" type="date" min={dates.earliest} max={dates.latest} error={formState.errors.reviewDate?.message} {...register("reviewDate")} />
+          <PrimaryButton type="submit" disabled={formState.isSubmitting || missing.length > 0 || approvers.length === 0} className="sm:col-span-2">
+            {formState.isSubmitting ? "Submitting…" : "Submit for approval"}
+          </PrimaryButton>
+        </fieldset>
+      </form>
       {outcome && (
         <FormMessage tone={outcome.tone}>
           {outcome.text}
