@@ -68,8 +68,18 @@ export const DEMO_LIFT_TEAM = {
   operator: { name: "Kit Abernethy", competenceRef: "LFT-OP-7783" },
   slingerSignaller: { name: "Priya Holloway", competenceRef: "LFT-SS-1207" },
 };
-export const DEMO_LIFT_DATE = "2027-01-20";
-export const DEMO_EXAMINATIONS = [
-  { item: "Lorry-loader crane HV-LL2", kind: "equipment" as const, lastExamined: "2026-06-15" },
-  { item: "Chain slings, set 14", kind: "accessory" as const, lastExamined: "2026-10-02" },
-];
+/**
+ * The demo lift's date and the thorough examinations of its equipment, counted from the day the demo
+ * is seeded so that they stay plausible whenever it runs: the lift seven weeks ahead, the crane
+ * examined 170 days ago (12-monthly) and the slings 60 days ago (6-monthly), both in date for it.
+ */
+export function demoLiftSchedule(seededOn = new Date()) {
+  const day = (offset: number) => new Date(seededOn.getTime() + offset * 86_400_000).toISOString().slice(0, 10);
+  return {
+    liftDate: day(49),
+    examinations: [
+      { item: "Lorry-loader crane HV-LL2", kind: "equipment" as const, lastExamined: day(-170) },
+      { item: "Chain slings, set 14", kind: "accessory" as const, lastExamined: day(-60) },
+    ],
+  };
+}

@@ -5,7 +5,7 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/passwords";
 import { getDb, type Db } from "./client";
-import { DEMO_COMPONENTS, DEMO_EXAMINATIONS, DEMO_JOBS, DEMO_LIFT_DATE, DEMO_LIFT_TEAM, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
+import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
@@ -50,11 +50,12 @@ async function seedDemoAssessments(organisationId: string) {
   const current = await getRevision(adviser, crane.revisionId);
   const content = structuredClone(current.content);
   const team = DEMO_LIFT_TEAM;
+  const schedule = demoLiftSchedule();
   for (const task of content.tasks) {
     if (!task.lift) continue;
-    task.lift.liftDate = DEMO_LIFT_DATE;
+    task.lift.liftDate = schedule.liftDate;
     task.lift.people = team;
-    task.lift.examinations = DEMO_EXAMINATIONS;
+    task.lift.examinations = schedule.examinations;
   }
   content.people.roles = [
     { role: "Appointed person", name: team.appointedPerson.name, competence: team.appointedPerson.competenceRef },

@@ -6,7 +6,7 @@
 import { TEMPLATES } from "@/assessments/method-statement/templates";
 import { reviewContent, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import type { PackInput } from "@/assessments/pack/document";
-import { DEMO_COMPONENTS, DEMO_EXAMINATIONS, DEMO_LIFT_TEAM } from "@/db/demo-scenario";
+import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_LIFT_TEAM } from "@/db/demo-scenario";
 import { drawnSignaturePng } from "@/lib/png";
 
 export function packInput(taskCount: number, overrides: Partial<PackInput> = {}): PackInput {
@@ -14,10 +14,12 @@ export function packInput(taskCount: number, overrides: Partial<PackInput> = {})
   const byName = (name: string) => register.find((c) => c.name === name)?.id ?? null;
   const base = TEMPLATES.map((t) => t.build(byName));
   const content = { ...base[2], tasks: [] as (typeof base)[number]["tasks"], hazards: base.flatMap((b) => b.hazards) };
+  // A fixed day, so the pack's content is the same on every run.
+  const schedule = demoLiftSchedule(new Date("2026-12-01T00:00:00Z"));
   for (let i = 0; content.tasks.length < taskCount; i++) {
     const task = structuredClone(base[i % 3].tasks[i % base[i % 3].tasks.length]);
     task.id = `t-${content.tasks.length + 1}`;
-    if (task.lift) Object.assign(task.lift, { liftDate: "2027-01-20", people: DEMO_LIFT_TEAM, examinations: DEMO_EXAMINATIONS });
+    if (task.lift) Object.assign(task.lift, { ...schedule, people: DEMO_LIFT_TEAM });
     content.tasks.push(task);
   }
   return {
