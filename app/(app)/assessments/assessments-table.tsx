@@ -42,7 +42,13 @@ const columns: ColumnDef<Row, unknown>[] = [
       const { reviewDate, status } = row.original;
       if (!reviewDate) return "—";
       const due = status === "approved" && Date.parse(reviewDate) <= Date.now() + 30 * 86_400_000;
-      return due ? <span className="rounded bg-band-watch px-1.5 py-0.5 font-bold text-white">{reviewDate} — due</span> : reviewDate;
+      if (!due) return <span className="whitespace-nowrap">{reviewDate}</span>;
+      return (
+        <>
+          <span className="whitespace-nowrap">{reviewDate}</span>{" "}
+          <span className="inline-block whitespace-nowrap rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">Review due</span>
+        </>
+      );
     },
   },
   { id: "updatedAt", header: "Last saved", cell: ({ row }) => row.original.updatedAt.slice(0, 16).replace("T", " ") },
