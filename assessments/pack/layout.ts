@@ -79,8 +79,7 @@ export class Writer {
       // Widths add up (no kerning), so each word is measured once.
       let line = "";
       let lineWidth = 0;
-      for (const word of paragraph.split(/\s+/).flatMap((w) => this.fitWord(w, font, size, width))) {
-        const wordWidth = font.widthOfTextAtSize(word, size);
+      const place = (word: string, wordWidth: number) => {
         if (!line || lineWidth + space + wordWidth <= width) {
           lineWidth = line ? lineWidth + space + wordWidth : wordWidth;
           line = line ? `${line} ${word}` : word;
@@ -89,16 +88,20 @@ export class Writer {
           line = word;
           lineWidth = wordWidth;
         }
+      };
+      for (const word of paragraph.split(/\s+/)) {
+        if (!word) continue;
+        const wordWidth = font.widthOfTextAtSize(word, size);
+        if (wordWidth <= width) place(word, wordWidth);
+        // A word wider than the line (a content hash, a long reference) is cut into pieces that fit.
+        else for (const piece of this.cut(word, font, size, width)) place(piece, font.widthOfTextAtSize(piece, size));
       }
       out.push(line);
     }
     return out;
   }
 
-  /** A word wider than the line (a content hash, a long reference) cut into pieces that fit. */
-  private fitWord(word: string, font: PackFont, size: number, width: number): string[] {
-    if (!word) return [];
-    if (font.widthOfTextAtSize(word, size) <= width) return [word];
+  private cut(word: string, font: PackFont, size: number, width: number): string[] {
     const pieces: string[] = [];
     let piece = "";
     for (const ch of word) {
