@@ -10,27 +10,49 @@ export function FieldError({ id, message, compact = false }: { id?: string; mess
   );
 }
 
+/** Props that tie a control to its label and to its error message. */
+export const controlProps = (id: string, error?: string) => ({
+  id,
+  "aria-invalid": error ? true : undefined,
+  "aria-describedby": error ? `${id}-error` : undefined,
+});
+
+/** A field's frame: label, optional hint, the control, and its error below. */
+export function FieldFrame({ id, label, hint, error, compact = false, children }: { id: string; label: React.ReactNode; hint?: string; error?: string; compact?: boolean; children: React.ReactNode }) {
+  return (
+    <div>
+      <label htmlFor={id} className="block text-sm font-bold">
+        {label}
+      </label>
+      {hint && <p className="text-xs text-muted">{hint}</p>}
+      {children}
+      <FieldError id={`${id}-error`} message={error} compact={compact} />
+    </div>
+  );
+}
+
+/** The look of an input or select; compact for the dense forms of the wizard and lift plan. */
+export const controlClass = (error?: string, compact = false) =>
+  `mt-1 block w-full rounded border bg-white ${compact ? "px-2 py-1.5" : "px-3 py-2 text-base"} ${error ? "border-danger" : "border-rule"}`;
+
+/** A label with its unit after it, in lighter type: "Radius (m)". */
+export function withUnit(label: string, unit?: string) {
+  return (
+    <>
+      {label}
+      {unit && <span className="font-normal text-muted"> ({unit})</span>}
+    </>
+  );
+}
+
 type InputProps = React.InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: string };
 
 export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField({ label, error, hint, id, name, ...rest }, ref) {
   const fieldId = id ?? `field-${name}`;
   return (
-    <div>
-      <label htmlFor={fieldId} className="block text-sm font-bold">
-        {label}
-      </label>
-      {hint && <p className="text-xs text-muted">{hint}</p>}
-      <input
-        ref={ref}
-        id={fieldId}
-        name={name}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${fieldId}-error` : undefined}
-        className={`mt-1 block w-full rounded border bg-white px-3 py-2 text-base ${error ? "border-danger" : "border-rule"}`}
-        {...rest}
-      />
-      <FieldError id={`${fieldId}-error`} message={error} />
-    </div>
+    <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
+      <input ref={ref} name={name} {...controlProps(fieldId, error)} className={controlClass(error)} {...rest} />
+    </FieldFrame>
   );
 });
 
@@ -39,23 +61,11 @@ type SelectProps = React.SelectHTMLAttributes<HTMLSelectElement> & { label: stri
 export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField({ label, error, id, name, children, ...rest }, ref) {
   const fieldId = id ?? `field-${name}`;
   return (
-    <div>
-      <label htmlFor={fieldId} className="block text-sm font-bold">
-        {label}
-      </label>
-      <select
-        ref={ref}
-        id={fieldId}
-        name={name}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${fieldId}-error` : undefined}
-        className={`mt-1 block w-full rounded border bg-white px-3 py-2 text-base ${error ? "border-danger" : "border-rule"}`}
-        {...rest}
-      >
+    <FieldFrame id={fieldId} label={label} error={error}>
+      <select ref={ref} name={name} {...controlProps(fieldId, error)} className={controlClass(error)} {...rest}>
         {children}
       </select>
-      <FieldError id={`${fieldId}-error`} message={error} />
-    </div>
+    </FieldFrame>
   );
 });
 

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { ActionLink, PageHeader } from "@/app/_components/page-header";
 import { listJobs } from "@/assessments/jobs/queries";
 import { listAuthors } from "@/assessments/revisions/service";
 import { requirePermission } from "@/lib/auth/guard";
@@ -13,14 +13,7 @@ export default async function AssessmentsPage() {
   const [jobs, authors] = await Promise.all([listJobs(actor), listAuthors(actor)]);
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-2xl font-bold">Assessments</h1>
-        {can(actor, "assessments:write") && (
-          <Link href="/assessments/new" className="rounded bg-accent px-4 py-2 font-bold text-white">
-            New assessment
-          </Link>
-        )}
-      </div>
+      <PageHeader title="Assessments">{can(actor, "assessments:write") && <ActionLink href="/assessments/new">New assessment</ActionLink>}</PageHeader>
       <AssessmentsTable jobs={jobs.map((j) => ({ id: j.id, name: j.name }))} authors={authors} />
     </div>
   );

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { ActionLink, PageHeader } from "@/app/_components/page-header";
 import { DataTable, EmptyState } from "@/app/_components/table";
 import { listJobs } from "@/assessments/jobs/queries";
-import Link from "next/link";
 import { requirePermission } from "@/lib/auth/guard";
 import { can } from "@/lib/permissions";
 
@@ -12,14 +13,7 @@ export default async function JobsPage() {
   const rows = await listJobs(actor);
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-2xl font-bold">Jobs</h1>
-        {can(actor, "jobs:write") && (
-          <Link href="/jobs/new" className="rounded bg-accent px-4 py-2 font-bold text-white">
-            New job
-          </Link>
-        )}
-      </div>
+      <PageHeader title="Jobs">{can(actor, "jobs:write") && <ActionLink href="/jobs/new">New job</ActionLink>}</PageHeader>
       {rows.length === 0 ? (
         <EmptyState>No jobs yet.</EmptyState>
       ) : (

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { requirePermission } from "@/lib/auth/guard";
+import { ActionLink, PageHeader } from "@/app/_components/page-header";
 import { can } from "@/lib/permissions";
 import { RegisterTable } from "./register-table";
 
@@ -10,19 +10,16 @@ export default async function LoadRegisterPage() {
   const actor = await requirePermission("components:read");
   return (
     <div className="space-y-4">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-2xl font-bold">Load register</h1>
+      <PageHeader title="Load register">
         {can(actor, "components:write") && (
-          <div className="flex gap-2">
-            <Link href="/load-register/import" className="rounded border border-accent bg-white px-4 py-2 font-bold text-accent">
+          <>
+            <ActionLink href="/load-register/import" secondary>
               Import from CSV
-            </Link>
-            <Link href="/load-register/new" className="rounded bg-accent px-4 py-2 font-bold text-white">
-              New component
-            </Link>
-          </div>
+            </ActionLink>
+            <ActionLink href="/load-register/new">New component</ActionLink>
+          </>
         )}
-      </div>
+      </PageHeader>
       <p className="text-sm text-muted">Every component your gangs handle, with its mass and where the mass came from. Estimated masses are flagged wherever they are used.</p>
       <RegisterTable />
     </div>

@@ -6,7 +6,7 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { SlingDiagram } from "@/app/_components/drawings/sling-diagram";
-import { FieldError, FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
+import { controlClass, controlProps, FieldFrame, FormMessage, PrimaryButton, SecondaryButton, withUnit } from "@/app/_components/form";
 import { TaskResult } from "@/app/_components/results/task-result";
 import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
 import { errorAt } from "../../wizard/fields";
@@ -50,36 +50,31 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
 
   const num = (name: string, label: string, unit?: string, optional = false) => {
     const error = errorAt(formState.errors, name);
+    const id = `lp-${name}`;
     return (
-      <div>
-        <label htmlFor={`lp-${name}`} className="block text-sm font-bold">
-          {label}
-          {unit && <span className="font-normal text-muted"> ({unit})</span>}
-        </label>
+      <FieldFrame id={id} label={withUnit(label, unit)} error={error} compact>
         <input
-          id={`lp-${name}`}
           type="number"
           step="any"
           inputMode="decimal"
           disabled={!editable}
-          aria-invalid={error ? true : undefined}
-          className={`mt-1 block w-full rounded border bg-white px-2 py-1.5 ${error ? "border-danger" : "border-rule"}`}
+          {...controlProps(id, error)}
+          className={controlClass(error, true)}
           {...register(name as "riggingMass", { setValueAs: (v: string | number) => (v === "" ? (optional ? undefined : Number.NaN) : Number(v)) })}
         />
-        <FieldError compact message={error} />
-      </div>
+      </FieldFrame>
     );
   };
   // Optional dates are left out when blank rather than sent as "".
-  const text = (name: string, label: string, optional = false) => (
-    <div>
-      <label htmlFor={`lp-${name}`} className="block text-sm font-bold">
-        {label}
-      </label>
-      <input id={`lp-${name}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(name as "groundBearingNotes", optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined)} />
-      <FieldError compact message={errorAt(formState.errors, name)} />
-    </div>
-  );
+  const text = (name: string, label: string, optional = false) => {
+    const error = errorAt(formState.errors, name);
+    const id = `lp-${name}`;
+    return (
+      <FieldFrame id={id} label={label} error={error} compact>
+        <input disabled={!editable} {...controlProps(id, error)} className={controlClass(error, true)} {...register(name as "groundBearingNotes", optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined)} />
+      </FieldFrame>
+    );
+  };
 
   const onSave = handleSubmit(async (values) => {
     setOutcome(null);
