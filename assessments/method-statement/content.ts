@@ -65,7 +65,7 @@ export const taskSchema = z.object({
   description: text(300),
   componentId: z.uuid("Choose a component").nullable(),
   /** How many of the component are handled together (a bundle, a pair). */
-  quantity: z.number().int().min(1).max(50).default(1),
+  quantity: z.number({ error: "Enter how many" }).int("Whole items only").min(1, "At least 1").max(50, "At most 50").default(1),
   operation: z.enum(OPERATIONS),
   niosh: nioshInputsSchema.optional(),
   filter: filterInputsSchema.optional(),

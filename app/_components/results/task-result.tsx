@@ -5,6 +5,11 @@ import type { Reason, Warning } from "@/assessments/rules/types";
 import { SAFETY_CAUTION } from "../safety-caution";
 import { BAND_MEANINGS, BandChip } from "./band";
 
+/** Where the result will be while inputs are missing or out of range: a band is never shown for bad input. */
+export function ResultPending({ children }: { children: React.ReactNode }) {
+  return <p className="rounded-lg border border-dashed border-rule bg-white p-4 text-muted">{children}</p>;
+}
+
 function Factors({ rows }: { rows: [string, string][] }) {
   return (
     <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5 text-sm tabular-nums">

@@ -5,8 +5,8 @@ import { useMemo } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { HandZonesDrawing } from "@/app/_components/drawings/hand-zones";
 import { SecondaryButton } from "@/app/_components/form";
-import { TaskResult } from "@/app/_components/results/task-result";
-import { OPERATION_LABELS, OPERATIONS, type Content, type Operation, type Task } from "@/assessments/method-statement/content";
+import { ResultPending, TaskResult } from "@/app/_components/results/task-result";
+import { OPERATION_LABELS, OPERATIONS, taskSchema, type Content, type Operation, type Task } from "@/assessments/method-statement/content";
 import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
 import { Check, Choice, Num, Text } from "./fields";
@@ -41,7 +41,10 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
   const { setValue, getValues, register: reg } = useFormContext<Content>();
   const task = useWatch<Content, `tasks.${number}`>({ name: `tasks.${index}` }) as Task;
   const component = register.find((c) => c.id === task.componentId);
-  const score = useMemo(() => scoreTask(task, component), [task, component]);
+  // Scored only when the task's inputs pass the same schema the server applies: a half-typed or
+  // out-of-range value (a negative count, say) must never show a band.
+  const valid = useMemo(() => taskSchema.safeParse(task), [task]);
+  const score = useMemo(() => (valid.success ? scoreTask(valid.data, component) : null), [valid, component]);
   const p = `tasks.${index}` as const;
 
   // A new operation gets the inputs it needs; inputs already typed are kept, but a team lift needs
@@ -163,10 +166,10 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
               (your changes here are saved first).
             </p>
           )}
-          {task.operation !== "equipment" && <WhatIfChart task={task} component={component} />}
+          {task.operation !== "equipment" && valid.success && <WhatIfChart task={valid.data} component={component} />}
         </div>
         <div className="space-y-3">
-          <TaskResult score={score} />
+          {score ? <TaskResult score={score} /> : <ResultPending>Complete the highlighted fields to see the result.</ResultPending>}
           {(task.operation === "lift" || task.filter) && task.operation !== "push" && task.operation !== "equipment" && (
             <HandZonesDrawing highlight={task.filter?.zone} />
           )}

@@ -7,7 +7,7 @@ import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form
 import type { z } from "zod";
 import { SlingDiagram } from "@/app/_components/drawings/sling-diagram";
 import { controlClass, controlProps, FieldFrame, FormMessage, PrimaryButton, SecondaryButton, withUnit } from "@/app/_components/form";
-import { TaskResult } from "@/app/_components/results/task-result";
+import { ResultPending, TaskResult } from "@/app/_components/results/task-result";
 import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
 import { errorAt } from "../../wizard/fields";
 import { scoreTask } from "@/assessments/method-statement/score-task";
@@ -206,7 +206,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
             <TaskResult score={score} />
           </>
         ) : (
-          <p className="rounded-lg border border-dashed border-rule bg-white p-4 text-muted">{load === null ? "Choose the component first." : "Complete the highlighted fields to see the result."}</p>
+          <ResultPending>{load === null ? "Choose the component first." : "Complete the highlighted fields to see the result."}</ResultPending>
         )}
       </div>
     </form>
