@@ -71,6 +71,11 @@ test("an adviser builds an assessment through the wizard, watches the live score
   // The score follows the inputs as they are typed.
   await t1.getByLabel("How many").fill("6");
   await expect(band1).not.toHaveAttribute("data-band", "clear");
+  // A count that makes no sense gets a message and no band at all, not a reassuring one.
+  await t1.getByLabel("How many").fill("-5");
+  await expect(t1.getByText("At least 1")).toBeVisible();
+  await expect(t1.getByText("Complete the highlighted fields to see the result.")).toBeVisible();
+  await expect(t1.locator("[data-band]")).toHaveCount(0);
   await t1.getByLabel("How many").fill("1");
   await expect(band1).toHaveAttribute("data-band", "clear");
 
