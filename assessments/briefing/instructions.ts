@@ -2,9 +2,9 @@
  * Plain words for the gang: each load's handling instruction derived from the assessment and its
  * stored result, for the briefing screens and the briefing sheet. Pure.
  */
-import { adviceForClear } from "../method-statement/advice";
 import type { Content, Task } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
+import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
 import type { Band } from "../rules/types";
 
@@ -58,8 +58,8 @@ export function instructionFor(task: Task, score: TaskScore, componentName: stri
     lines.push(`Over ${ONE_PERSON_KG} kg: use the lifting aid or a second person.`);
   if (score.estimatedMass) lines.push("The weight is an estimate: treat it as heavier until it is weighed.");
   if (score.band && score.band !== "clear") {
-    const advice = adviceForClear(score)[0];
-    if (advice) lines.push(`Not within guidance as planned: ${advice}`);
+    const first = whatIfLines(score.whatIf)[0];
+    if (first) lines.push(`Not within guidance as planned. ${first}`);
   }
   if (score.band === "stop") lines.push("STOP: do not do this task as planned. Tell the person in charge.");
   const people = task.lift?.people;

@@ -17,7 +17,8 @@ export interface Examination {
 
 export interface ExaminationResult extends Examination {
   dueDate: string;
-  status: "in-date" | "due-soon" | "expired";
+  /** "after-lift": examined after the planned lift, so it cannot cover it. */
+  status: "in-date" | "due-soon" | "expired" | "after-lift";
 }
 
 export const INTERVAL_MONTHS: Record<ExaminedKind, number> = { equipment: 12, accessory: 6, "lifts-people": 6 };
@@ -38,7 +39,8 @@ export function addMonths(iso: string, months: number): string {
 export function checkExamination(exam: Examination, liftDate: string): ExaminationResult {
   const dueDate = exam.schemeDueDate ?? addMonths(exam.lastExamined, INTERVAL_MONTHS[exam.kind]);
   const daysLeft = (parse(dueDate) - parse(liftDate)) / DAY_MS;
-  // Due on the lift date itself is still in date that day; any later is expired.
-  const status = daysLeft < 0 ? "expired" : daysLeft <= DUE_SOON_DAYS ? "due-soon" : "in-date";
+  // An examination after the lift says nothing of the equipment on the day; the one before it is
+  // what covers the lift. Due on the lift date itself is still in date that day; any later is expired.
+  const status = parse(exam.lastExamined) > parse(liftDate) ? "after-lift" : daysLeft < 0 ? "expired" : daysLeft <= DUE_SOON_DAYS ? "due-soon" : "in-date";
   return { ...exam, dueDate, status };
 }

@@ -8,12 +8,13 @@ import { fmt } from "../rules/format";
 import type { Band, Reason, ResultBase, Warning } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
 import { checkExamination, type Examination, type ExaminationResult } from "./examinations";
-import { legsSharing, legTension, modeFactor, type Hitch, CHOKE_FACTOR } from "./sling";
+import { CHOKE_FACTOR, HITCH_LABELS, legsSharing, legTension, modeFactor, SINGLE_SLING_HITCHES, type Hitch } from "./sling";
 
 export const LIFT_SOURCES = {
   loler: "LOLER 1998 reg. 8 (planning) and reg. 9 (thorough examination; intervals from memory)",
   bs7121: "BS 7121-1:2016, Code of practice for safe use of cranes",
   sling: "EN 818-4 uniform-load method, mode factors as published in suppliers' tables",
+  hitches: "Choked, basket and endless mode factors as tabled in EN 1492-1 and EN 818-4 suppliers' tables (from memory)",
   policy: "Heftwise policy (see DEVELOPERS.md, Lift plan policy); no published source",
 } as const;
 
@@ -51,7 +52,8 @@ export interface LiftRequest {
   ratedCapacity: number;
   radiusM?: number;
   maxRadiusM?: number;
-  sling: { legs: number; angleFromVerticalDeg: number; legWll: number; hitch?: Hitch };
+  /** `markedWll`: the working load limit marked on the assembly for this hitch and angle (kg). */
+  sling: { legs: number; angleFromVerticalDeg: number; legWll: number; hitch?: Hitch; markedWll?: number };
   factors?: Partial<Record<ComplexFactor, boolean>>;
   examinations?: Examination[];
   /** ISO date of the planned lift; needed to check examinations. */
@@ -72,7 +74,9 @@ export interface LiftResult extends ResultBase {
   legTension: number;
   legsSharing: number;
   modeFactor: number;
-  /** Rated capacity of the sling assembly (kg). */
+  /** Leg WLL × mode factor (kg). */
+  computedSlingWll: number;
+  /** Rated capacity of the sling assembly: the lower of the computed and the marked limit (kg). */
   slingWll: number;
   slingOk: boolean;
   category: "basic" | "standard" | "complex";
@@ -97,9 +101,13 @@ export function scoreLift(req: LiftRequest): LiftResult {
   const slingLoad = req.load + req.riggingMass;
   const utilisation = hookLoad / req.ratedCapacity;
   const factor = modeFactor(req.sling.legs, req.sling.angleFromVerticalDeg, hitch);
-  const slingWll = req.sling.legWll * factor;
-  const tension = legTension(slingLoad, req.sling.legs, req.sling.angleFromVerticalDeg);
-  const legLimit = req.sling.legWll * (hitch === "choked" ? CHOKE_FACTOR : 1);
+  const computedSlingWll = req.sling.legWll * factor;
+  const marked = req.sling.markedWll;
+  const slingWll = marked !== undefined ? Math.min(computedSlingWll, marked) : computedSlingWll;
+  const tension = legTension(slingLoad, req.sling.legs, req.sling.angleFromVerticalDeg, hitch);
+  // Each leg of a multi-leg assembly is checked too; a single sling (basket, endless) by its assembly limit.
+  const singleSling = SINGLE_SLING_HITCHES.includes(hitch);
+  const legLimit = singleSling ? Infinity : req.sling.legWll * (hitch === "choked" ? CHOKE_FACTOR : 1);
   const slingOk = slingLoad <= slingWll && tension <= legLimit;
 
   const reasons: Reason[] = [];
@@ -124,10 +132,13 @@ export function scoreLift(req: LiftRequest): LiftResult {
   }
 
   // Sling
+  const parts = legsSharing(req.sling.legs, hitch);
   reasons.push({
-    text: `${req.sling.legs}-leg sling${hitch === "choked" ? ", choked" : ""}, ${fmt(req.sling.angleFromVerticalDeg, 1)}° from vertical: ${legsSharing(req.sling.legs)} leg(s) share ${fmt(slingLoad)} kg, ${fmt(tension)} kg per leg; the assembly is rated ${fmt(slingWll)} kg (mode factor ${fmt(factor)} × ${fmt(req.sling.legWll)} kg per leg).`,
-    source: LIFT_SOURCES.sling,
+    text: `${singleSling ? "One sling" : `${req.sling.legs}-leg sling`}, ${HITCH_LABELS[hitch]}, ${fmt(req.sling.angleFromVerticalDeg, 1)}° from vertical: ${parts} ${singleSling ? "parts" : "leg(s)"} share ${fmt(slingLoad)} kg, ${fmt(tension)} kg each; mode factor ${fmt(factor)} × ${fmt(req.sling.legWll)} kg = ${fmt(computedSlingWll)} kg${marked !== undefined ? `, marked ${fmt(marked)} kg: the assembly is rated ${fmt(slingWll)} kg (the lower governs)` : ""}.`,
+    source: hitch === "straight" ? LIFT_SOURCES.sling : `${LIFT_SOURCES.sling}; ${LIFT_SOURCES.hitches}`,
   });
+  if (marked === undefined)
+    warnings.push({ field: "sling.markedWll", message: "Enter the working load limit marked on the sling assembly: published tables round down, so the marked limit can be lower than the computed one." });
   if (!slingOk) {
     bands.push("stop");
     warnings.push({
@@ -142,13 +153,20 @@ export function scoreLift(req: LiftRequest): LiftResult {
     if (e.status === "expired") {
       bands.push("stop");
       warnings.push({ field: `examinations.${i}.lastExamined`, message: `${e.item}: thorough examination due ${e.dueDate}, before the lift on ${req.liftDate}. It must be examined before use.` });
+    } else if (e.status === "after-lift") {
+      bands.push("stop");
+      warnings.push({
+        field: `examinations.${i}.lastExamined`,
+        message: `${e.item}: examined ${e.lastExamined}, after the lift on ${req.liftDate}, so it cannot cover the lift. Enter the examination in force on the lift date.`,
+        cannotJudge: true,
+      });
     } else if (e.status === "due-soon") {
       bands.push("watch");
       warnings.push({ field: `examinations.${i}.lastExamined`, message: `${e.item}: thorough examination due ${e.dueDate}, soon after the lift. Check the report is on site.` });
     }
   });
   if (examinations.length)
-    reasons.push({ text: `Thorough examinations checked against the lift date ${req.liftDate}: ${examinations.filter((e) => e.status !== "expired").length} of ${examinations.length} in date.`, source: LIFT_SOURCES.loler });
+    reasons.push({ text: `Thorough examinations checked against the lift date ${req.liftDate}: ${examinations.filter((e) => e.status === "in-date" || e.status === "due-soon").length} of ${examinations.length} in date.`, source: LIFT_SOURCES.loler });
 
   // Wind
   if (req.wind) {
@@ -190,6 +208,7 @@ export function scoreLift(req: LiftRequest): LiftResult {
   if (!req.liftDate && req.examinations?.length)
     warnings.push({ field: "liftDate", message: "No lift date: thorough examinations cannot be checked." });
   if (!req.examinations?.length) missing.push("thorough examination records");
+  if (marked === undefined) missing.push("working load limit marked on the sling assembly");
 
   return {
     method: "lift",
@@ -198,8 +217,9 @@ export function scoreLift(req: LiftRequest): LiftResult {
     slingLoad,
     utilisation,
     legTension: tension,
-    legsSharing: legsSharing(req.sling.legs),
+    legsSharing: parts,
     modeFactor: factor,
+    computedSlingWll,
     slingWll,
     slingOk,
     category,

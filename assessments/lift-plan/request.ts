@@ -1,7 +1,7 @@
 /** The one zod schema for a lift plan, shared by the scoring CLI and API, the lift-plan form and the server. */
 import { z } from "zod";
 import { COMPLEX_FACTORS, type ComplexFactor } from "./lift";
-import { MAX_SLING_ANGLE_DEG } from "./sling";
+import { HITCHES, MAX_SLING_ANGLE_DEG, SINGLE_SLING_HITCHES } from "./sling";
 
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
 const mass = () => finite().refine((x) => x >= 0, "must not be negative");
@@ -17,12 +17,14 @@ export const personSchema = z.strictObject({
   competenceRef: z.string().trim().max(120),
 });
 
-export const examinationSchema = z.strictObject({
-  item: z.string().trim().min(1, "name the item").max(160),
-  kind: z.enum(["equipment", "accessory", "lifts-people"]),
-  lastExamined: isoDate(),
-  schemeDueDate: isoDate().optional(),
-});
+export const examinationSchema = z
+  .strictObject({
+    item: z.string().trim().min(1, "name the item").max(160),
+    kind: z.enum(["equipment", "accessory", "lifts-people"]),
+    lastExamined: isoDate(),
+    schemeDueDate: isoDate().optional(),
+  })
+  .refine((e) => !e.schemeDueDate || e.schemeDueDate > e.lastExamined, { path: ["schemeDueDate"], message: "must be after the last examination" });
 
 export const liftRequestSchema = z
   .strictObject({
@@ -33,12 +35,15 @@ export const liftRequestSchema = z
     ratedCapacity: positive(),
     radiusM: mass().optional(),
     maxRadiusM: positive().optional(),
-    sling: z.strictObject({
-      legs: z.number().int("must be a whole number").min(1, "a sling has 1 to 4 legs").max(4, "a sling has 1 to 4 legs"),
-      angleFromVerticalDeg: mass().refine((a) => a <= MAX_SLING_ANGLE_DEG, `must be at most ${MAX_SLING_ANGLE_DEG}° from vertical: wider angles are not permitted`),
-      legWll: positive(),
-      hitch: z.enum(["straight", "choked"]).optional(),
-    }),
+    sling: z
+      .strictObject({
+        legs: z.number().int("must be a whole number").min(1, "a sling has 1 to 4 legs").max(4, "a sling has 1 to 4 legs"),
+        angleFromVerticalDeg: mass().refine((a) => a <= MAX_SLING_ANGLE_DEG, `must be at most ${MAX_SLING_ANGLE_DEG}° from vertical: wider angles are not permitted`),
+        legWll: positive(),
+        hitch: z.enum(HITCHES).optional(),
+        markedWll: positive().optional(),
+      })
+      .refine((s) => !s.hitch || !SINGLE_SLING_HITCHES.includes(s.hitch) || s.legs === 1, { path: ["legs"], message: "a basket or endless sling is one sling: 1 leg" }),
     factors: z.partialRecord(z.enum(Object.keys(COMPLEX_FACTORS) as [ComplexFactor, ...ComplexFactor[]]), z.boolean()).optional(),
     examinations: z.array(examinationSchema).max(20).optional(),
     liftDate: isoDate().optional(),

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { liftRequestSchema } from "../lift-plan/request";
+import { SURFACES } from "../rules/push";
 import { couplingSchema, reachSchema, sexSchema, zoneSchema } from "../rules/request";
 
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
@@ -26,10 +27,13 @@ export const OPERATION_LABELS: Record<Operation, string> = {
 
 /** Hand positions and rhythm for the NIOSH equation (metric: cm, lifts/min, hours). */
 export const nioshInputsSchema = z.object({
-  origin: z.object({ h: num(0, 200, "H in cm"), v: num(0, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
-  destination: z.object({ h: num(0, 200, "H in cm"), v: num(0, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
+  // V below 0 is below the standing surface (into an excavation): accepted, never Clear.
+  origin: z.object({ h: num(0, 200, "H in cm"), v: num(-300, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
+  destination: z.object({ h: num(0, 200, "H in cm"), v: num(-300, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
   frequency: num(0, 60, "lifts per minute"),
   durationHours: num(0.01, 24, "hours"),
+  /** Rest or light work after the lifting (h): decides the lifting equation's duration category. */
+  recoveryHours: num(0, 24, "hours").optional(),
   coupling: couplingSchema,
   controlAtDestination: z.boolean(),
 });
@@ -55,6 +59,9 @@ export const pushInputsSchema = z.object({
   teamSize: z.number({ error: "Enter the team size" }).int("Whole people only").min(1, "At least 1").max(20, "At most 20"),
   distanceM: num(0, 10_000, "metres").optional(),
   measuredForceN: num(0.1, 100_000, "newtons").optional(),
+  surface: z.enum(SURFACES).optional(),
+  braked: z.boolean().optional(),
+  brakeOperator: text(120).optional(),
 });
 
 /** A lift plan is the lift request without its method tag and load (the component's mass). */

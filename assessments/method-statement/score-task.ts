@@ -3,14 +3,15 @@
  * for what is missing. Pure: the wizard runs it in the browser as the user types; the server runs it
  * again on save and stores the result as a snapshot with the rules version.
  */
-import { scoreLift, type LiftResult } from "../lift-plan/lift";
+import { scoreLift, type LiftRequest, type LiftResult } from "../lift-plan/lift";
 import { worstBand } from "../rules/bands";
-import { scoreFilter, type FilterResult } from "../rules/filter";
-import { scoreNiosh, type NioshResult } from "../rules/niosh";
-import { scorePush, type PushResult } from "../rules/push";
+import { scoreFilter, type FilterRequest, type FilterResult } from "../rules/filter";
+import { scoreNiosh, type NioshRequest, type NioshResult } from "../rules/niosh";
+import { scorePush, type PushRequest, type PushResult } from "../rules/push";
 import type { Band } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
 import type { Content, Task } from "./content";
+import { solveForClear, type WhatIf } from "./what-if";
 
 export interface RegisterEntry {
   id: string;
@@ -20,6 +21,14 @@ export interface RegisterEntry {
   massSource: "weighed" | "datasheet" | "estimated";
 }
 
+// A type, not an interface, so that Object.values() sees its members.
+export type TaskResults = {
+  niosh?: NioshResult;
+  filter?: FilterResult;
+  push?: PushResult;
+  lift?: LiftResult;
+};
+
 export interface TaskScore {
   taskId: string;
   /** Null while the task lacks what its methods need. */
@@ -27,47 +36,146 @@ export interface TaskScore {
   load: number | null;
   estimatedMass: boolean;
   incomplete: string[];
-  results: { niosh?: NioshResult; filter?: FilterResult; push?: PushResult; lift?: LiftResult };
+  results: TaskResults;
+  /** Changes that would bring the task to Clear, each re-scored by the same engine. Absent in
+   * snapshots scored before the solver existed. */
+  whatIf?: WhatIf;
   rulesVersion: string;
 }
 
-export function scoreTask(task: Task, component: RegisterEntry | undefined): TaskScore {
+export interface MethodRequests {
+  niosh?: NioshRequest;
+  filter?: FilterRequest;
+  push?: PushRequest;
+  lift?: LiftRequest;
+}
+
+/**
+ * The request each method gets for this task, built field by field so that every input a method
+ * uses reaches it from where the task records it — and nothing left over from another operation
+ * (a carry distance on a team lift, say). The wizard, the server, the API and the pack all score
+ * through this one mapping.
+ */
+export function methodRequests(task: Task, load: number | null): MethodRequests {
+  const out: MethodRequests = {};
+  if (load === null && task.operation !== "push") return out;
+  const f = task.filter;
+  switch (task.operation) {
+    case "lift": {
+      const n = task.niosh;
+      if (n)
+        out.niosh = {
+          method: "niosh",
+          units: "metric",
+          load: load!,
+          origin: n.origin,
+          destination: n.destination,
+          frequency: n.frequency,
+          durationHours: n.durationHours,
+          recoveryHours: n.recoveryHours,
+          coupling: n.coupling,
+          controlAtDestination: n.controlAtDestination,
+        };
+      // One person: the filter takes the lift's own frequency and its largest twist.
+      if (f)
+        out.filter = {
+          method: "filter",
+          sex: f.sex,
+          zone: f.zone,
+          reach: f.reach,
+          load: load!,
+          frequency: n ? n.frequency : f.frequency,
+          twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg,
+          teamSize: 1,
+        };
+      break;
+    }
+    case "team-lift":
+      if (f) out.filter = { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load: load!, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize };
+      break;
+    case "carry":
+      if (f)
+        out.filter = {
+          method: "filter",
+          sex: f.sex,
+          zone: f.zone,
+          reach: f.reach,
+          load: load!,
+          frequency: f.frequency,
+          twistDeg: f.twistDeg,
+          teamSize: f.teamSize,
+          carryDistanceM: f.carryDistanceM,
+          durationHours: f.durationHours,
+        };
+      break;
+    case "push": {
+      const p = task.push;
+      if (p)
+        out.push = {
+          method: "push",
+          mass: p.mass,
+          gradient: p.gradient,
+          rollingCoefficient: p.rollingCoefficient,
+          sex: p.sex,
+          teamSize: p.teamSize,
+          distanceM: p.distanceM,
+          measuredForceN: p.measuredForceN,
+          surface: p.surface,
+          braked: p.braked,
+          brakeOperator: p.brakeOperator,
+        };
+      break;
+    }
+    case "equipment":
+      if (task.lift) out.lift = { method: "lift", load: load!, ...task.lift };
+      break;
+  }
+  return out;
+}
+
+/** Scores one task with every method its operation calls for; no what-if (see `scoreTask`). */
+export function rateTask(task: Task, component: RegisterEntry | undefined): TaskScore {
   const incomplete: string[] = [];
-  const results: TaskScore["results"] = {};
+  const results: TaskResults = {};
   if (!component) incomplete.push("choose a component from the load register");
   const load = component ? component.massKg * (task.quantity ?? 1) : null;
-
-  const need = (what: keyof TaskScore["results"], label: string) => {
-    if (!task[what]) incomplete.push(label);
-    return !!task[what] && load !== null;
-  };
+  const requests = methodRequests(task, load);
 
   switch (task.operation) {
     case "lift":
-      if (need("niosh", "enter the hand positions for the lifting equation")) results.niosh = scoreNiosh({ method: "niosh", units: "metric", load: load!, ...task.niosh! });
-      if (task.filter && load !== null) results.filter = scoreFilter({ method: "filter", load, ...task.filter, teamSize: 1 });
+      if (!task.niosh) incomplete.push("enter the hand positions for the lifting equation");
       break;
     case "team-lift":
-      if (need("filter", "enter the team and hand-height zone")) results.filter = scoreFilter({ method: "filter", load: load!, ...task.filter! });
-      if (task.filter && task.filter.teamSize < 2) incomplete.push("a team lift needs at least 2 people");
+      if (!task.filter) incomplete.push("enter the team and hand-height zone");
+      else if (task.filter.teamSize < 2) incomplete.push("a team lift needs at least 2 people");
       break;
     case "carry":
-      if (need("filter", "enter the carry distance and hand-height zone")) results.filter = scoreFilter({ method: "filter", load: load!, ...task.filter! });
-      if (task.filter && !task.filter.carryDistanceM) incomplete.push("enter the carry distance");
+      if (!task.filter) incomplete.push("enter the carry distance and hand-height zone");
+      else if (!task.filter.carryDistanceM) incomplete.push("enter the carry distance");
       break;
     case "push":
       if (!task.push) incomplete.push("enter the trolley mass and gradient");
-      else results.push = scorePush({ method: "push", ...task.push });
       break;
     case "equipment":
-      if (need("lift", "complete the lift plan")) results.lift = scoreLift({ method: "lift", load: load!, ...task.lift! });
-      if (results.lift?.missing.length) incomplete.push(`lift plan: add the ${results.lift.missing.join(", ")}`);
+      if (!task.lift) incomplete.push("complete the lift plan");
       break;
   }
+  if (requests.niosh) results.niosh = scoreNiosh(requests.niosh);
+  if (requests.filter) results.filter = scoreFilter(requests.filter);
+  if (requests.push) {
+    results.push = scorePush(requests.push);
+    if (results.push.runsAway && requests.push.braked && !requests.push.brakeOperator?.trim()) incomplete.push("name who works the trolley's brake");
+  }
+  if (requests.lift) {
+    results.lift = scoreLift(requests.lift);
+    if (results.lift.missing.length) incomplete.push(`lift plan: add the ${results.lift.missing.join(", ")}`);
+  }
 
-  const bands = Object.values(results).map((r) => r.band);
+  const bands: Band[] = [];
+  for (const r of [results.niosh, results.filter, results.push, results.lift]) if (r) bands.push(r.band);
   return {
     taskId: task.id,
+    // Never better than the worst of the methods that apply.
     band: bands.length ? worstBand(bands) : null,
     load,
     estimatedMass: component?.massSource === "estimated",
@@ -75,6 +183,14 @@ export function scoreTask(task: Task, component: RegisterEntry | undefined): Tas
     results,
     rulesVersion: RULES_VERSION,
   };
+}
+
+/** Scores one task and works out what would bring it to Clear. Pure: the wizard runs it as the
+ * user types; the server runs it again on save and stores it as a snapshot with the rules version. */
+export function scoreTask(task: Task, component: RegisterEntry | undefined): TaskScore {
+  const score = rateTask(task, component);
+  score.whatIf = solveForClear(task, component, score);
+  return score;
 }
 
 export interface ReviewItem {

@@ -56,6 +56,8 @@ const closeLift = (v1: number, v2: number, frequency: number): NonNullable<Task[
   destination: { h: 35, v: v2, a: 30 },
   frequency,
   durationHours: 1,
+  // Lifts between spells of screw-driving and fitting: the lifting equation's short category.
+  recoveryHours: 2,
   coupling: "fair",
   controlAtDestination: true,
 });
@@ -125,7 +127,7 @@ export const TEMPLATES: Template[] = [
           componentId: c("Concrete cable trough, 1 m"),
           quantity: 6,
           operation: "push",
-          push: { mass: 6 * 42 + 60, gradient: 0.02, sex: "male", teamSize: 2, distanceM: 150 },
+          push: { mass: 6 * 42 + 60, gradient: 0.02, sex: "male", teamSize: 2, distanceM: 150, surface: "rail", braked: true, brakeOperator: "" },
         },
         {
           id: id("t", 2),
@@ -189,7 +191,7 @@ export const TEMPLATES: Template[] = [
             ratedCapacity: 1200,
             radiusM: 6,
             maxRadiusM: 9,
-            sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" },
+            sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight", markedWll: 2100 },
             factors: { nearOpenLine: true },
             examinations: [],
             wind: { inServiceLimitMs: 12, forecastMs: 5, largeSailArea: true },
@@ -210,7 +212,7 @@ export const TEMPLATES: Template[] = [
             ratedCapacity: 1000,
             radiusM: 5,
             maxRadiusM: 9,
-            sling: { legs: 3, angleFromVerticalDeg: 35, legWll: 1120, hitch: "straight" },
+            sling: { legs: 3, angleFromVerticalDeg: 35, legWll: 1120, hitch: "straight", markedWll: 2350 },
             factors: {},
             examinations: [],
             wind: { inServiceLimitMs: 12, forecastMs: 5 },

@@ -8,8 +8,8 @@ import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
 import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
 import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
-import { adviceForClear } from "../method-statement/advice";
 import type { TaskScore } from "../method-statement/score-task";
+import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
 import { worstBand } from "../rules/bands";
 import type { Band, Reason, Warning } from "../rules/types";
@@ -164,9 +164,10 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
       reasons(w, push.reasons, push.warnings);
     }
     if (lift) liftSection(w, lift, input.content.tasks[i].lift?.exclusionZoneM, input.content.tasks[i].lift?.groundBearingNotes);
-    const advice = adviceForClear(s);
+    // From the stored snapshot: the changes the engine confirmed when the revision was scored.
+    const advice = whatIfLines(s.whatIf);
     if (advice.length) {
-      w.text("What would bring it to clear:", { size: 9.5, font: fonts.bold });
+      w.text("What would bring it to clear (each change re-scored by the same rules):", { size: 9.5, font: fonts.bold });
       for (const a of advice) w.text(`- ${a}`, { size: 9.5, indent: 8 });
     }
     if (s.incomplete.length) w.text(`Incomplete: ${s.incomplete.join("; ")}.`, { size: 9.5, color: COLOURS.band.act });

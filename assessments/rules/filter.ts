@@ -13,6 +13,7 @@ import type { Band, Reason, ResultBase, Sex, Warning } from "./types";
 import { RULES_VERSION } from "./version";
 
 export const ZONES = [
+  "below-standing-level",
   "floor-to-lower-leg",
   "lower-leg-to-knuckle",
   "knuckle-to-elbow",
@@ -23,6 +24,7 @@ export type Zone = (typeof ZONES)[number];
 export type Reach = "close" | "extended";
 
 export const ZONE_LABELS: Record<Zone, string> = {
+  "below-standing-level": "below the standing surface (into an excavation, chamber or trough)",
   "floor-to-lower-leg": "floor to mid lower leg",
   "lower-leg-to-knuckle": "mid lower leg to knuckle",
   "knuckle-to-elbow": "knuckle to elbow",
@@ -30,8 +32,12 @@ export const ZONE_LABELS: Record<Zone, string> = {
   "shoulder-to-reach": "shoulder to full reach",
 };
 
+/** The zones the published table covers. */
+export type TableZone = Exclude<Zone, "below-standing-level">;
+export const TABLE_ZONES = ZONES.filter((z): z is TableZone => z !== "below-standing-level");
+
 /** Guideline weights in kg: [close, extended]. */
-const GUIDELINE_KG: Record<Sex, Record<Zone, readonly [number, number]>> = {
+const GUIDELINE_KG: Record<Sex, Record<TableZone, readonly [number, number]>> = {
   male: {
     "shoulder-to-reach": [10, 5],
     "elbow-to-shoulder": [20, 10],
@@ -48,9 +54,17 @@ const GUIDELINE_KG: Record<Sex, Record<Zone, readonly [number, number]>> = {
   },
 };
 
+/**
+ * The table figure for a zone. Nothing is published below the lowest zone ("floor to mid lower
+ * leg"), so hands below the standing surface are compared with that zone's figure (Heftwise policy):
+ * it can only overstate what may be handled there, and the band is never better than act.
+ */
 export function guidelineWeight(sex: Sex, zone: Zone, reach: Reach): number {
-  return GUIDELINE_KG[sex][zone][reach === "close" ? 0 : 1];
+  return GUIDELINE_KG[sex][zone === "below-standing-level" ? "floor-to-lower-leg" : zone][reach === "close" ? 0 : 1];
 }
+
+/** Heftwise policy: the band of a handling below the standing surface is at least this. */
+export const BELOW_STANDING_LEVEL_FLOOR: Band = "act";
 
 /**
  * Frequency reduction as a fraction. Published: none up to about 30 operations an hour
@@ -121,7 +135,7 @@ export interface FilterResult extends ResultBase {
   index: number | null;
   /** Each team member's share of the load (kg). */
   perPersonLoad: number;
-  /** Mass moved per shift when carried (kg), else null. */
+  /** Mass each person moves in the hours carried (kg), when carried; else null. */
   cumulativeMassKg: number | null;
 }
 
@@ -139,10 +153,23 @@ export function scoreFilter(req: FilterRequest): FilterResult {
   const floors: Band[] = [bandForIndex(index, GUIDELINE_THRESHOLDS)];
   const who = req.sex === "male" ? "men" : "women";
 
-  reasons.push({
-    text: `Guideline weight for ${who}, hands ${ZONE_LABELS[req.zone]}, load ${req.reach === "close" ? "close to the body" : "at arm's length"}: ${fmt(base)} kg.`,
-    source: req.sex === "male" ? SOURCES.hseL23 : `${SOURCES.hseL23} (women's figures from memory)`,
-  });
+  if (req.zone === "below-standing-level") {
+    floors.push(BELOW_STANDING_LEVEL_FLOOR);
+    warnings.push({
+      field: "zone",
+      message:
+        "Hands below the standing surface: the guideline figures end at the lowest zone (floor to mid lower leg), so they cannot judge this. Receive the load from a second person standing in the excavation, lower from kneeling onto a mat, use a tripod hoist or davit, or pass it down in smaller parts.",
+      cannotJudge: true,
+    });
+    reasons.push({
+      text: `Below the standing surface nothing is published: compared with the lowest zone's figure for ${who} (${fmt(base)} kg), which overstates what can be handled there; never better than Act.`,
+      source: `${SOURCES.hseL23} (lowest zone); below it: ${SOURCES.heftwisePolicy}`,
+    });
+  } else
+    reasons.push({
+      text: `Guideline weight for ${who}, hands ${ZONE_LABELS[req.zone]}, load ${req.reach === "close" ? "close to the body" : "at arm's length"}: ${fmt(base)} kg.`,
+      source: req.sex === "male" ? SOURCES.hseL23 : `${SOURCES.hseL23} (women's figures from memory)`,
+    });
   if (fr > 0)
     reasons.push({
       text: `${fmt(req.frequency)} operations a minute: reduced by ${fr * 100} %.`,
@@ -173,12 +200,13 @@ export function scoreFilter(req: FilterRequest): FilterResult {
       source: SOURCES.hseL23,
     });
   }
-  if (index === null)
+  if (index === null) {
     reasons.push({
       text: "After the reductions no guideline weight remains: the task must be redesigned.",
       source: SOURCES.heftwisePolicy,
     });
-  else
+    warnings.push({ field: "frequency", message: "The frequency and twisting reductions together leave no guideline weight: the filter cannot judge this. Handle less often or remove the twist.", cannotJudge: true });
+  } else
     reasons.push({
       text: `Load ${fmt(req.load)} kg against a guideline of ${fmt(guideline)} kg: index ${fmt(index)}${index > 1 ? " — above the filter, a fuller assessment is needed" : ", within the filter"}.`,
       source: index > 1 ? `${SOURCES.hseL23}; bands above 1: ${SOURCES.heftwisePolicy}` : SOURCES.hseL23,
@@ -194,25 +222,26 @@ export function scoreFilter(req: FilterRequest): FilterResult {
         message: `Carried ${fmt(carry)} m: the guideline figures hold up to about ${CARRY_FILTER_LIMIT_M} m without rest. Assess the carry in more detail, or plan rests or a trolley.`,
       });
     }
-    if (req.zone === "floor-to-lower-leg" || req.zone === "lower-leg-to-knuckle") {
+    if (req.zone === "floor-to-lower-leg" || req.zone === "lower-leg-to-knuckle" || req.zone === "below-standing-level") {
       floors.push("watch");
       warnings.push({
         field: "zone",
         message: "Carried with the hands below knuckle height: the guideline figures do not cover this. Assess in more detail.",
       });
     }
+    // Counted per person: each member of a team carries their share (ISO 11228-1 practice).
     const hours = req.durationHours ?? SHIFT_HOURS;
-    cumulativeMassKg = req.load * Math.max(req.frequency, 0) * 60 * hours;
+    cumulativeMassKg = (req.load / req.teamSize) * Math.max(req.frequency, 0) * 60 * hours;
     const allowance = carry >= LONG_CARRY_M ? CUMULATIVE_MASS_LONG_CARRY_KG : CUMULATIVE_MASS_PER_SHIFT_KG;
     reasons.push({
-      text: `Mass carried in ${fmt(hours)} h: ${fmt(cumulativeMassKg, 0)} kg against ${fmt(allowance)} kg per 8 h shift${carry >= LONG_CARRY_M ? " for carries of 20 m or more" : " under ideal conditions"}.`,
+      text: `Mass carried in ${fmt(hours)} h${req.teamSize > 1 ? " by each person" : ""}: ${fmt(cumulativeMassKg, 0)} kg against ${fmt(allowance)} kg per 8 h shift${carry >= LONG_CARRY_M ? " for carries of 20 m or more" : " under ideal conditions"}.`,
       source: SOURCES.iso11228,
     });
     if (cumulativeMassKg > allowance) {
       floors.push("act");
       warnings.push({
         field: "frequency",
-        message: `Cumulative mass carried (${fmt(cumulativeMassKg, 0)} kg) exceeds ${fmt(allowance)} kg per shift: reduce the number of carries, share the work or use a trolley.`,
+        message: `Cumulative mass carried${req.teamSize > 1 ? " by each person" : ""} (${fmt(cumulativeMassKg, 0)} kg) exceeds ${fmt(allowance)} kg per shift: reduce the number of carries, share the work or use a trolley.`,
       });
     }
   }

@@ -6,10 +6,21 @@
  * Both published unit systems are implemented as published (metric cm/kg, LC 23 kg; US customary
  * in/lb, LC 51 lb) — not as a conversion of one another — so worked examples in either can be
  * checked exactly. Multipliers are kept unrounded. A multiplier of 0 means the task is outside what
- * the equation can judge: the index is then null and the band `stop`.
+ * the equation can judge. Heftwise judges the lift as a whole: a hand position outside the range at
+ * either end (with or without control at the destination), a travel beyond the range, or an FM of 0
+ * leaves no index, and the band is `stop` with each cause named.
  */
 import { bandForIndex, NIOSH_THRESHOLDS } from "./bands";
-import { durationBand, frequencyMultiplier, MAX_FREQUENCY, MIN_FREQUENCY, type DurationBand } from "./niosh-frequency";
+import {
+  DURATION_LABELS,
+  durationBand,
+  frequencyMultiplier,
+  MIN_FREQUENCY,
+  nominalDurationBand,
+  RECOVERY_RATIO,
+  zeroFrequencyExplanation,
+  type DurationBand,
+} from "./niosh-frequency";
 import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import type { Band, Coupling, Reason, ResultBase, Units, Warning } from "./types";
@@ -18,7 +29,7 @@ import { RULES_VERSION } from "./version";
 export interface HandPosition {
   /** Horizontal distance of the hands from the mid-point between the ankles. */
   h: number;
-  /** Vertical height of the hands above the floor. */
+  /** Vertical height of the hands above the standing surface; negative below it (outside the equation). */
   v: number;
   /** Asymmetry angle in degrees. */
   a: number;
@@ -33,6 +44,8 @@ export interface NioshRequest {
   /** Lifts per minute. */
   frequency: number;
   durationHours: number;
+  /** Rest or light work that follows the lifting (hours): decides the duration category. */
+  recoveryHours?: number;
   coupling: Coupling;
   controlAtDestination: boolean;
 }
@@ -130,7 +143,7 @@ export function horizontalMultiplier(h: number, u: UnitSystem): number {
 }
 
 export function verticalMultiplier(v: number, u: UnitSystem): number {
-  if (v > u.vMax) return 0;
+  if (v > u.vMax || v < 0) return 0;
   return Math.max(0, 1 - u.vSlope * Math.abs(v - u.vOptimum));
 }
 
@@ -152,29 +165,29 @@ export function couplingMultiplier(coupling: Coupling, v: number, u: UnitSystem)
   return v < u.vColumnSplit ? 0.95 : 1;
 }
 
-function scoreEnd(
-  req: NioshRequest,
-  pos: HandPosition,
-  travel: number,
-  u: UnitSystem,
-): NioshEndResult {
+function scoreEnd(req: NioshRequest, pos: HandPosition, travel: number, duration: DurationBand, u: UnitSystem): NioshEndResult {
   // Plain literals, no spreads: this is the hot path of live scoring and batch scoring.
   const hm = horizontalMultiplier(pos.h, u);
   const vm = verticalMultiplier(pos.v, u);
   const dm = distanceMultiplier(travel, u);
   const am = asymmetricMultiplier(pos.a);
   const cm = couplingMultiplier(req.coupling, pos.v, u);
-  const fm = frequencyMultiplier(req.frequency, durationBand(req.durationHours), pos.v >= u.vColumnSplit);
+  const fm = frequencyMultiplier(req.frequency, duration, pos.v >= u.vColumnSplit);
   const rwl = u.loadConstant * hm * vm * dm * am * fm * cm;
   return { hm, vm, dm, am, fm, cm, rwl, li: rwl > 0 ? req.load / rwl : null };
 }
 
-/** Warnings for every input outside the equation's range, naming the variable (prefixed by `path`). */
+/**
+ * Warnings for every input outside the equation's range, naming the variable (prefixed by `path`).
+ * Hand positions are checked at both ends whether or not the destination is scored: the hands are
+ * there either way. Those that leave a multiplier at 0 carry `cannotJudge`.
+ */
 export function rangeWarnings(
   origin: HandPosition,
   destination: HandPosition,
   frequency: number,
   durationHours: number,
+  recoveryHours: number | undefined,
   u: UnitSystem,
   path = "",
 ): Warning[] {
@@ -186,71 +199,104 @@ export function rangeWarnings(
   if (travel > u.dMax)
     warnings.push({
       field: `${path}destination.v`,
-      message: `Vertical travel D is ${fmt(travel)} ${L}, beyond the equation's ${fmt(u.dMax)} ${L}: DM is 0 and the equation cannot judge this lift.`,
+      message: `Vertical travel D is ${fmt(travel)} ${L}, beyond the equation's ${fmt(u.dMax)} ${L}: DM is 0 and the equation cannot judge this lift. Break the lift into stages of at most ${fmt(u.dMax)} ${L}.`,
+      cannotJudge: true,
     });
   if (frequency < MIN_FREQUENCY)
     warnings.push({
       field: `${path}frequency`,
       message: `Frequency ${fmt(frequency)}/min is below ${fmt(MIN_FREQUENCY)}/min: taken as ${fmt(MIN_FREQUENCY)}/min, as the manual directs.`,
     });
-  if (frequency > MAX_FREQUENCY)
-    warnings.push({
-      field: `${path}frequency`,
-      message: `Frequency ${fmt(frequency)}/min is above ${fmt(MAX_FREQUENCY)}/min: FM is 0 and the equation cannot judge this job.`,
-    });
   if (durationHours > 8)
     warnings.push({
       field: `${path}durationHours`,
       message: `Duration ${fmt(durationHours)} h is beyond the equation's 8 h: the 2–8 h column is used, which may understate the risk.`,
     });
+  const nominal = nominalDurationBand(durationHours);
+  const actual = durationBand(durationHours, recoveryHours);
+  if (nominal !== actual) {
+    const needed = RECOVERY_RATIO[nominal as "short" | "moderate"] * durationHours;
+    warnings.push({
+      field: `${path}recoveryHours`,
+      message:
+        recoveryHours === undefined
+          ? `No recovery time given: ${fmt(durationHours)} h of lifting counts as ${DURATION_LABELS[nominal]} only when at least ${fmt(needed)} h of rest or light work follows it, so the ${DURATION_LABELS[actual]} column is used. Enter the recovery time if there is one.`
+          : `Recovery of ${fmt(recoveryHours)} h is less than the ${fmt(needed)} h that ${fmt(durationHours)} h of lifting needs to count as ${DURATION_LABELS[nominal]}: the ${DURATION_LABELS[actual]} column is used.`,
+    });
+  }
   return warnings;
 }
 
+/** What to change, for each multiplier that can fall to 0 at an end. */
 function endWarnings(warnings: Warning[], pos: HandPosition, end: string, u: UnitSystem, path: string): void {
   const L = u.lengthUnit;
   if (pos.h > u.hMax)
     warnings.push({
       field: `${path}${end}.h`,
-      message: `H at the ${end} is ${fmt(pos.h)} ${L}, beyond the equation's ${fmt(u.hMax)} ${L}: HM is 0 and the equation cannot judge this lift. Bring the load closer.`,
+      message: `H at the ${end} is ${fmt(pos.h)} ${L}, beyond the equation's ${fmt(u.hMax)} ${L}: HM is 0 and the equation cannot judge this lift. Bring the load within ${fmt(u.hMax)} ${L} of the ankles, or use a lifting aid.`,
+      cannotJudge: true,
     });
   if (pos.v > u.vMax)
     warnings.push({
       field: `${path}${end}.v`,
-      message: `V at the ${end} is ${fmt(pos.v)} ${L}, above the equation's ${fmt(u.vMax)} ${L}: VM is 0 and the equation cannot judge this lift.`,
+      message: `V at the ${end} is ${fmt(pos.v)} ${L}, above the equation's ${fmt(u.vMax)} ${L}: VM is 0 and the equation cannot judge this lift. Lower that end, or raise the worker on a platform.`,
+      cannotJudge: true,
+    });
+  else if (pos.v < 0)
+    warnings.push({
+      field: `${path}${end}.v`,
+      message: `V at the ${end} is ${fmt(-pos.v)} ${L} below the standing surface: the equation's V runs from 0, so VM is 0 and it cannot judge this lift. Receive the load from a second person standing in the excavation, lower from kneeling onto a mat, use a tripod hoist or davit, or pass it down in smaller parts.`,
+      cannotJudge: true,
     });
   if (pos.a > MAX_ASYMMETRY_DEG)
     warnings.push({
       field: `${path}${end}.a`,
-      message: `Asymmetry at the ${end} is ${fmt(pos.a)}°, beyond ${MAX_ASYMMETRY_DEG}°: AM is 0 and the equation cannot judge this lift.`,
+      message: `Asymmetry at the ${end} is ${fmt(pos.a)}°, beyond ${MAX_ASYMMETRY_DEG}°: AM is 0 and the equation cannot judge this lift. Turn the feet, not the trunk, or re-arrange the workplace.`,
+      cannotJudge: true,
     });
+}
+
+/** The V column of Table 5 in the request's units ("V < 75 cm"). */
+export function vColumnLabel(highVertical: boolean, u: UnitSystem): string {
+  return `V ${highVertical ? "≥" : "<"} ${fmt(u.vColumnSplit)} ${u.lengthUnit}`;
 }
 
 export function scoreNiosh(req: NioshRequest): NioshResult {
   const u = unitSystem(req.units);
   const travel = Math.abs(req.destination.v - req.origin.v);
-  const origin = scoreEnd(req, req.origin, travel, u);
-  const destination = req.controlAtDestination
-    ? scoreEnd(req, req.destination, travel, u)
-    : null;
-  const warnings = rangeWarnings(req.origin, req.destination, req.frequency, req.durationHours, u);
+  const duration = durationBand(req.durationHours, req.recoveryHours);
+  const origin = scoreEnd(req, req.origin, travel, duration, u);
+  const destination = req.controlAtDestination ? scoreEnd(req, req.destination, travel, duration, u) : null;
+  const warnings = rangeWarnings(req.origin, req.destination, req.frequency, req.durationHours, req.recoveryHours, u);
+  const zeroFm = origin.fm === 0 ? req.origin : destination && destination.fm === 0 ? req.destination : null;
+  if (zeroFm) {
+    const high = zeroFm.v >= u.vColumnSplit;
+    warnings.push({
+      field: "frequency",
+      message: `FM is 0: ${zeroFrequencyExplanation(req.frequency, duration, high, vColumnLabel(high, u))} Lift less often, for a shorter time, or share the work.`,
+      cannotJudge: true,
+    });
+  }
 
-  // The larger index governs; an end the equation cannot judge (li null) governs outright.
-  let governing = origin;
-  if (destination && origin.li !== null && (destination.li === null || destination.li > origin.li)) governing = destination;
-  const li = governing.li;
+  // The equation judges the lift as a whole: any multiplier of 0 at either end leaves no index.
+  let judgeable = true;
+  for (const w of warnings) if (w.cannotJudge) judgeable = false;
+  // Otherwise the larger index governs.
+  const governing = destination && destination.li !== null && origin.li !== null && destination.li > origin.li ? destination : origin;
+  const li = judgeable ? governing.li : null;
   const band = bandForIndex(li, NIOSH_THRESHOLDS);
 
   return {
     method: "niosh",
     inputs: req,
-    derived: { travelDistance: travel, durationBand: durationBand(req.durationHours), frequencyUsed: Math.max(req.frequency, MIN_FREQUENCY) },
+    derived: { travelDistance: travel, durationBand: duration, frequencyUsed: Math.max(req.frequency, MIN_FREQUENCY) },
     origin,
     destination,
     li,
     index: li,
-    limit: governing.rwl,
+    limit: judgeable ? governing.rwl : 0,
     band,
-    reasons: nioshReasons(li, band, governing, destination !== null && governing === destination, u, req.load),
+    reasons: judgeable ? nioshReasons(li!, band, governing, governing === destination, u, req.load) : outOfRangeReasons(warnings),
     warnings,
     rulesVersion: RULES_VERSION,
   };
@@ -258,7 +304,7 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
 
 // Reasons that never change are made once (and frozen, since results share them).
 const OUT_OF_RANGE_REASON: Reason = Object.freeze({
-  text: "At least one multiplier is 0: the lift is outside the range the NIOSH equation can judge, so no lifting index is given. Do not proceed as planned.",
+  text: "At least one multiplier is 0: the lift is outside the range the NIOSH equation can judge, so no lifting index is given and it is never Clear. Do not proceed as planned.",
   source: SOURCES.nioshManual,
 });
 const BAND_REASON: Record<Band, Reason> = {
@@ -274,15 +320,14 @@ const BAND_REASON: Record<Band, Reason> = {
   stop: Object.freeze({ text: "Lifting index above 3.0: nearly all workers are at increased risk of injury.", source: SOURCES.nioshManual }),
 };
 
-function nioshReasons(
-  li: number | null,
-  band: Band,
-  governing: NioshEndResult,
-  atDestination: boolean,
-  u: UnitSystem,
-  load: number,
-): Reason[] {
-  if (li === null) return [OUT_OF_RANGE_REASON];
+/** Each cause named, after the general statement. */
+function outOfRangeReasons(warnings: Warning[]): Reason[] {
+  const reasons: Reason[] = [OUT_OF_RANGE_REASON];
+  for (const w of warnings) if (w.cannotJudge) reasons.push({ text: w.message, source: w.field.endsWith("frequency") ? SOURCES.nioshFrequencyTable : SOURCES.nioshManual });
+  return reasons;
+}
+
+function nioshReasons(li: number, band: Band, governing: NioshEndResult, atDestination: boolean, u: UnitSystem, load: number): Reason[] {
   const reasons: Reason[] = [
     {
       text: `Recommended weight limit at the ${atDestination ? "destination" : "origin"} is ${fmt(governing.rwl)} ${u.massUnit}; the load of ${fmt(load)} ${u.massUnit} gives a lifting index of ${fmt(li)}.`,

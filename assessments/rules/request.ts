@@ -6,6 +6,7 @@
 import { z } from "zod";
 import { MAX_COMPOSITE_TASKS, MIN_COMPOSITE_TASKS } from "./niosh-composite";
 import { ZONES } from "./filter";
+import { SURFACES } from "./push";
 import { liftRequestSchema } from "../lift-plan/request";
 
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
@@ -21,7 +22,12 @@ export const reachSchema = z.enum(["close", "extended"]);
 const teamSize = () => z.number().int("must be a whole number").min(1, "must be at least 1").max(20, "must be at most 20");
 const durationHours = () => positive().refine((x) => x <= 24, "must be at most 24 hours");
 
-export const handPositionSchema = z.strictObject({ h: nonNegative(), v: nonNegative(), a: degrees() });
+/** V may be negative: hands below the standing surface (an excavation), which the equation cannot judge. */
+export const handPositionSchema = z.strictObject({
+  h: nonNegative(),
+  v: finite().refine((v) => v >= -500, "must be at most 500 below the standing surface"),
+  a: degrees(),
+});
 
 export const nioshRequestSchema = z.strictObject({
   method: z.literal("niosh"),
@@ -31,6 +37,7 @@ export const nioshRequestSchema = z.strictObject({
   destination: handPositionSchema,
   frequency: nonNegative(),
   durationHours: durationHours(),
+  recoveryHours: nonNegative().refine((x) => x <= 24, "must be at most 24 hours").optional(),
   coupling: couplingSchema,
   controlAtDestination: z.boolean(),
 });
@@ -49,6 +56,7 @@ export const compositeRequestSchema = z.strictObject({
   method: z.literal("niosh-composite"),
   units: unitsSchema,
   durationHours: durationHours(),
+  recoveryHours: nonNegative().refine((x) => x <= 24, "must be at most 24 hours").optional(),
   tasks: z
     .array(compositeTaskSchema)
     .min(MIN_COMPOSITE_TASKS, `a composite job needs at least ${MIN_COMPOSITE_TASKS} tasks`)
@@ -78,6 +86,9 @@ export const pushRequestSchema = z.strictObject({
   teamSize: teamSize(),
   distanceM: nonNegative().optional(),
   measuredForceN: positive().optional(),
+  surface: z.enum(SURFACES).optional(),
+  braked: z.boolean().optional(),
+  brakeOperator: z.string().trim().max(120).optional(),
 });
 
 export const scoreRequestSchema = z.discriminatedUnion("method", [

@@ -17,6 +17,11 @@ export interface Reason {
 export interface Warning {
   field: string;
   message: string;
+  /**
+   * The method cannot judge the operation with this input (a multiplier of 0, hands below the
+   * standing surface, no guideline left). A result carrying such a warning is never Clear.
+   */
+  cannotJudge?: true;
 }
 
 export type Sex = "male" | "female";

@@ -53,7 +53,7 @@ const plan = (over: Partial<LiftRequest> = {}): LiftRequest => ({
   ratedCapacity: 1200,
   radiusM: 6,
   maxRadiusM: 9,
-  sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 1000 },
+  sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 1000, markedWll: 2100 },
   liftDate: "2027-03-10",
   examinations: [
     { item: "Lorry-loader crane", kind: "equipment", lastExamined: "2026-09-01" },

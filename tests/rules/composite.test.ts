@@ -23,7 +23,7 @@ describe("composite lifting index [pub procedure, calc values]", () => {
   // A: 10 kg at 1/min → FM .94, STRWL 21.62, STLI .4625, FILI .4348
   // B: 5 kg at 2/min → FM .91, STRWL 20.93, STLI .2389, FILI .2174
   // CLI = .4625 + .2174 × (1/FM(3/min) − 1/FM(1/min)) = .4625 + .2174 × (1/.88 − 1/.94) = .4783
-  const result = scoreComposite({ method: "niosh-composite", units: "metric", durationHours: 1, tasks: [task("B", 5, 2), task("A", 10, 1)] });
+  const result = scoreComposite({ method: "niosh-composite", units: "metric", durationHours: 1, recoveryHours: 1.2, tasks: [task("B", 5, 2), task("A", 10, 1)] });
 
   it("computes FIRWL, STRWL, FILI and STLI per task", () => {
     const a = result.tasks.find((t) => t.id === "A")!;
@@ -52,6 +52,7 @@ describe("composite lifting index [pub procedure, calc values]", () => {
       method: "niosh-composite",
       units: "metric",
       durationHours: 1,
+      recoveryHours: 1.2,
       tasks: [task("A", 10, 1), task("far", 10, 1, { origin: { h: 70, v: 75, a: 0 } })],
     });
     expect(r.cli).toBeNull();

@@ -3,7 +3,7 @@
  * the 3rd ed. 2004) and INDG143, as reproduced in REFERENCES.md §2.
  */
 import { describe, expect, it } from "vitest";
-import { guidelineWeight, scoreFilter, ZONES, type FilterRequest } from "@/assessments/rules/filter";
+import { guidelineWeight, scoreFilter, TABLE_ZONES, type FilterRequest } from "@/assessments/rules/filter";
 
 const request = (over: Partial<FilterRequest> = {}): FilterRequest => ({
   method: "filter",
@@ -20,10 +20,10 @@ const request = (over: Partial<FilterRequest> = {}): FilterRequest => ({
 describe("guideline weights — HSE L23 filter table (men [pub, reproduction]; women [memory])", () => {
   const men = { "shoulder-to-reach": [10, 5], "elbow-to-shoulder": [20, 10], "knuckle-to-elbow": [25, 15], "lower-leg-to-knuckle": [20, 10], "floor-to-lower-leg": [10, 5] };
   const women = { "shoulder-to-reach": [7, 3], "elbow-to-shoulder": [13, 7], "knuckle-to-elbow": [16, 10], "lower-leg-to-knuckle": [13, 7], "floor-to-lower-leg": [7, 3] };
-  it.each(ZONES)("men, %s: close and extended [pub]", (zone) => {
+  it.each(TABLE_ZONES)("men, %s: close and extended [pub]", (zone) => {
     expect([guidelineWeight("male", zone, "close"), guidelineWeight("male", zone, "extended")]).toEqual(men[zone]);
   });
-  it.each(ZONES)("women, %s: close and extended [from memory]", (zone) => {
+  it.each(TABLE_ZONES)("women, %s: close and extended [from memory]", (zone) => {
     expect([guidelineWeight("female", zone, "close"), guidelineWeight("female", zone, "extended")]).toEqual(women[zone]);
   });
   it("25 kg, men, knuckle to elbow, close: the one-person design figure of the trade (common practice, no published source) matches the table", () => {

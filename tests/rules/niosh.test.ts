@@ -28,6 +28,7 @@ const ideal = (over: Partial<NioshRequest> = {}): NioshRequest => ({
   destination: { h: 25, v: 75, a: 0 },
   frequency: 0.2,
   durationHours: 1,
+  recoveryHours: 1.2, // ≤ 1 h counts as short only with at least 1.2 × the work time of recovery after it
   coupling: "good",
   controlAtDestination: false,
   ...over,
@@ -159,6 +160,7 @@ describe("worked example: unloading a dish-washing machine — Waters 2006, ch. 
     destination: { h: 20, v: 7, a: 30 },
     frequency: 5,
     durationHours: 1,
+    recoveryHours: 1.2, // ≤ 1 h counts as short only with at least 1.2 × the work time of recovery after it
     coupling: "good",
     controlAtDestination: true,
   });

@@ -51,7 +51,8 @@ describe("guideline forces — HSE L23 [pub]: men 200 N start / 100 N moving, wo
     expect(r.warnings.map((w) => w.field)).toContain("distanceM");
     expect(r.band).toBe("watch");
   });
-  it("downhill warns of a runaway", () => {
-    expect(scorePush(request({ gradient: -0.05 })).warnings.map((w) => w.field)).toContain("gradient");
+  it("downhill on hard ground warns of a runaway; on rails, unbraked, it asks for a brake", () => {
+    expect(scorePush(request({ gradient: -0.05, surface: "hard" })).warnings.map((w) => w.field)).toContain("gradient");
+    expect(scorePush(request({ gradient: -0.05, surface: "rail" })).warnings.map((w) => w.field)).toContain("braked");
   });
 });

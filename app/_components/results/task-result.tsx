@@ -1,5 +1,5 @@
-import { adviceForClear } from "@/assessments/method-statement/advice";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
+import { nothingReachesClear, type WhatIf } from "@/assessments/method-statement/what-if";
 import { fmt } from "@/assessments/rules/format";
 import type { Reason, Warning } from "@/assessments/rules/types";
 import { SAFETY_CAUTION } from "../safety-caution";
@@ -48,10 +48,43 @@ function Reasons({ reasons, warnings }: { reasons: Reason[]; warnings: Warning[]
 
 const f = (x: number | null | undefined, dp: 0 | 1 | 2 = 2) => (x === null || x === undefined ? "—" : fmt(x, dp));
 
-/** Everything a task's score says: band, index, each factor, reasons with sources, warnings, advice. */
+/** The changes the engine confirmed, each with the band it reaches when re-scored. */
+function WhatIfList({ whatIf }: { whatIf: WhatIf }) {
+  if (whatIf.suggestions.length === 0 && whatIf.reachesClear) return null;
+  return (
+    <div className="mt-3 rounded border border-rule bg-paper p-2 text-sm" data-testid="what-if">
+      <h4 className="font-bold">What would bring it to clear</h4>
+      <p className="text-xs text-muted">Each change below was re-scored by the same rules; the band is what it reaches.</p>
+      {whatIf.suggestions.length > 0 && (
+        <ul className="mt-1 space-y-1">
+          {whatIf.suggestions.map((s) => (
+            <li key={s.text} className="flex items-start justify-between gap-2" data-testid="what-if-suggestion">
+              <span>{s.text}</span>
+              <BandChip band={s.band} />
+            </li>
+          ))}
+        </ul>
+      )}
+      {whatIf.together && (
+        <p className="mt-2 flex items-start justify-between gap-2" data-testid="what-if-together">
+          <span>
+            <strong>Together:</strong> {whatIf.together.text.join("; ")}
+          </span>
+          <BandChip band={whatIf.together.band} />
+        </p>
+      )}
+      {!whatIf.reachesClear && (
+        <p className="mt-2 font-bold" data-testid="what-if-none">
+          {nothingReachesClear(whatIf.bestBand)}
+        </p>
+      )}
+    </div>
+  );
+}
+
+/** Everything a task's score says: band, index, each factor, reasons with sources, warnings, what-if. */
 export function TaskResult({ score }: { score: TaskScore }) {
   const { niosh, filter, push, lift } = score.results;
-  const advice = adviceForClear(score);
   return (
     <section aria-label="Result" data-testid="task-result" className="rounded-lg border border-rule bg-white p-3">
       <div className="flex flex-wrap items-center gap-3">
@@ -110,6 +143,13 @@ export function TaskResult({ score }: { score: TaskScore }) {
               ["Index", f(push.index)],
               ["To start (N)", `${f(push.startForceN, 0)} of ${f(push.guidelineStartN, 0)}`],
               ["To keep moving (N)", `${f(push.sustainedForceN, 0)} of ${f(push.guidelineSustainedN, 0)}`],
+              ...(push.inputs.braked
+                ? ([["Holding and stopping", "by the brake"]] as [string, string][])
+                : ([
+                    ["To hold it on the slope (N)", `${f(push.holdForceN, 0)} of ${f(push.guidelineStartN, 0)}`],
+                    ["To stop it (N)", `${f(push.stopForceN, 0)} of ${f(push.guidelineStartN, 0)}`],
+                  ] as [string, string][])),
+              ["Runs away if let go", push.runsAway ? "YES" : "no"],
             ]}
           />
           <Reasons reasons={push.reasons} warnings={push.warnings} />
@@ -124,21 +164,13 @@ export function TaskResult({ score }: { score: TaskScore }) {
               ["Utilisation", `${f(lift.utilisation * 100, 0)} %`],
               ["Leg tension (kg)", f(lift.legTension)],
               ["Sling rated (kg)", `${f(lift.slingWll)} ${lift.slingOk ? "— passes" : "— FAILS"}`],
+              ...(lift.inputs.sling.markedWll !== undefined && lift.computedSlingWll !== lift.slingWll ? ([["Computed, above the marked limit (kg)", f(lift.computedSlingWll)]] as [string, string][]) : []),
             ]}
           />
           <Reasons reasons={lift.reasons} warnings={lift.warnings} />
         </div>
       )}
-      {advice.length > 0 && (
-        <div className="mt-3 rounded bg-teal-50 p-2 text-sm" data-testid="advice">
-          <h4 className="font-bold">What would bring it to clear</h4>
-          <ul className="list-disc pl-5">
-            {advice.map((a) => (
-              <li key={a}>{a}</li>
-            ))}
-          </ul>
-        </div>
-      )}
+      {score.whatIf && <WhatIfList whatIf={score.whatIf} />}
       <p className="mt-3 text-xs text-muted">{SAFETY_CAUTION}</p>
     </section>
   );
