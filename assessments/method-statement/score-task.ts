@@ -127,7 +127,7 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
       break;
     }
     case "equipment":
-      if (task.lift) out.lift = { method: "lift", load: load!, ...task.lift };
+      if (task.lift) out.lift = { ...task.lift, method: "lift", load: load! };
       break;
   }
   return out;

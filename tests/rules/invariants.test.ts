@@ -193,8 +193,8 @@ const task: fc.Arbitrary<Task> = fc
       controlAtDestination: fc.boolean(),
     }),
     filter: filterInputs,
-    push: push.map(({ method: _, ...p }) => ({ ...p, mass: Math.max(p.mass, 0.1) })),
-    lift: lift.map(({ method: _m, load: _l, ...l }) => l),
+    push: push.map((p) => ({ ...p, method: undefined })),
+    lift: lift.map((l) => ({ ...l, method: undefined, load: undefined })),
   })
   .map((x) => ({
     id: "t1",
