@@ -230,3 +230,36 @@ export function reviewContent(content: Content, register: RegisterEntry[]): Revi
   const banded = scores.map((s) => s.band).filter((b): b is Band => b !== null);
   return { missing, worstBand: banded.length ? worstBand(banded) : null, scores, canSubmit: missing.length === 0 };
 }
+
+export interface Rescored {
+  taskId: string;
+  /** 1-based position of the task in the revision. */
+  position: number;
+  description: string;
+  was: Band | null;
+  now: Band | null;
+  wasVersion: string;
+}
+
+/**
+ * Tasks whose stored result (saved under earlier rules) the current rules score differently: a
+ * different band, or a different index from any method. A draft shows these before it is submitted;
+ * approved revisions keep their stored results and are never re-scored.
+ */
+export function rescoredByCurrentRules(tasks: Task[], stored: readonly TaskScore[] | null, fresh: readonly TaskScore[]): Rescored[] {
+  if (!stored) return [];
+  const byId = new Map(stored.map((s) => [s.taskId, s]));
+  const out: Rescored[] = [];
+  fresh.forEach((now, i) => {
+    const was = byId.get(now.taskId);
+    if (!was || was.rulesVersion === now.rulesVersion) return;
+    const indexOf = (s: TaskScore, m: keyof TaskResults) => {
+      const x = s.results[m]?.index;
+      return x === undefined || x === null ? x : Math.round(x * 100);
+    };
+    const methods: (keyof TaskResults)[] = ["niosh", "filter", "push", "lift"];
+    if (was.band !== now.band || methods.some((m) => indexOf(was, m) !== indexOf(now, m)))
+      out.push({ taskId: now.taskId, position: i + 1, description: tasks[i]?.description ?? "", was: was.band, now: now.band, wasVersion: was.rulesVersion });
+  });
+  return out;
+}

@@ -100,16 +100,17 @@ export class PageCanvas {
     if (borderColor) this.ops.push(`q ${n(borderWidth)} w ${colour(borderColor)} RG ${box} S Q`);
   }
 
-  /** A filled circle; `size` is the radius, as in pdf-lib. */
-  drawCircle({ x, y, size: r, color }: { x: number; y: number; size: number; color: RGB }) {
+  /** A circle, filled and/or outlined; `size` is the radius, as in pdf-lib. */
+  drawCircle({ x, y, size: r, color, borderColor, borderWidth = 1 }: { x: number; y: number; size: number; color?: RGB; borderColor?: RGB; borderWidth?: number }) {
     const k = r * KAPPA;
-    this.ops.push(
-      `q ${colour(color)} rg ${n(x + r)} ${n(y)} m ` +
-        `${n(x + r)} ${n(y + k)} ${n(x + k)} ${n(y + r)} ${n(x)} ${n(y + r)} c ` +
-        `${n(x - k)} ${n(y + r)} ${n(x - r)} ${n(y + k)} ${n(x - r)} ${n(y)} c ` +
-        `${n(x - r)} ${n(y - k)} ${n(x - k)} ${n(y - r)} ${n(x)} ${n(y - r)} c ` +
-        `${n(x + k)} ${n(y - r)} ${n(x + r)} ${n(y - k)} ${n(x + r)} ${n(y)} c f Q`,
-    );
+    const path =
+      `${n(x + r)} ${n(y)} m ` +
+      `${n(x + r)} ${n(y + k)} ${n(x + k)} ${n(y + r)} ${n(x)} ${n(y + r)} c ` +
+      `${n(x - k)} ${n(y + r)} ${n(x - r)} ${n(y + k)} ${n(x - r)} ${n(y)} c ` +
+      `${n(x - r)} ${n(y - k)} ${n(x - k)} ${n(y - r)} ${n(x)} ${n(y - r)} c ` +
+      `${n(x + k)} ${n(y - r)} ${n(x + r)} ${n(y - k)} ${n(x + r)} ${n(y)} c`;
+    if (color) this.ops.push(`q ${colour(color)} rg ${path} f Q`);
+    if (borderColor) this.ops.push(`q ${n(borderWidth)} w ${colour(borderColor)} RG ${path} S Q`);
   }
 
   /** Many filled rectangles in one colour, as one path (a QR code's modules). */

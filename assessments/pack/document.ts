@@ -7,6 +7,9 @@
 import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
 import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
+import { HITCH_LABELS, SINGLE_SLING_HITCHES } from "../lift-plan/sling";
+import { DURATION_LABELS } from "../rules/niosh-frequency";
+import { gradientText, SURFACE_LABELS } from "../rules/push";
 import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";
@@ -135,6 +138,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
         ["Hands at start (H, V, twist)", `${fmt(o.h)} cm, ${fmt(o.v)} cm, ${fmt(o.a)}°`],
         ["Hands at end (H, V, twist)", `${fmt(d.h)} cm, ${fmt(d.v)} cm, ${fmt(d.a)}°`],
         ["Frequency, duration, grip", `${fmt(niosh.inputs.frequency)}/min, ${fmt(niosh.inputs.durationHours)} h, ${niosh.inputs.coupling}`],
+        ["Rest after, duration category", `${niosh.inputs.recoveryHours !== undefined ? `${fmt(niosh.inputs.recoveryHours)} h` : "not given"}; ${DURATION_LABELS[niosh.derived.durationBand]} column`],
         ["HM, VM, DM, AM, FM, CM", [niosh.origin.hm, niosh.origin.vm, niosh.origin.dm, niosh.origin.am, niosh.origin.fm, niosh.origin.cm].map((x) => fmt(x, 2)).join(", ")],
         ["RWL (limit)", `${fmt(niosh.limit)} kg`],
         ["Lifting index", niosh.li === null ? "none: outside the equation's range" : fmt(niosh.li)],
@@ -156,9 +160,17 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     if (push) {
       w.heading("Pushing and pulling", 3);
       w.pairs([
-        ["Mass, gradient", `${fmt(push.inputs.mass)} kg, ${fmt(push.inputs.gradient * 100, 1)} %`],
+        ["Mass, surface, gradient", `${fmt(push.inputs.mass)} kg, ${push.inputs.surface ? SURFACE_LABELS[push.inputs.surface] : "surface not stated (judged as rails)"}, ${gradientText(push.inputs.gradient)}`],
+        ["People, brake", `${push.inputs.teamSize} (${push.inputs.sex === "male" ? "men's" : "women's"} figures); ${push.inputs.braked ? `braked, worked by ${push.inputs.brakeOperator || "— not named"}` : "unbraked"}`],
         ["Force to start (limit)", `${fmt(push.startForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
         ["Force to keep moving (limit)", `${fmt(push.sustainedForceN, 0)} N (${fmt(push.guidelineSustainedN, 0)} N)`],
+        ...(push.inputs.braked
+          ? ([["Holding and stopping", "by the brake"]] as [string, string][])
+          : ([
+              ["Force to hold it on the slope (limit)", `${fmt(push.holdForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
+              ["Force to stop it (limit)", `${fmt(push.stopForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
+            ] as [string, string][])),
+        ["Runs away if let go", push.runsAway ? "YES" : "no"],
         ["Index", fmt(push.index)],
       ]);
       reasons(w, push.reasons, push.warnings);
@@ -277,14 +289,17 @@ function reasons(w: Writer, list: Reason[], warnings: Warning[]) {
 
 function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groundNotes?: string) {
   const { fonts } = w;
+  const hitch = lift.inputs.sling.hitch ?? "straight";
+  const single = SINGLE_SLING_HITCHES.includes(hitch);
   w.heading(`Lift plan — category ${lift.category}`, 3);
   const people = lift.inputs.people ?? {};
   w.pairs([
     ["Hook load", `${fmt(lift.hookLoad)} kg (load ${fmt(lift.inputs.load)} + rigging ${fmt(lift.inputs.riggingMass)} + hook block ${fmt(lift.inputs.hookBlockMass)})`],
     ["Rated capacity, radius", `${fmt(lift.inputs.ratedCapacity)} kg at ${lift.inputs.radiusM !== undefined ? `${fmt(lift.inputs.radiusM, 1)} m` : "—"} (max ${lift.inputs.maxRadiusM !== undefined ? `${fmt(lift.inputs.maxRadiusM, 1)} m` : "—"})`],
     ["Utilisation", `${fmt(lift.utilisation * 100, 0)} %`],
-    ["Sling", `${lift.inputs.sling.legs} leg(s), ${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical, ${lift.inputs.sling.hitch ?? "straight"}, WLL ${fmt(lift.inputs.sling.legWll)} kg per leg`],
-    ["Leg tension, sling rating", `${fmt(lift.legTension)} kg per leg; assembly rated ${fmt(lift.slingWll)} kg — ${lift.slingOk ? "passes" : "FAILS"}`],
+    ["Sling", `${single ? "one sling" : `${lift.inputs.sling.legs} leg(s)`}, ${HITCH_LABELS[hitch]}, ${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical, WLL ${fmt(lift.inputs.sling.legWll)} kg ${single ? "straight" : "per leg"}`],
+    ["Assembly limit", `computed ${fmt(lift.computedSlingWll)} kg (mode factor ${fmt(lift.modeFactor)}); marked ${lift.inputs.sling.markedWll !== undefined ? `${fmt(lift.inputs.sling.markedWll)} kg` : "— not entered"}; rated ${fmt(lift.slingWll)} kg`],
+    ["Tension, result", `${fmt(lift.legTension)} kg per ${single ? "part" : "leg"} — ${lift.slingOk ? "passes" : "FAILS"}`],
     ["Category because", lift.categoryReasons.join("; ")],
     ["Lift date", lift.inputs.liftDate ?? "—"],
     ...lift.examinations.map((e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string]),
@@ -305,7 +320,9 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
   const angle = (lift.inputs.sling.angleFromVerticalDeg * Math.PI) / 180;
   const spread = Math.tan(angle) * drop;
   const legs = lift.inputs.sling.legs;
-  const xs = legs === 1 ? [cx] : legs === 2 ? [cx - spread, cx + spread] : legs === 3 ? [cx - spread, cx, cx + spread] : [cx - spread, cx - spread / 3, cx + spread / 3, cx + spread];
+  // A basket or endless sling: two parts, passing under the load.
+  const part = Math.max(spread, 18);
+  const xs = single ? [cx - part, cx + part] : legs === 1 ? [cx] : legs === 2 ? [cx - spread, cx + spread] : legs === 3 ? [cx - spread, cx, cx + spread] : [cx - spread, cx - spread / 3, cx + spread / 3, cx + spread];
   w.page.drawCircle({ x: cx, y: top - 6, size: 4, color: COLOURS.ink });
   const colour = lift.slingOk ? COLOURS.frame : COLOURS.band.act;
   xs.forEach((x, i) => {
@@ -318,10 +335,17 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
     w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x: cx, y: top - 6 - drop }, thickness: 0.6, color: COLOURS.muted, dashArray: [3, 3] });
     w.page.drawText(`${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical`, { x: cx + 8, y: top - 40, size: 9, font: fonts.regular, color: COLOURS.band.clear });
   }
-  const loadWidth = Math.max(120, spread * 2 + 30);
+  const loadWidth = Math.max(120, (xs[xs.length - 1] - xs[0]) + 30);
   w.page.drawRectangle({ x: cx - loadWidth / 2, y: top - 6 - drop - 30, width: loadWidth, height: 30, color: COLOURS.band.watch });
+  if (single) {
+    const under = top - 6 - drop - 34;
+    w.page.drawLine({ start: { x: xs[0], y: top - 6 - drop }, end: { x: xs[0], y: under }, thickness: 2, color: colour });
+    w.page.drawLine({ start: { x: xs[0], y: under }, end: { x: xs[1], y: under }, thickness: 2, color: colour });
+    w.page.drawLine({ start: { x: xs[1], y: under }, end: { x: xs[1], y: top - 6 - drop }, thickness: 2, color: colour });
+  }
+  if (hitch === "choked" || hitch === "endless-choked") for (const x of xs) w.page.drawCircle({ x, y: top - 6 - drop - 5, size: 5, borderColor: colour, borderWidth: 1.5 });
   w.page.drawText(`${fmt(lift.slingLoad, 0)} kg`, { x: cx - 20, y: top - drop - 26, size: 10, font: fonts.bold, color: rgb(1, 1, 1) });
   w.y = top - height;
-  if (legs === 4) w.text("Four legs drawn; three are taken to share the load.", { size: 8.5, color: COLOURS.muted });
+  w.text(`Hitch: ${HITCH_LABELS[hitch]}.${legs === 4 && !single ? " Four legs drawn; three are taken to share the load." : ""}`, { size: 8.5, color: COLOURS.muted });
   reasons(w, lift.reasons, lift.warnings);
 }

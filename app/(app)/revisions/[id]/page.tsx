@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import Link from "next/link";
-import type { TaskScore } from "@/assessments/method-statement/score-task";
+import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
@@ -12,6 +12,7 @@ import { STEPS } from "./wizard/steps-list";
 import { Wizard } from "./wizard/wizard";
 import { NewRevisionButton } from "./new-revision-button";
 import { ReadOnlyRevision } from "./read-only-revision";
+import { RescoredNotice } from "./rescored-notice";
 
 export const metadata: Metadata = { title: "Assessment" };
 
@@ -29,6 +30,8 @@ export default async function RevisionPage({ params, searchParams }: { params: P
   const editable = revision.status === "draft" && can(actor, "assessments:write");
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
+  // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
+  const rescored = revision.status === "draft" ? rescoredByCurrentRules(content.tasks, revision.results as TaskScore[] | null, reviewContent(content, register).scores) : [];
 
   return (
     <div className="space-y-4">
@@ -64,6 +67,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
           </ul>
         </section>
       )}
+      <RescoredNotice tasks={rescored} />
       {editable ? (
         <Wizard
           revisionId={revision.id}

@@ -9,13 +9,15 @@ import { ResultPending, TaskResult } from "@/app/_components/results/task-result
 import { OPERATION_LABELS, OPERATIONS, taskSchema, type Content, type Operation, type Task } from "@/assessments/method-statement/content";
 import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
-import { Check, Choice, Num, Text } from "./fields";
+import { SURFACES } from "@/assessments/rules/push";
+import { Check, Choice, GradientField, Num, Text } from "./fields";
 import { WhatIfChart } from "./what-if-chart";
 
 const SEX = [["male", "Men"], ["female", "Women"]] as const;
 const REACH = [["close", "Close to the body"], ["extended", "At arm's length"]] as const;
 const COUPLING = [["good", "Good"], ["fair", "Fair"], ["poor", "Poor"]] as const;
 const ZONE_OPTIONS = ZONES.map((z) => [z, ZONE_LABELS[z]] as const);
+const SURFACE = SURFACES.map((s) => [s, s === "rail" ? "Rails (track trolley)" : s === "hard" ? "Hard, even ground" : "Rough: ballast, cess, grass"] as const);
 
 /** Inputs a new operation needs, filled with typical values the adviser then changes. */
 export function defaultsFor(operation: Operation, component: RegisterEntry | undefined): Partial<Task> {
@@ -29,7 +31,7 @@ export function defaultsFor(operation: Operation, component: RegisterEntry | und
     case "carry":
       return { filter: { ...filter, carryDistanceM: 10, durationHours: 1 } };
     case "push":
-      return { push: { mass: (component?.massKg ?? 0) + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20 } };
+      return { push: { mass: (component?.massKg ?? 0) + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20, surface: "rail", braked: true, brakeOperator: "" } };
     case "equipment":
       return {
         lift: { riggingMass: 20, hookBlockMass: 15, ratedCapacity: 1000, sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" }, factors: {}, examinations: [], people: {} },
@@ -123,14 +125,20 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
                 <Num name={`${p}.niosh.destination.a`} label="Twist at end" unit="°" />
                 <Num name={`${p}.niosh.frequency`} label="Lifts a minute" />
                 <Num name={`${p}.niosh.durationHours`} label="Duration" unit="h" />
+                <Num name={`${p}.niosh.recoveryHours`} label="Rest after" unit="h" optional />
                 <Choice name={`${p}.niosh.coupling`} label="Grip" options={COUPLING} />
               </div>
               <Check name={`${p}.niosh.controlAtDestination`} label="The load must be placed carefully at the end" />
+              <p className="text-xs text-muted">
+                V below 0 is below the standing surface (into an excavation or trough). &ldquo;Rest after&rdquo;: rest or light work once the lifting ends — up to 1 h of lifting
+                counts as short only with at least 1.2 × that time of rest, up to 2 h with 0.3 ×; left blank, the long (2–8 h) column is used.
+              </p>
             </fieldset>
           )}
           {task.filter && task.operation !== "push" && task.operation !== "equipment" && (
             <fieldset className="space-y-2 rounded border border-rule p-2">
               <legend className="px-1 text-sm font-bold">Guideline weights</legend>
+              {task.operation === "lift" && <p className="text-xs text-muted">Frequency and twist come from the hand positions above.</p>}
               <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
                 <Choice name={`${p}.filter.sex`} label="Figures for" options={SEX} />
                 <Choice name={`${p}.filter.zone`} label="Hands between" options={ZONE_OPTIONS} />
@@ -148,13 +156,21 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
               <legend className="px-1 text-sm font-bold">Trolley, barrow or wheeled case</legend>
               <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
                 <Num name={`${p}.push.mass`} label="Loaded mass" unit="kg" />
-                <Num name={`${p}.push.gradient`} label="Gradient" unit="rise ÷ run" />
-                <Num name={`${p}.push.rollingCoefficient`} label="Rolling resistance" unit="optional" optional />
+                <Choice name={`${p}.push.surface`} label="Runs on" options={SURFACE} />
                 <Choice name={`${p}.push.sex`} label="Figures for" options={SEX} />
+                <GradientField name={`${p}.push.gradient`} label="Gradient along the way" />
                 <Num name={`${p}.push.teamSize`} label="People" step="1" />
                 <Num name={`${p}.push.distanceM`} label="Distance" unit="m" optional />
                 <Num name={`${p}.push.measuredForceN`} label="Measured force" unit="N, optional" optional />
+                <Num name={`${p}.push.rollingCoefficient`} label="Rolling resistance" unit="optional" optional />
+                <div className="self-end pb-2">
+                  <Check name={`${p}.push.braked`} label="Braked" />
+                </div>
+                {task.push.braked && <Text name={`${p}.push.brakeOperator`} label="Who works the brake" />}
               </div>
+              {task.push.surface === "rail" && (
+                <p className="text-xs text-muted">Trolley use on the line follows the infrastructure manager&rsquo;s rules; Heftwise does not replace them.</p>
+              )}
             </fieldset>
           )}
           {task.operation === "equipment" && (

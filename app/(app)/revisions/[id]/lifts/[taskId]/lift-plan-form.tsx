@@ -12,6 +12,7 @@ import { liftPlanInputsSchema, type Content } from "@/assessments/method-stateme
 import { errorAt } from "../../wizard/fields";
 import { scoreTask } from "@/assessments/method-statement/score-task";
 import { COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
+import { HITCH_LABELS, HITCHES } from "@/assessments/lift-plan/sling";
 
 type Plan = z.infer<typeof liftPlanInputsSchema>;
 
@@ -121,10 +122,18 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
               Hitch
             </label>
             <select id="lp-hitch" disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register("sling.hitch")}>
-              <option value="straight">Straight</option>
-              <option value="choked">Choked</option>
+              {HITCHES.map((h) => (
+                <option key={h} value={h}>
+                  {HITCH_LABELS[h][0].toUpperCase() + HITCH_LABELS[h].slice(1)}
+                </option>
+              ))}
             </select>
           </div>
+          {num("sling.markedWll", "WLL marked on the assembly", "kg")}
+          <p className="col-span-2 text-xs text-muted sm:col-span-3">
+            The marked limit for this hitch and angle, read from the tag. Where it is lower than leg WLL × mode factor, the marked limit governs. A basket or endless sling is
+            one sling: 1 leg.
+          </p>
         </fieldset>
         <fieldset className="rounded-lg border border-rule bg-white p-3">
           <legend className="px-1 font-bold">What makes this lift complex</legend>
@@ -197,6 +206,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
         {score?.results.lift ? (
           <>
             <SlingDiagram
+              hitch={score.results.lift.inputs.sling.hitch ?? "straight"}
               legs={score.results.lift.inputs.sling.legs}
               angleDeg={score.results.lift.inputs.sling.angleFromVerticalDeg}
               tension={score.results.lift.legTension}
