@@ -295,7 +295,11 @@ function candidates(task: Task, score: TaskScore): Change[][] {
     const frequency = niosh.inputs.frequency;
     for (const end of ["origin", "destination"] as const) {
       const pos = niosh.inputs[end];
-      if (pos.h > METRIC.hMin) lists.push(down(pos.h, METRIC.hMin, 8).map((cm) => ({ kind: "h", end, cm: Math.floor(cm) })));
+      if (pos.h > METRIC.hMin) {
+        // Beyond the equation's reach, its limit is the first thing to try.
+        const from = Math.min(pos.h, METRIC.hMax);
+        lists.push([...(pos.h > METRIC.hMax ? [METRIC.hMax] : []), ...down(from, METRIC.hMin, 8).map(Math.floor)].filter((cm, i, all) => cm < pos.h && all.indexOf(cm) === i).map((cm) => ({ kind: "h", end, cm })));
+      }
       if (pos.v !== METRIC.vOptimum) {
         const start = pos.v < 0 ? 0 : pos.v;
         const steps = [pos.v < 0 ? [0] : [], down(start, METRIC.vOptimum, 5)].flat();
@@ -479,7 +483,8 @@ const label = (band: Band) => band[0].toUpperCase() + band.slice(1);
  * combination, and — where nothing reaches Clear — that, with the best band.
  */
 export function whatIfLines(whatIf: WhatIf | undefined): string[] {
-  if (!whatIf || whatIf.bestBand === "clear" && whatIf.suggestions.length === 0) return [];
+  // Nothing to say only for a task that is Clear already.
+  if (!whatIf || (whatIf.suggestions.length === 0 && !whatIf.together && whatIf.reachesClear)) return [];
   const lines = whatIf.suggestions.map((s) => `${s.text}: ${label(s.band)}.`);
   if (whatIf.together) lines.push(`Together — ${whatIf.together.text.join("; ")}: ${label(whatIf.together.band)}.`);
   if (!whatIf.reachesClear) lines.push(nothingReachesClear(whatIf.bestBand));

@@ -140,7 +140,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
         ["Frequency, duration, grip", `${fmt(niosh.inputs.frequency)}/min, ${fmt(niosh.inputs.durationHours)} h, ${niosh.inputs.coupling}`],
         ["Rest after, duration category", `${niosh.inputs.recoveryHours !== undefined ? `${fmt(niosh.inputs.recoveryHours)} h` : "not given"}; ${DURATION_LABELS[niosh.derived.durationBand]} column`],
         ["HM, VM, DM, AM, FM, CM", [niosh.origin.hm, niosh.origin.vm, niosh.origin.dm, niosh.origin.am, niosh.origin.fm, niosh.origin.cm].map((x) => fmt(x, 2)).join(", ")],
-        ["RWL (limit)", `${fmt(niosh.limit)} kg`],
+        ["RWL (limit)", niosh.li === null ? "none: outside the equation's range" : `${fmt(niosh.limit)} kg`],
         ["Lifting index", niosh.li === null ? "none: outside the equation's range" : fmt(niosh.li)],
       ]);
       reasons(w, niosh.reasons, niosh.warnings);

@@ -12,6 +12,7 @@ import { GRAVITY, scorePush, type PushRequest } from "@/assessments/rules/push";
 import { scoreLift, type LiftRequest } from "@/assessments/lift-plan/lift";
 import { modeFactor } from "@/assessments/lift-plan/sling";
 import { scoreTask } from "@/assessments/method-statement/score-task";
+import { whatIfLines } from "@/assessments/method-statement/what-if";
 import type { Task } from "@/assessments/method-statement/content";
 
 const lift = (over: Partial<NioshRequest> = {}): NioshRequest => ({
@@ -260,5 +261,21 @@ describe("what would bring it to clear: computed by re-scoring, never promised",
     expect(s.band).not.toBe("clear");
     expect(s.whatIf!.reachesClear).toBe(false);
     expect(["watch", "act", "stop"]).toContain(s.whatIf!.bestBand);
+  });
+});
+
+describe("what-if lines for the pack and the briefing", () => {
+  it("a combination that reaches Clear is printed even when no single change does", () => {
+    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Battery", massKg: 31, grip: "good" as const, massSource: "datasheet" as const };
+    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 40, durationHours: 1 } };
+    const s = scoreTask(task, part);
+    expect(s.whatIf!.suggestions).toHaveLength(0);
+    const lines = whatIfLines(s.whatIf);
+    expect(lines.some((l) => l.startsWith("Together") && l.endsWith("Clear."))).toBe(true);
+  });
+  it("a task Clear already has nothing to print", () => {
+    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Kit", massKg: 6, grip: "good" as const, massSource: "datasheet" as const };
+    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 5, durationHours: 1 } };
+    expect(whatIfLines(scoreTask(task, part).whatIf)).toEqual([]);
   });
 });

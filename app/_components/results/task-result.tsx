@@ -50,7 +50,8 @@ const f = (x: number | null | undefined, dp: 0 | 1 | 2 = 2) => (x === null || x 
 
 /** The changes the engine confirmed, each with the band it reaches when re-scored. */
 function WhatIfList({ whatIf }: { whatIf: WhatIf }) {
-  if (whatIf.suggestions.length === 0 && whatIf.reachesClear) return null;
+  // Nothing to say only for a task that is Clear already.
+  if (whatIf.suggestions.length === 0 && !whatIf.together && whatIf.reachesClear) return null;
   return (
     <div className="mt-3 rounded border border-rule bg-paper p-2 text-sm" data-testid="what-if">
       <h4 className="font-bold">What would bring it to clear</h4>
@@ -110,7 +111,7 @@ export function TaskResult({ score }: { score: TaskScore }) {
           <Factors
             rows={[
               ["Lifting index", f(niosh.li)],
-              ["RWL (kg)", f(niosh.limit)],
+              ["RWL (kg)", niosh.li === null ? "— (cannot judge)" : f(niosh.limit)],
               ["HM · VM · DM", `${f(niosh.origin.hm)} · ${f(niosh.origin.vm)} · ${f(niosh.origin.dm)}`],
               ["AM · FM · CM", `${f(niosh.origin.am)} · ${f(niosh.origin.fm)} · ${f(niosh.origin.cm)}`],
               ...(niosh.destination ? ([["At destination: RWL · LI", `${f(niosh.destination.rwl)} kg · ${f(niosh.destination.li)}`]] as [string, string][]) : []),

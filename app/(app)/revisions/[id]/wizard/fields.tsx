@@ -106,7 +106,7 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
     <fieldset className="sm:col-span-3">
       <legend className="text-sm font-bold">{label}</legend>
       <div className="mt-1 flex flex-wrap items-center gap-2">
-        <select aria-label="Direction of travel" className={controlClass(undefined, true) + " !mt-0 w-auto"} value={direction} onChange={(e) => update(e.target.value as Direction, form, typed)}>
+        <select aria-label="Direction of travel" className={controlClass(undefined, true) + " !mt-0 !w-auto"} value={direction} onChange={(e) => update(e.target.value as Direction, form, typed)}>
           <option value="level">Level</option>
           <option value="up">Uphill</option>
           <option value="down">Downhill</option>
@@ -118,11 +118,11 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
               inputMode="decimal"
               aria-label={form === "ratio" ? "N of 1 in N" : "Gradient in %"}
               {...controlProps(id, error)}
-              className={controlClass(error, true) + " !mt-0 w-24"}
+              className={controlClass(error, true) + " !mt-0 !w-24"}
               value={typed}
               onChange={(e) => update(direction, form, e.target.value)}
             />
-            <select aria-label="Gradient given as" className={controlClass(undefined, true) + " !mt-0 w-auto"} value={form} onChange={(e) => update(direction, e.target.value as GradientForm, typed)}>
+            <select aria-label="Gradient given as" className={controlClass(undefined, true) + " !mt-0 !w-auto"} value={form} onChange={(e) => update(direction, e.target.value as GradientForm, typed)}>
               <option value="ratio">1 in N</option>
               <option value="percent">%</option>
             </select>

@@ -20,7 +20,7 @@ const ZONE_OPTIONS = ZONES.map((z) => [z, ZONE_LABELS[z]] as const);
 const SURFACE = SURFACES.map((s) => [s, s === "rail" ? "Rails (track trolley)" : s === "hard" ? "Hard, even ground" : "Rough: ballast, cess, grass"] as const);
 
 /** Inputs a new operation needs, filled with typical values the adviser then changes. */
-export function defaultsFor(operation: Operation, component: RegisterEntry | undefined): Partial<Task> {
+export function defaultsFor(operation: Operation, component: RegisterEntry | undefined, quantity = 1): Partial<Task> {
   const coupling = component?.grip ?? "fair";
   const filter = { sex: "male" as const, zone: "knuckle-to-elbow" as const, reach: "close" as const, frequency: 0.5, twistDeg: 0, teamSize: 1 };
   switch (operation) {
@@ -31,7 +31,7 @@ export function defaultsFor(operation: Operation, component: RegisterEntry | und
     case "carry":
       return { filter: { ...filter, carryDistanceM: 10, durationHours: 1 } };
     case "push":
-      return { push: { mass: (component?.massKg ?? 0) + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20, surface: "rail", braked: true, brakeOperator: "" } };
+      return { push: { mass: (component?.massKg ?? 0) * quantity + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20, surface: "rail", braked: true, brakeOperator: "" } };
     case "equipment":
       return {
         lift: { riggingMass: 20, hookBlockMass: 15, ratedCapacity: 1000, sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" }, factors: {}, examinations: [], people: {} },
@@ -53,7 +53,7 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
   // a team and a carry a distance.
   const onOperation = (operation: Operation) => {
     const current = getValues(p);
-    const defaults = defaultsFor(operation, component);
+    const defaults = defaultsFor(operation, component, current.quantity || 1);
     for (const [key, value] of Object.entries(defaults)) {
       if (!current[key as keyof Task]) setValue(`${p}.${key}` as `tasks.${number}.niosh`, value as Task["niosh"], { shouldValidate: true });
     }

@@ -74,10 +74,15 @@ export function WhatIfChart({ task, component }: { task: Task; component: Regist
   const data = Array.from({ length: 41 }, (_, i) => {
     const x = lo + ((hi - lo) * i) / 40;
     const s = rateTask(...variable.apply(task, component, x));
+    // A method that cannot judge the point leaves no index: the point sits at the top, as Stop does,
+    // rather than following another method's index.
     let index: number | null = null;
-    for (const r of Object.values(s.results)) if (r.index !== null) index = Math.max(index ?? 0, r.index);
-    // A method that cannot judge the point leaves no index: the point sits at the top, as Stop does.
-    const shown = s.band === "stop" && index === null ? INDEX_CAP : index === null ? null : Math.min(index, INDEX_CAP);
+    let unjudged = false;
+    for (const r of Object.values(s.results)) {
+      if (r.index === null) unjudged = true;
+      else index = Math.max(index ?? 0, r.index);
+    }
+    const shown = unjudged ? INDEX_CAP : index === null ? null : Math.min(index, INDEX_CAP);
     return { x: Math.round(x * 1000) / 1000, index: shown, band: s.band };
   });
   return (
