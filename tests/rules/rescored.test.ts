@@ -18,10 +18,11 @@ describe("tasks the current rules score differently", () => {
   const now = rateTask(carry, part);
 
   it("a stored result from earlier rules with another band is listed, with both bands", () => {
-    // As rules 2026.12.1 stored it: the whole 40 kg counted against one person's 10 000 kg a shift (act).
-    const stored = [{ ...now, band: "act" as const, rulesVersion: "2026.12.1" }];
+    // Stored under earlier rules with a band the current rules do not give.
+    expect(now.band).not.toBe("stop");
+    const stored = [{ ...now, band: "stop" as const, rulesVersion: "2026.12.1" }];
     const changed = rescoredByCurrentRules([carry], stored, [now]);
-    expect(changed).toEqual([{ taskId: "c1", position: 1, description: "Carry panels as a pair", was: "act", now: now.band, wasVersion: "2026.12.1" }]);
+    expect(changed).toEqual([{ taskId: "c1", position: 1, description: "Carry panels as a pair", was: "stop", now: now.band, wasVersion: "2026.12.1" }]);
   });
 
   it("a stored result under the current rules is not listed, nor one the new rules score the same", () => {
