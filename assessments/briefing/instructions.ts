@@ -6,6 +6,7 @@ import type { Content, Task } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
+import { CONDITION_TEXT } from "../rules/conditions";
 import type { Band } from "../rules/types";
 
 export interface LoadInstruction {
@@ -54,6 +55,8 @@ export function instructionFor(task: Task, score: TaskScore, componentName: stri
       lines.push("Only the slinger/signaller gives signals to the operator.");
       break;
   }
+  for (const c of task.conditions ?? []) lines.push(`${CONDITION_TEXT[c].label[0].toUpperCase() + CONDITION_TEXT[c].label.slice(1)}: ${CONDITION_TEXT[c].controls}.`);
+  if (push?.runsAway && !push.inputs.braked) lines.push("It rolls by itself on this slope: never let go of it, and never stand below it.");
   if (load !== null && load > ONE_PERSON_KG && (task.operation === "lift" || task.operation === "carry"))
     lines.push(`Over ${ONE_PERSON_KG} kg: use the lifting aid or a second person.`);
   if (score.estimatedMass) lines.push("The weight is an estimate: treat it as heavier until it is weighed.");

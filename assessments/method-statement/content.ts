@@ -6,7 +6,7 @@
 import { z } from "zod";
 import { liftRequestSchema } from "../lift-plan/request";
 import { SURFACES } from "../rules/push";
-import { couplingSchema, reachSchema, sexSchema, zoneSchema } from "../rules/request";
+import { conditionsSchema, couplingSchema, reachSchema, sexSchema, zoneSchema } from "../rules/request";
 
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
 const num = (min: number, max: number, label = "a number") =>
@@ -78,6 +78,8 @@ export const taskSchema = z.object({
   filter: filterInputsSchema.optional(),
   push: pushInputsSchema.optional(),
   lift: liftPlanInputsSchema.optional(),
+  /** The working environment of a handling task (not a lift with equipment). */
+  conditions: conditionsSchema.optional(),
 });
 
 export const CONTROL_LEVELS = ["eliminate", "substitute", "engineering", "administrative", "ppe"] as const;

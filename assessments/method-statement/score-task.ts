@@ -75,6 +75,7 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           recoveryHours: n.recoveryHours,
           coupling: n.coupling,
           controlAtDestination: n.controlAtDestination,
+          conditions: task.conditions,
         };
       // One person: the filter takes the lift's own frequency and its largest twist.
       if (f)
@@ -87,11 +88,12 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           frequency: n ? n.frequency : f.frequency,
           twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg,
           teamSize: 1,
+          conditions: task.conditions,
         };
       break;
     }
     case "team-lift":
-      if (f) out.filter = { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load: load!, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize };
+      if (f) out.filter = { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load: load!, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize, conditions: task.conditions };
       break;
     case "carry":
       if (f)
@@ -106,6 +108,7 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           teamSize: f.teamSize,
           carryDistanceM: f.carryDistanceM,
           durationHours: f.durationHours,
+          conditions: task.conditions,
         };
       break;
     case "push": {
@@ -123,6 +126,7 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           surface: p.surface,
           braked: p.braked,
           brakeOperator: p.brakeOperator,
+          conditions: task.conditions,
         };
       break;
     }

@@ -13,6 +13,7 @@ import { BANDS, type Band } from "../rules/types";
 import { fmt } from "../rules/format";
 import { MAX_TEAM_SIZE } from "../rules/team";
 import { ZONES, type Zone } from "../rules/filter";
+import { CONDITION_TEXT, type Condition } from "../rules/conditions";
 import { MAX_ASYMMETRY_DEG, METRIC } from "../rules/niosh";
 import { PUSH_DISTANCE_LIMIT_M } from "../rules/push";
 import { checkExamination, type Examination } from "../lift-plan/examinations";
@@ -46,7 +47,11 @@ export type Change =
   | { kind: "sling-angle"; deg: number }
   | { kind: "examine" }
   | { kind: "wind"; ms: number }
-  | { kind: "radius"; m: number };
+  | { kind: "radius"; m: number }
+  | { kind: "condition"; condition: Condition };
+
+/** Changes of one variable share a key: a combination changes each variable once. */
+const changeKey = (c: Change) => (c.kind === "condition" ? `condition:${c.condition}` : c.kind === "h" || c.kind === "v" ? `${c.kind}:${c.end}` : c.kind);
 
 export interface Suggestion {
   change: Change;
@@ -159,6 +164,9 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
     case "radius":
       if (t.lift) t.lift = { ...t.lift, radiusM: change.m };
       break;
+    case "condition":
+      t.conditions = (t.conditions ?? []).filter((x) => x !== change.condition);
+      break;
   }
   return [t, c];
 }
@@ -203,6 +211,7 @@ function sizeOf(change: Change, task: Task, load: number): number {
     case "zone":
     case "brake":
     case "wind":
+    case "condition":
       return 0.3;
     case "wheel":
     case "level":
@@ -275,6 +284,8 @@ export function describeChange(change: Change, task: Task): string {
       return `Lift only when the wind is at most ${fmt(change.ms, 1)} m/s`;
     case "radius":
       return `A radius within the machine's maximum of ${fmt(change.m, 1)} m`;
+    case "condition":
+      return CONDITION_TEXT[change.condition].remedy;
   }
 }
 
@@ -284,6 +295,7 @@ const examinationOk = (e: Examination, liftDate: string) => checkExamination(e, 
 function candidates(task: Task, score: TaskScore): Change[][] {
   const lists: Change[][] = [];
   const { niosh, filter, push, lift } = score.results;
+  for (const condition of task.conditions ?? []) lists.push([{ kind: "condition", condition }]);
   const down = (from: number, to: number, steps: number) => Array.from({ length: steps }, (_, i) => from - ((from - to) * (i + 1)) / steps);
 
   if (task.quantity > 1) lists.push(Array.from({ length: task.quantity - 1 }, (_, i) => ({ kind: "quantity", quantity: task.quantity - 1 - i })));
@@ -424,7 +436,7 @@ function combine(task: Task, component: RegisterEntry | undefined, score: TaskSc
     let best: { list: Change[]; score: TaskScore } | null = null;
     for (const list of candidates(t, s)) {
       const strongest = list[list.length - 1];
-      if (chosen.some((x) => x.list[0].kind === strongest.kind)) continue;
+      if (chosen.some((x) => changeKey(x.list[0]) === changeKey(strongest))) continue;
       const next = rateTask(...applyChange(t, c, strongest));
       if (next.band !== null && lower(pressure(next), pressure(best?.score ?? s))) best = { list, score: next };
     }

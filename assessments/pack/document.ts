@@ -9,6 +9,7 @@ import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
 import { HITCH_LABELS, SINGLE_SLING_HITCHES } from "../lift-plan/sling";
 import { DURATION_LABELS } from "../rules/niosh-frequency";
+import { CONDITION_TEXT } from "../rules/conditions";
 import { gradientText, SURFACE_LABELS } from "../rules/push";
 import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
@@ -130,6 +131,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     w.y -= 22;
     if (s.load !== null) w.pairs([["Load", `${fmt(s.load)} kg${task.quantity > 1 ? ` (${task.quantity} × ${input.componentNames[task.componentId!] ?? "component"})` : ""}${s.estimatedMass ? " — ESTIMATED MASS: confirm by weighing" : ""}`]]);
     const { niosh, filter, push, lift } = s.results;
+    if (task.conditions?.length) w.pairs([["Working conditions", task.conditions.map((c) => CONDITION_TEXT[c].label).join("; ")]]);
     if (niosh) {
       w.heading("Revised NIOSH Lifting Equation", 3);
       const o = niosh.inputs.origin;

@@ -6,6 +6,7 @@
  * read in a reproduction of the published table; women's are recalled from memory (REFERENCES.md §2).
  */
 import { bandForIndex, GUIDELINE_THRESHOLDS, worstBand } from "./bands";
+import { applyConditions, type Condition } from "./conditions";
 import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import { MAX_TEAM_SIZE, teamCapacity, teamFactor } from "./team";
@@ -116,6 +117,8 @@ export interface FilterRequest {
   carryDistanceM?: number;
   /** Hours spent on this task in the shift, for the cumulative mass of a carry (default: a full 8 h shift). */
   durationHours?: number;
+  /** Working conditions present: each lifts the band to at least Watch. */
+  conditions?: Condition[];
 }
 
 export interface FilterResult extends ResultBase {
@@ -245,6 +248,8 @@ export function scoreFilter(req: FilterRequest): FilterResult {
       });
     }
   }
+
+  applyConditions(req.conditions, floors, reasons);
 
   return {
     method: "filter",

@@ -10,7 +10,8 @@
  * either end (with or without control at the destination), a travel beyond the range, or an FM of 0
  * leaves no index, and the band is `stop` with each cause named.
  */
-import { bandForIndex, NIOSH_THRESHOLDS } from "./bands";
+import { bandForIndex, NIOSH_THRESHOLDS, worstBand } from "./bands";
+import { applyConditions, type Condition } from "./conditions";
 import {
   DURATION_LABELS,
   durationBand,
@@ -48,6 +49,8 @@ export interface NioshRequest {
   recoveryHours?: number;
   coupling: Coupling;
   controlAtDestination: boolean;
+  /** Working conditions present: each lifts the band to at least Watch. */
+  conditions?: Condition[];
 }
 
 export interface NioshEndResult {
@@ -284,7 +287,10 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
   // Otherwise the larger index governs.
   const governing = destination && destination.li !== null && origin.li !== null && destination.li > origin.li ? destination : origin;
   const li = judgeable ? governing.li : null;
-  const band = bandForIndex(li, NIOSH_THRESHOLDS);
+  const reasons = judgeable ? nioshReasons(li!, bandForIndex(li, NIOSH_THRESHOLDS), governing, governing === destination, u, req.load) : outOfRangeReasons(warnings);
+  const floors: Band[] = [bandForIndex(li, NIOSH_THRESHOLDS)];
+  applyConditions(req.conditions, floors, reasons);
+  const band = worstBand(floors);
 
   return {
     method: "niosh",
@@ -296,7 +302,7 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
     index: li,
     limit: judgeable ? governing.rwl : 0,
     band,
-    reasons: judgeable ? nioshReasons(li!, band, governing, governing === destination, u, req.load) : outOfRangeReasons(warnings),
+    reasons,
     warnings,
     rulesVersion: RULES_VERSION,
   };

@@ -24,6 +24,7 @@
  * - a trolley's use on the line follows the infrastructure manager's rules, which this does not replace.
  */
 import { bandForIndex, GUIDELINE_THRESHOLDS, worstBand } from "./bands";
+import { applyConditions, type Condition } from "./conditions";
 import { fmt } from "./format";
 import { SOURCES } from "./sources";
 import { MAX_TEAM_SIZE, teamCapacity } from "./team";
@@ -82,6 +83,8 @@ export interface PushRequest {
   braked?: boolean;
   /** Who works the brake, when the load is braked. */
   brakeOperator?: string;
+  /** Working conditions present: each lifts the band to at least Watch. */
+  conditions?: Condition[];
 }
 
 export interface PushResult extends ResultBase {
@@ -194,6 +197,7 @@ export function scorePush(req: PushRequest): PushResult {
       message: `Pushed ${fmt(req.distanceM)} m: beyond about ${PUSH_DISTANCE_LIMIT_M} m without a break the guideline forces do not hold. Assess in more detail and plan rests.`,
     });
   }
+  applyConditions(req.conditions, floors, reasons);
   if (req.rollingCoefficient !== undefined && !measured)
     warnings.push({
       field: "rollingCoefficient",

@@ -7,6 +7,7 @@ import { z } from "zod";
 import { MAX_COMPOSITE_TASKS, MIN_COMPOSITE_TASKS } from "./niosh-composite";
 import { ZONES } from "./filter";
 import { SURFACES } from "./push";
+import { CONDITIONS } from "./conditions";
 import { liftRequestSchema } from "../lift-plan/request";
 
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
@@ -23,6 +24,12 @@ const teamSize = () => z.number().int("must be a whole number").min(1, "must be 
 const durationHours = () => positive().refine((x) => x <= 24, "must be at most 24 hours");
 
 /** V may be negative: hands below the standing surface (an excavation), which the equation cannot judge. */
+/** Working conditions present; each at most once. */
+export const conditionsSchema = z
+  .array(z.enum(CONDITIONS, { error: `must be one of ${CONDITIONS.join(", ")}` }))
+  .max(CONDITIONS.length)
+  .refine((c) => new Set(c).size === c.length, "each condition once");
+
 export const handPositionSchema = z.strictObject({
   h: nonNegative(),
   v: finite().refine((v) => v >= -500, "must be at most 500 below the standing surface"),
@@ -40,6 +47,7 @@ export const nioshRequestSchema = z.strictObject({
   recoveryHours: nonNegative().refine((x) => x <= 24, "must be at most 24 hours").optional(),
   coupling: couplingSchema,
   controlAtDestination: z.boolean(),
+  conditions: conditionsSchema.optional(),
 });
 
 export const compositeTaskSchema = z.strictObject({
@@ -75,6 +83,7 @@ export const filterRequestSchema = z.strictObject({
   teamSize: teamSize(),
   carryDistanceM: nonNegative().optional(),
   durationHours: durationHours().optional(),
+  conditions: conditionsSchema.optional(),
 });
 
 export const pushRequestSchema = z.strictObject({
@@ -89,6 +98,7 @@ export const pushRequestSchema = z.strictObject({
   surface: z.enum(SURFACES).optional(),
   braked: z.boolean().optional(),
   brakeOperator: z.string().trim().max(120).optional(),
+  conditions: conditionsSchema.optional(),
 });
 
 export const scoreRequestSchema = z.discriminatedUnion("method", [

@@ -46,6 +46,32 @@ describe("POST /api/v1/score", () => {
     expect((await res.json()).error).toMatchObject({ code: "validation", issues: [{ path: "load" }] });
   });
 
+  it("accepts the lineside contract: conditions, a trolley's surface and brake, hands below the standing surface", async () => {
+    const res = await post(
+      JSON.stringify([
+        { ...filter, zone: "below-standing-level", conditions: ["uneven-ground", "poor-light"] },
+        { method: "push", mass: 300, gradient: -0.005, sex: "male", teamSize: 2, surface: "rail", braked: false },
+        { method: "niosh", units: "metric", load: 10, origin: { h: 30, v: -40, a: 0 }, destination: { h: 30, v: 60, a: 0 }, frequency: 0.2, durationHours: 1, recoveryHours: 2, coupling: "fair", controlAtDestination: true, conditions: ["wind-on-panels"] },
+      ]),
+    );
+    expect(res.status).toBe(200);
+    const [below, trolley, excavation] = await res.json();
+    expect(below.band).not.toBe("clear");
+    expect(trolley.band).toBe("stop");
+    expect(trolley.runsAway).toBe(true);
+    expect(excavation.li).toBeNull();
+    expect(excavation.band).toBe("stop");
+  });
+
+  it("an unknown condition or surface answers 422 naming the field", async () => {
+    const res = await post(JSON.stringify([{ ...filter, conditions: ["fog"] }, { method: "push", mass: 300, gradient: 0, sex: "male", teamSize: 1, surface: "ice" }]));
+    expect(res.status).toBe(422);
+    const [a, b] = await res.json();
+    expect(a.error.issues[0].path).toBe("conditions.0");
+    expect(a.error.issues[0].message).toContain("uneven-ground");
+    expect(b.error.issues[0].path).toBe("surface");
+  });
+
   it("malformed JSON answers 400, another content type 415, an oversize body 413", async () => {
     expect((await post("{oops")).status).toBe(400);
     expect((await post(JSON.stringify(filter), "text/plain")).status).toBe(415);

@@ -279,3 +279,21 @@ describe("what-if lines for the pack and the briefing", () => {
     expect(whatIfLines(scoreTask(task, part).whatIf)).toEqual([]);
   });
 });
+
+describe("working conditions (HSE L23: the working environment is part of every assessment; at least Watch: Heftwise policy)", () => {
+  it("each condition present lifts a Clear lift to Watch, with a reason naming it and its controls", () => {
+    const clear = scoreNiosh(lift());
+    expect(clear.band).toBe("clear");
+    const r = scoreNiosh(lift({ conditions: ["uneven-ground", "poor-light"] }));
+    expect(r.band).toBe("watch");
+    expect(r.reasons.some((x) => x.text.includes("uneven or unstable ground") && x.text.includes("walkway boards"))).toBe(true);
+    expect(r.reasons.some((x) => x.text.includes("poor light") && x.text.includes("lighting"))).toBe(true);
+  });
+  it("the what-if offers each condition's remedy, re-scored", () => {
+    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Kit", massKg: 6, grip: "good" as const, massSource: "datasheet" as const };
+    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", conditions: ["wind-on-panels"], filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 5, durationHours: 1 } };
+    const s = scoreTask(task, part);
+    expect(s.band).toBe("watch");
+    expect(s.whatIf!.suggestions[0]).toMatchObject({ change: { kind: "condition", condition: "wind-on-panels" }, band: "clear" });
+  });
+});

@@ -16,6 +16,7 @@ import { scoreComposite, type CompositeRequest } from "@/assessments/rules/niosh
 import { scorePush, SURFACES, type PushRequest } from "@/assessments/rules/push";
 import { scoreLift, type LiftRequest } from "@/assessments/lift-plan/lift";
 import { HITCHES } from "@/assessments/lift-plan/sling";
+import { CONDITIONS, type Condition } from "@/assessments/rules/conditions";
 import { rateTask, scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { applyChange } from "@/assessments/method-statement/what-if";
 import { taskSchema, type Task } from "@/assessments/method-statement/content";
@@ -27,6 +28,7 @@ const coupling = fc.constantFrom("good" as const, "fair" as const, "poor" as con
 const sex = fc.constantFrom("male" as const, "female" as const);
 // Hand positions reach beyond the equation on every side: H past 63 cm, V below 0 and above 175 cm, twist past 135°.
 const position = fc.record({ h: num(0, 80), v: num(-60, 200), a: num(0, 180) });
+const conditions = fc.option(fc.subarray([...CONDITIONS]), { nil: undefined });
 
 const niosh: fc.Arbitrary<NioshRequest> = fc.record({
   method: fc.constant("niosh" as const),
@@ -39,6 +41,7 @@ const niosh: fc.Arbitrary<NioshRequest> = fc.record({
   recoveryHours: fc.option(num(0, 6), { nil: undefined }),
   coupling,
   controlAtDestination: fc.boolean(),
+  conditions,
 });
 const filter: fc.Arbitrary<FilterRequest> = fc.record({
   method: fc.constant("filter" as const),
@@ -51,6 +54,7 @@ const filter: fc.Arbitrary<FilterRequest> = fc.record({
   teamSize: fc.integer({ min: 1, max: 6 }),
   carryDistanceM: fc.option(num(0, 80), { nil: undefined }),
   durationHours: fc.option(num(0.1, 10), { nil: undefined }),
+  conditions,
 });
 const push: fc.Arbitrary<PushRequest> = fc.record({
   method: fc.constant("push" as const),
@@ -64,6 +68,7 @@ const push: fc.Arbitrary<PushRequest> = fc.record({
   surface: fc.option(fc.constantFrom(...SURFACES), { nil: undefined }),
   braked: fc.option(fc.boolean(), { nil: undefined }),
   brakeOperator: fc.option(fc.constantFrom("", "Ganger"), { nil: undefined }),
+  conditions,
 });
 const isoDay = (offset: number) => new Date(Date.UTC(2027, 0, 1) + offset * 86_400_000).toISOString().slice(0, 10);
 const lift: fc.Arbitrary<LiftRequest> = fc
@@ -143,6 +148,28 @@ describe("a worse input never gives a better band", () => {
     ));
 });
 
+describe("lineside: a deeper excavation or an added working condition never gives a better band", () => {
+  it("niosh: hands further below the standing surface at either end", () =>
+    fc.assert(
+      fc.property(niosh, num(0, 100), fc.boolean(), (r, deeper, atOrigin) => {
+        const end = atOrigin ? "origin" : "destination";
+        const below = { ...r, [end]: { ...r[end], v: -Math.abs(r[end].v) - 1 } };
+        notBetter(scoreNiosh({ ...below, [end]: { ...below[end], v: below[end].v - deeper } }).band, scoreNiosh(below).band);
+        expect(scoreNiosh(below).band).not.toBe("clear");
+      }),
+    ));
+  const add = (c: Condition[] | undefined, x: Condition) => [...new Set([...(c ?? []), x])];
+  it("each method: a condition added", () =>
+    fc.assert(
+      fc.property(niosh, filter, push, fc.constantFrom(...CONDITIONS), (n, f, p, c) => {
+        notBetter(scoreNiosh({ ...n, conditions: add(n.conditions, c) }).band, scoreNiosh(n).band);
+        notBetter(scoreFilter({ ...f, conditions: add(f.conditions, c) }).band, scoreFilter(f).band);
+        notBetter(scorePush({ ...p, conditions: add(p.conditions, c) }).band, scorePush(p).band);
+        expect(scoreFilter({ ...f, conditions: [c] }).band).not.toBe("clear");
+      }),
+    ));
+});
+
 describe("a result that says the method cannot judge the operation is never Clear", () => {
   const check = (r: { band: Band; warnings: { cannotJudge?: true }[] }) => {
     if (r.warnings.some((w) => w.cannotJudge)) expect(r.band).not.toBe("clear");
@@ -196,6 +223,7 @@ const task: fc.Arbitrary<Task> = fc
     push: push.map((p) => ({ ...p, method: undefined })),
     lift: lift.map((l) => ({ ...l, method: undefined, load: undefined })),
   })
+  .chain((x) => conditions.map((c) => ({ ...x, conditions: x.operation === "equipment" ? undefined : c })))
   .map((x) => ({
     id: "t1",
     description: "",
@@ -206,6 +234,7 @@ const task: fc.Arbitrary<Task> = fc
     filter: x.operation === "lift" || x.operation === "team-lift" || x.operation === "carry" ? x.filter : undefined,
     push: x.operation === "push" ? x.push : undefined,
     lift: x.operation === "equipment" ? x.lift : undefined,
+    conditions: x.conditions,
   }))
   .filter((t) => taskSchema.safeParse(t).success);
 

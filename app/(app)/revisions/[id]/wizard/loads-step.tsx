@@ -10,6 +10,7 @@ import { OPERATION_LABELS, OPERATIONS, taskSchema, type Content, type Operation,
 import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
 import { SURFACES } from "@/assessments/rules/push";
+import { CONDITION_TEXT, CONDITIONS } from "@/assessments/rules/conditions";
 import { Check, Choice, GradientField, Num, Text } from "./fields";
 import { WhatIfChart } from "./what-if-chart";
 
@@ -37,6 +38,25 @@ export function defaultsFor(operation: Operation, component: RegisterEntry | und
         lift: { riggingMass: 20, hookBlockMass: 15, ratedCapacity: 1000, sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" }, factors: {}, examinations: [], people: {} },
       };
   }
+}
+
+/** The working environment of the task: each condition ticked lifts it to at least Watch. */
+function ConditionsField({ name }: { name: `tasks.${number}.conditions` }) {
+  const { register } = useFormContext<Content>();
+  return (
+    <fieldset className="rounded border border-rule p-2">
+      <legend className="px-1 text-sm font-bold">Working conditions</legend>
+      <p className="text-xs text-muted">Tick each one present where the load is handled; each lifts the task to at least Watch, with its controls.</p>
+      <div className="mt-1 grid gap-1 sm:grid-cols-2">
+        {CONDITIONS.map((c) => (
+          <label key={c} className="flex items-center gap-2 text-sm">
+            <input type="checkbox" value={c} className="h-5 w-5" {...register(name)} />
+            {CONDITION_TEXT[c].label[0].toUpperCase() + CONDITION_TEXT[c].label.slice(1)}
+          </label>
+        ))}
+      </div>
+    </fieldset>
+  );
 }
 
 function TaskEditor({ index, register, revisionId, onRemove }: { index: number; register: RegisterEntry[]; revisionId: string; onRemove: () => void }) {
@@ -173,6 +193,7 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
               )}
             </fieldset>
           )}
+          {task.operation !== "equipment" && <ConditionsField name={`${p}.conditions`} />}
           {task.operation === "equipment" && (
             <p className="rounded border border-rule bg-white p-2 text-sm">
               A lift with equipment needs a lift plan.{" "}
