@@ -8,6 +8,7 @@ import { fmt } from "../rules/format";
 import type { Band, Reason, ResultBase, Warning } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
 import { checkExamination, type Examination, type ExaminationResult } from "./examinations";
+import { BEARING_MARGIN, checkGroundBearing, GROUND_SOURCE, GROUND_TYPES, type GroundBearing, type GroundBearingResult } from "./ground";
 import { CHOKE_FACTOR, HITCH_LABELS, legsSharing, legTension, modeFactor, SINGLE_SLING_HITCHES, type Hitch } from "./sling";
 
 export const LIFT_SOURCES = {
@@ -62,6 +63,19 @@ export interface LiftRequest {
   people?: Partial<Record<"appointedPerson" | "liftSupervisor" | "operator" | "slingerSignaller", Person>>;
   exclusionZoneM?: number;
   groundBearingNotes?: string;
+  /** Outrigger force on its mat and the ground under it. */
+  groundBearing?: GroundBearing;
+  /** Shackles, lifting beams, rail clamps and the like, each checked against what it carries. */
+  accessories?: Accessory[];
+}
+
+export const ACCESSORY_KINDS = ["shackle", "lifting-beam", "spreader", "rail-clamp", "eyebolt", "other"] as const;
+export interface Accessory {
+  item: string;
+  kind: (typeof ACCESSORY_KINDS)[number];
+  wllKg: number;
+  /** "whole-load": at the hook or under it (the sling load); "one-leg": in one leg (the leg tension). */
+  carries: "whole-load" | "one-leg";
 }
 
 export interface LiftResult extends ResultBase {
@@ -84,6 +98,10 @@ export interface LiftResult extends ResultBase {
   examinations: ExaminationResult[];
   /** What must be added before the plan can be approved. */
   missing: string[];
+  ground: GroundBearingResult | null;
+  /** Pressure under the outrigger mat (kPa), when the ground bearing is entered. */
+  groundPressureKpa: number | null;
+  accessoryChecks: { item: string; carriesKg: number; wllKg: number; ok: boolean }[];
   limit: number;
   index: number;
 }
@@ -183,6 +201,55 @@ export function scoreLift(req: LiftRequest): LiftResult {
     reasons.push({ text: `Wind: forecast ${fmt(req.wind.forecastMs, 1)} m/s against the maker's in-service limit of ${fmt(req.wind.inServiceLimitMs, 1)} m/s.`, source: LIFT_SOURCES.bs7121 });
   }
 
+  // Ground bearing under the outrigger mat
+  const ground = req.groundBearing ? checkGroundBearing(req.groundBearing) : null;
+  if (req.groundBearing && ground) {
+    const g = req.groundBearing;
+    const type = g.ground ? GROUND_TYPES[g.ground] : null;
+    if (ground.allowableKpa === null) {
+      bands.push("stop");
+      warnings.push({
+        field: "groundBearing.allowableKpa",
+        message: `No presumed bearing value for ${type?.label ?? "this ground"} (${type?.range ?? "not stated"}): enter an allowable bearing pressure from a ground investigation, or improve the ground. The ground cannot be judged without it.`,
+        cannotJudge: true,
+      });
+    } else {
+      const ratio = ground.ratio!;
+      bands.push(ratio <= BEARING_MARGIN ? "clear" : ratio <= 1 ? "watch" : "stop");
+      if (ratio > 1)
+        warnings.push({ field: "groundBearing.matLengthM", message: `Ground pressure ${fmt(ground.pressureKpa, 0)} kPa exceeds the allowable ${fmt(ground.allowableKpa, 0)} kPa: use mats of at least ${fmt(ground.smallestSquareMatM!, 2)} m × ${fmt(ground.smallestSquareMatM!, 2)} m, or improve the ground.` });
+      else if (ratio > BEARING_MARGIN)
+        warnings.push({ field: "groundBearing.matLengthM", message: `Ground pressure is ${fmt(ratio * 100, 0)} % of the allowable: little margin. Set the mats level on firm ground with no voids, or use larger mats.` });
+      if (g.allowableKpa !== undefined && type && type.presumedKpa !== null && g.allowableKpa > type.presumedKpa * 2)
+        warnings.push({ field: "groundBearing.allowableKpa", message: `The allowable ${fmt(g.allowableKpa, 0)} kPa entered is well above the presumed value for ${type.label} (${type.range}): keep the ground investigation that supports it with the plan.` });
+    }
+    reasons.push({
+      text: `Outrigger force ${fmt(g.outriggerForceKn, 1)} kN on a ${fmt(g.matLengthM, 2)} m × ${fmt(g.matWidthM, 2)} m mat: ${fmt(ground.pressureKpa, 0)} kPa${
+        ground.allowableKpa !== null
+          ? ` against an allowable ${fmt(ground.allowableKpa, 0)} kPa (${ground.allowableFrom === "entered" ? "entered by the planner" : `presumed for ${type!.label}`}); the smallest square mat within it is ${fmt(ground.smallestSquareMatM!, 2)} m`
+          : ""
+      }.`,
+      source: `${ground.allowableFrom === "presumed" ? GROUND_SOURCE : "Pressure = force ÷ mat area (mechanics); allowable entered by the planner"}; bands: ${LIFT_SOURCES.policy}`,
+    });
+  }
+
+  // Accessories, each against what it carries
+  const accessoryChecks = (req.accessories ?? []).map((a) => {
+    const carriesKg = a.carries === "whole-load" ? slingLoad : tension;
+    return { item: a.item, carriesKg, wllKg: a.wllKg, ok: carriesKg <= a.wllKg };
+  });
+  accessoryChecks.forEach((a, i) => {
+    if (!a.ok) {
+      bands.push("stop");
+      warnings.push({ field: `accessories.${i}.wllKg`, message: `${a.item} carries ${fmt(a.carriesKg, 0)} kg, above its working load limit of ${fmt(a.wllKg, 0)} kg.` });
+    }
+  });
+  if (accessoryChecks.length)
+    reasons.push({
+      text: `Accessories: ${accessoryChecks.map((a) => `${a.item} carries ${fmt(a.carriesKg, 0)} kg of its ${fmt(a.wllKg, 0)} kg WLL${a.ok ? "" : " — OVER"}`).join("; ")}.`,
+      source: LIFT_SOURCES.bs7121,
+    });
+
   // Category
   const categoryReasons: string[] = (Object.keys(COMPLEX_FACTORS) as ComplexFactor[]).filter((f) => req.factors?.[f]).map((f) => COMPLEX_FACTORS[f]);
   if (utilisation > UTILISATION.complexAbove) categoryReasons.push(`utilisation above ${fmt(UTILISATION.complexAbove * 100, 0)} % of rated capacity`);
@@ -209,6 +276,7 @@ export function scoreLift(req: LiftRequest): LiftResult {
     warnings.push({ field: "liftDate", message: "No lift date: thorough examinations cannot be checked." });
   if (!req.examinations?.length) missing.push("thorough examination records");
   if (marked === undefined) missing.push("working load limit marked on the sling assembly");
+  if (!req.groundBearing) missing.push("ground bearing check (outrigger force and mat size)");
 
   return {
     method: "lift",
@@ -226,6 +294,9 @@ export function scoreLift(req: LiftRequest): LiftResult {
     categoryReasons,
     examinations,
     missing,
+    ground,
+    groundPressureKpa: ground?.pressureKpa ?? null,
+    accessoryChecks,
     limit: req.ratedCapacity,
     index: utilisation,
     band: worstBand(bands),

@@ -1,6 +1,7 @@
 /** The one zod schema for a lift plan, shared by the scoring CLI and API, the lift-plan form and the server. */
 import { z } from "zod";
-import { COMPLEX_FACTORS, type ComplexFactor } from "./lift";
+import { ACCESSORY_KINDS, COMPLEX_FACTORS, type ComplexFactor } from "./lift";
+import { GROUND_TYPE_KEYS } from "./ground";
 import { HITCHES, MAX_SLING_ANGLE_DEG, SINGLE_SLING_HITCHES } from "./sling";
 
 const finite = () => z.number({ error: "must be a number" }).refine(Number.isFinite, "must be a finite number");
@@ -58,4 +59,25 @@ export const liftRequestSchema = z
       .optional(),
     exclusionZoneM: mass().optional(),
     groundBearingNotes: z.string().max(2000).optional(),
+    groundBearing: z
+      .strictObject({
+        outriggerForceKn: positive(),
+        matLengthM: positive(),
+        matWidthM: positive(),
+        allowableKpa: positive().optional(),
+        ground: z.enum(GROUND_TYPE_KEYS, { error: "choose a ground type from the table" }).optional(),
+      })
+      .refine((g) => g.allowableKpa !== undefined || g.ground !== undefined, { path: ["allowableKpa"], message: "enter the allowable bearing pressure, or choose the ground type" })
+      .optional(),
+    accessories: z
+      .array(
+        z.strictObject({
+          item: z.string().trim().min(1, "name the accessory").max(160),
+          kind: z.enum(ACCESSORY_KINDS),
+          wllKg: positive(),
+          carries: z.enum(["whole-load", "one-leg"]),
+        }),
+      )
+      .max(20)
+      .optional(),
   });

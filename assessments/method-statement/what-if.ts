@@ -18,6 +18,7 @@ import { MAX_ASYMMETRY_DEG, METRIC } from "../rules/niosh";
 import { PUSH_DISTANCE_LIMIT_M } from "../rules/push";
 import { checkExamination, type Examination } from "../lift-plan/examinations";
 import { UTILISATION, WIND_MARGIN } from "../lift-plan/lift";
+import { BEARING_MARGIN } from "../lift-plan/ground";
 import type { Task } from "./content";
 import { rateTask, type RegisterEntry, type TaskScore } from "./score-task";
 
@@ -48,10 +49,13 @@ export type Change =
   | { kind: "examine" }
   | { kind: "wind"; ms: number }
   | { kind: "radius"; m: number }
-  | { kind: "condition"; condition: Condition };
+  | { kind: "condition"; condition: Condition }
+  | { kind: "mat"; m: number }
+  | { kind: "accessory"; index: number; kg: number };
 
 /** Changes of one variable share a key: a combination changes each variable once. */
-const changeKey = (c: Change) => (c.kind === "condition" ? `condition:${c.condition}` : c.kind === "h" || c.kind === "v" ? `${c.kind}:${c.end}` : c.kind);
+const changeKey = (c: Change) =>
+  c.kind === "condition" ? `condition:${c.condition}` : c.kind === "h" || c.kind === "v" ? `${c.kind}:${c.end}` : c.kind === "accessory" ? `accessory:${c.index}` : c.kind;
 
 export interface Suggestion {
   change: Change;
@@ -167,6 +171,12 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
     case "condition":
       t.conditions = (t.conditions ?? []).filter((x) => x !== change.condition);
       break;
+    case "mat":
+      if (t.lift?.groundBearing) t.lift = { ...t.lift, groundBearing: { ...t.lift.groundBearing, matLengthM: change.m, matWidthM: change.m } };
+      break;
+    case "accessory":
+      if (t.lift?.accessories) t.lift = { ...t.lift, accessories: t.lift.accessories.map((a, i) => (i === change.index ? { ...a, wllKg: change.kg } : a)) };
+      break;
   }
   return [t, c];
 }
@@ -212,6 +222,8 @@ function sizeOf(change: Change, task: Task, load: number): number {
     case "brake":
     case "wind":
     case "condition":
+    case "mat":
+    case "accessory":
       return 0.3;
     case "wheel":
     case "level":
@@ -286,6 +298,10 @@ export function describeChange(change: Change, task: Task): string {
       return `A radius within the machine's maximum of ${fmt(change.m, 1)} m`;
     case "condition":
       return CONDITION_TEXT[change.condition].remedy;
+    case "mat":
+      return `Outrigger mats of at least ${fmt(change.m, 2)} m × ${fmt(change.m, 2)} m`;
+    case "accessory":
+      return `${task.lift?.accessories?.[change.index]?.item ?? "The accessory"}: one rated at least ${fmt(change.kg, 0)} kg`;
   }
 }
 
@@ -362,6 +378,12 @@ function candidates(task: Task, score: TaskScore): Change[][] {
     if (lift.examinations.some((e) => e.status !== "in-date")) lists.push([{ kind: "examine" }]);
     if (l.wind && l.wind.forecastMs > l.wind.inServiceLimitMs * WIND_MARGIN) lists.push([{ kind: "wind", ms: Math.floor(l.wind.inServiceLimitMs * WIND_MARGIN * 10) / 10 }]);
     if (l.radiusM !== undefined && l.maxRadiusM !== undefined && l.radiusM > l.maxRadiusM) lists.push([{ kind: "radius", m: l.maxRadiusM }]);
+    const g = lift.ground;
+    if (g && l.groundBearing && g.allowableKpa && g.ratio! > BEARING_MARGIN)
+      lists.push([{ kind: "mat", m: Math.ceil(Math.sqrt(l.groundBearing.outriggerForceKn / (g.allowableKpa * BEARING_MARGIN)) * 20) / 20 }]);
+    lift.accessoryChecks.forEach((a, index) => {
+      if (!a.ok) lists.push([{ kind: "accessory", index, kg: Math.ceil(a.carriesKg / 10) * 10 }]);
+    });
   }
   return lists.filter((list) => list.length > 0);
 }

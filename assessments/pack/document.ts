@@ -8,6 +8,7 @@ import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
 import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
 import { HITCH_LABELS, SINGLE_SLING_HITCHES } from "../lift-plan/sling";
+import { GROUND_TYPES } from "../lift-plan/ground";
 import { DURATION_LABELS } from "../rules/niosh-frequency";
 import { CONDITION_TEXT } from "../rules/conditions";
 import { gradientText, SURFACE_LABELS } from "../rules/push";
@@ -307,7 +308,14 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
     ...lift.examinations.map((e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string]),
     ["Wind", lift.inputs.wind ? `forecast ${fmt(lift.inputs.wind.forecastMs, 1)} m/s, limit ${fmt(lift.inputs.wind.inServiceLimitMs, 1)} m/s` : "—"],
     ["Exclusion zone", exclusionZoneM !== undefined ? `${fmt(exclusionZoneM, 1)} m radius` : "—"],
-    ["Ground bearing", groundNotes || "—"],
+    [
+      "Ground bearing",
+      lift.ground
+        ? `${fmt(lift.ground.pressureKpa, 0)} kPa under a ${fmt(lift.inputs.groundBearing!.matLengthM, 2)} m × ${fmt(lift.inputs.groundBearing!.matWidthM, 2)} m mat (${fmt(lift.inputs.groundBearing!.outriggerForceKn, 1)} kN); allowable ${lift.ground.allowableKpa === null ? "none: not judged" : `${fmt(lift.ground.allowableKpa, 0)} kPa (${lift.ground.allowableFrom === "entered" ? "entered" : `presumed, ${GROUND_TYPES[lift.inputs.groundBearing!.ground!].label}`})`}`
+        : "— not checked",
+    ],
+    ["Ground notes", groundNotes || "—"],
+    ...lift.accessoryChecks.map((a) => [`Accessory: ${a.item}`, `carries ${fmt(a.carriesKg, 0)} kg of ${fmt(a.wllKg, 0)} kg WLL — ${a.ok ? "passes" : "FAILS"}`] as [string, string]),
     ["Appointed person", people.appointedPerson ? `${people.appointedPerson.name} (${people.appointedPerson.competenceRef})` : "—"],
     ["Lift supervisor", people.liftSupervisor ? `${people.liftSupervisor.name} (${people.liftSupervisor.competenceRef})` : "—"],
     ["Operator", people.operator ? `${people.operator.name} (${people.operator.competenceRef})` : "—"],

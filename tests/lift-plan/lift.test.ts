@@ -54,6 +54,7 @@ const plan = (over: Partial<LiftRequest> = {}): LiftRequest => ({
   radiusM: 6,
   maxRadiusM: 9,
   sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 1000, markedWll: 2100 },
+  groundBearing: { outriggerForceKn: 100, matLengthM: 1.2, matWidthM: 1.2, ground: "stiff-clay" },
   liftDate: "2027-03-10",
   examinations: [
     { item: "Lorry-loader crane", kind: "equipment", lastExamined: "2026-09-01" },

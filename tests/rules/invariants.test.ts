@@ -16,6 +16,7 @@ import { scoreComposite, type CompositeRequest } from "@/assessments/rules/niosh
 import { scorePush, SURFACES, type PushRequest } from "@/assessments/rules/push";
 import { scoreLift, type LiftRequest } from "@/assessments/lift-plan/lift";
 import { HITCHES } from "@/assessments/lift-plan/sling";
+import { GROUND_TYPE_KEYS } from "@/assessments/lift-plan/ground";
 import { CONDITIONS, type Condition } from "@/assessments/rules/conditions";
 import { rateTask, scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { applyChange } from "@/assessments/method-statement/what-if";
@@ -84,6 +85,11 @@ const lift: fc.Arbitrary<LiftRequest> = fc
     markedWll: fc.option(num(100, 10_000), { nil: undefined }),
     examinedOffset: fc.option(fc.integer({ min: -500, max: 30 }), { nil: undefined }),
     wind: fc.option(fc.record({ inServiceLimitMs: num(5, 20), forecastMs: num(0, 25) }), { nil: undefined }),
+    groundBearing: fc.option(
+      fc.record({ outriggerForceKn: num(5, 300), matLengthM: num(0.3, 2.5), matWidthM: num(0.3, 2.5), ground: fc.constantFrom(...GROUND_TYPE_KEYS), allowableKpa: fc.option(num(30, 800), { nil: undefined }) }),
+      { nil: undefined },
+    ),
+    accessoryWll: fc.option(num(50, 6000), { nil: undefined }),
   })
   .map((x) => ({
     method: "lift" as const,
@@ -95,6 +101,8 @@ const lift: fc.Arbitrary<LiftRequest> = fc
     liftDate: isoDay(0),
     examinations: x.examinedOffset === undefined ? [] : [{ item: "Crane", kind: "equipment" as const, lastExamined: isoDay(x.examinedOffset) }],
     wind: x.wind,
+    groundBearing: x.groundBearing,
+    accessories: x.accessoryWll === undefined ? undefined : [{ item: "Shackle", kind: "shackle" as const, wllKg: x.accessoryWll, carries: "whole-load" as const }],
   }));
 
 describe("a worse input never gives a better band", () => {

@@ -166,6 +166,9 @@ export function TaskResult({ score }: { score: TaskScore }) {
               ["Leg tension (kg)", f(lift.legTension)],
               ["Sling rated (kg)", `${f(lift.slingWll)} ${lift.slingOk ? "— passes" : "— FAILS"}`],
               ...(lift.inputs.sling.markedWll !== undefined && lift.computedSlingWll !== lift.slingWll ? ([["Computed, above the marked limit (kg)", f(lift.computedSlingWll)]] as [string, string][]) : []),
+              ...(lift.ground
+                ? ([["Ground pressure (kPa)", `${f(lift.ground.pressureKpa, 0)} of ${lift.ground.allowableKpa === null ? "— (no allowable value)" : f(lift.ground.allowableKpa, 0)}`]] as [string, string][])
+                : []),
             ]}
           />
           <Reasons reasons={lift.reasons} warnings={lift.warnings} />

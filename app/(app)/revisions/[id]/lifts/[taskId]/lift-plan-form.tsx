@@ -11,7 +11,8 @@ import { ResultPending, TaskResult } from "@/app/_components/results/task-result
 import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
 import { errorAt } from "../../wizard/fields";
 import { scoreTask } from "@/assessments/method-statement/score-task";
-import { COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
+import { ACCESSORY_KINDS, COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
+import { GROUND_TYPE_KEYS, GROUND_TYPES } from "@/assessments/lift-plan/ground";
 import { HITCH_LABELS, HITCHES } from "@/assessments/lift-plan/sling";
 
 type Plan = z.infer<typeof liftPlanInputsSchema>;
@@ -41,6 +42,7 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
     mode: "onChange",
   });
   const exams = useFieldArray({ control, name: "examinations" });
+  const accessories = useFieldArray({ control, name: "accessories" });
   const plan = useWatch({ control }) as Plan;
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
 
@@ -194,7 +196,76 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
             </div>
           ))}
         </fieldset>
-        <div className="rounded-lg border border-rule bg-white p-3">{text("groundBearingNotes", "Ground bearing and outrigger notes")}</div>
+        <fieldset className="grid grid-cols-2 gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-3">
+          <legend className="px-1 font-bold">Ground bearing under the outrigger mats</legend>
+          {num("groundBearing.outriggerForceKn", "Maximum outrigger force", "kN, maker's figure")}
+          {num("groundBearing.matLengthM", "Mat length", "m")}
+          {num("groundBearing.matWidthM", "Mat width", "m")}
+          <div>
+            <label htmlFor="lp-ground" className="block text-sm font-bold">
+              Ground
+            </label>
+            <select
+              id="lp-ground"
+              disabled={!editable}
+              className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+              {...register("groundBearing.ground", { setValueAs: (v: string) => (v === "" ? undefined : v) })}
+            >
+              <option value="">Not from the table</option>
+              {GROUND_TYPE_KEYS.map((g) => (
+                <option key={g} value={g}>
+                  {GROUND_TYPES[g].label} ({GROUND_TYPES[g].range})
+                </option>
+              ))}
+            </select>
+          </div>
+          {num("groundBearing.allowableKpa", "Allowable bearing pressure", "kPa, optional", true)}
+          <p className="col-span-2 text-xs text-muted sm:col-span-3">
+            An allowable pressure from a ground investigation governs; otherwise the presumed value for the ground type (BS 8004:1986 Table 1, withdrawn; lower end of each
+            range) is used. Loose and soft ground has no presumed value.
+          </p>
+          <div className="col-span-2 sm:col-span-3">{text("groundBearingNotes", "Ground and outrigger notes")}</div>
+        </fieldset>
+        <fieldset className="space-y-2 rounded-lg border border-rule bg-white p-3">
+          <legend className="px-1 font-bold">Accessories (shackles, lifting beams, rail clamps)</legend>
+          {accessories.fields.map((field, i) => (
+            <div key={field.id} className="grid items-end gap-2 sm:grid-cols-[1fr_9rem_8rem_10rem_auto]">
+              {text(`accessories.${i}.item`, "Item")}
+              <div>
+                <label htmlFor={`lp-acc-kind-${i}`} className="block text-sm font-bold">
+                  Kind
+                </label>
+                <select id={`lp-acc-kind-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`accessories.${i}.kind`)}>
+                  {ACCESSORY_KINDS.map((k) => (
+                    <option key={k} value={k}>
+                      {k.replace(/-/g, " ")}
+                    </option>
+                  ))}
+                </select>
+              </div>
+              {num(`accessories.${i}.wllKg`, "WLL", "kg")}
+              <div>
+                <label htmlFor={`lp-acc-carries-${i}`} className="block text-sm font-bold">
+                  Carries
+                </label>
+                <select id={`lp-acc-carries-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`accessories.${i}.carries`)}>
+                  <option value="whole-load">The whole load</option>
+                  <option value="one-leg">One leg</option>
+                </select>
+              </div>
+              {editable && (
+                <SecondaryButton type="button" aria-label={`Remove accessory ${i + 1}`} onClick={() => accessories.remove(i)}>
+                  ✕
+                </SecondaryButton>
+              )}
+            </div>
+          ))}
+          {editable && (
+            <SecondaryButton type="button" onClick={() => accessories.append({ item: "", kind: "shackle", wllKg: Number.NaN, carries: "one-leg" })}>
+              Add an accessory
+            </SecondaryButton>
+          )}
+        </fieldset>
         {outcome && <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>}
         {editable && (
           <PrimaryButton type="submit" disabled={formState.isSubmitting}>
