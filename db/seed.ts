@@ -65,6 +65,8 @@ async function seedDemoAssessments(organisationId: string) {
   ];
   await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
   await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base by hand at Carrowby", templateId: "equipment-base" });
+  // The lineside methods at work: a braked trolley on the down gradient, parts passed into an excavation, ground bearing.
+  await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base and cable chamber at Carrowby", templateId: "lineside-base" });
 
   // An approved revision for the foreman to brief from, at Hollin Vale (approved without e-mails).
   const { submitRevision, approveRevision } = await import("@/assessments/revisions/approval");

@@ -3,7 +3,7 @@
  * to a task are proposed and each is re-scored by the same engine (`rateTask`). Only what the
  * re-score confirms is shown, with the band it reaches, the better band first and, within a band,
  * the smallest change first. Where no single change reaches Clear (or only a lighter load does), the
- * best changes are combined (greedily, up to four); where nothing reaches Clear, the result says so and gives the best band.
+ * best changes are combined (greedily, up to five); where nothing reaches Clear, the result says so and gives the best band.
  *
  * Pure, and cheap enough to run on every keystroke (`npm run bench:rules` reports the time a task).
  * The sizes used to order changes are Heftwise's own judgement of how much a change asks of a site
@@ -254,9 +254,11 @@ export function describeChange(change: Change, task: Task): string {
     case "reach":
       return "Hold the load close to the body";
     case "zone":
-      return change.zone === "floor-to-lower-leg" && task.filter?.zone === "below-standing-level"
-        ? "Keep the hands no lower than the feet: lower from kneeling onto a mat at the edge, or have a second person in the excavation receive it"
-        : `Hands ${ZONE_PHRASES[change.zone]} (${ZONES.indexOf(change.zone) > ZONES.indexOf(task.filter?.zone ?? change.zone) ? "raise the load on a stand or bench" : "lower the shelf or stack"})`;
+      if (task.filter?.zone === "below-standing-level")
+        return change.zone === "floor-to-lower-leg"
+          ? "Keep the hands no lower than the feet: lower from kneeling onto a mat at the edge, or pass it to a second person in the excavation"
+          : `A second person standing in the excavation receives it, hands ${ZONE_PHRASES[change.zone]}`;
+      return `Hands ${ZONE_PHRASES[change.zone]} (${ZONES.indexOf(change.zone) > ZONES.indexOf(task.filter?.zone ?? change.zone) ? "raise the load on a stand or bench" : "lower the shelf or stack"})`;
     case "h":
       return `Hands nearer the body at the ${change.end === "origin" ? "start" : "end"}: H ${fmt(change.cm, 0)} cm instead of ${fmt(task.niosh![change.end].h, 0)} cm`;
     case "v": {
@@ -434,20 +436,29 @@ function lighterLoad(task: Task, component: RegisterEntry | undefined, score: Ta
   return rank(band) <= rank(target) ? { change: { kind: "load", kg }, band, size: (score.load - kg) / score.load } : null;
 }
 
-/** Band first, then the largest index of the methods: a finer measure than the band for combining changes. */
-function pressure(score: TaskScore): [number, number] {
+/**
+ * Band first, then how many things hold the band up (warnings and working conditions), then the
+ * largest index of the methods: a finer measure than the band for combining changes.
+ */
+type Pressure = [number, number, number];
+function pressure(task: Task, score: TaskScore): Pressure {
   let worst = 0;
-  for (const r of Object.values(score.results)) worst = Math.max(worst, r.index ?? Infinity);
-  return [rank(score.band ?? "stop"), worst];
+  let holding = task.conditions?.length ?? 0;
+  for (const r of Object.values(score.results)) {
+    worst = Math.max(worst, r.index ?? Infinity);
+    holding += r.warnings.length;
+  }
+  return [rank(score.band ?? "stop"), holding, worst];
 }
-const lower = (a: [number, number], b: [number, number]) => a[0] < b[0] || (a[0] === b[0] && a[1] < b[1]);
+const lower = (a: Pressure, b: Pressure) => a[0] < b[0] || (a[0] === b[0] && (a[1] < b[1] || (a[1] === b[1] && a[2] < b[2])));
 
-const MAX_COMBINED = 4;
+const MAX_COMBINED = 5;
 
 /**
  * Changes combined when no single one reaches Clear: greedily, each step the strongest option of
- * each variable, kept when it lowers the band or, at the same band, the largest index; then each
- * change is shrunk back to the smallest option of its variable that keeps the band reached.
+ * each variable, kept when it lowers the measure above; then each change the result does not need
+ * is dropped, and each one left is shrunk back to the smallest option of its variable that keeps
+ * the band reached.
  */
 function combine(task: Task, component: RegisterEntry | undefined, score: TaskScore): WhatIf["together"] {
   const chosen: { list: Change[]; at: number }[] = [];
@@ -455,12 +466,15 @@ function combine(task: Task, component: RegisterEntry | undefined, score: TaskSc
   let c = component;
   let s = score;
   for (let step = 0; step < MAX_COMBINED && s.band !== "clear"; step++) {
-    let best: { list: Change[]; score: TaskScore } | null = null;
+    let best: { list: Change[]; score: TaskScore; pressure: Pressure } | null = null;
+    const now = pressure(t, s);
     for (const list of candidates(t, s)) {
       const strongest = list[list.length - 1];
       if (chosen.some((x) => changeKey(x.list[0]) === changeKey(strongest))) continue;
-      const next = rateTask(...applyChange(t, c, strongest));
-      if (next.band !== null && lower(pressure(next), pressure(best?.score ?? s))) best = { list, score: next };
+      const [nt, nc] = applyChange(t, c, strongest);
+      const next = rateTask(nt, nc);
+      const p = pressure(nt, next);
+      if (next.band !== null && lower(p, best?.pressure ?? now)) best = { list, score: next, pressure: p };
     }
     if (!best) break;
     chosen.push({ list: best.list, at: best.list.length - 1 });
@@ -472,13 +486,18 @@ function combine(task: Task, component: RegisterEntry | undefined, score: TaskSc
   const applyAll = () => {
     let applied: [Task, RegisterEntry | undefined] = [task, component];
     for (const x of chosen) applied = applyChange(...applied, x.list[x.at]);
-    return rateTask(...applied).band;
+    return rank(rateTask(...applied).band ?? "stop");
   };
+  for (let i = chosen.length - 1; i >= 0 && chosen.length > 1; i--) {
+    const [dropped] = chosen.splice(i, 1);
+    if (applyAll() > rank(reached)) chosen.splice(i, 0, dropped);
+  }
+  if (chosen.length < 2) return null;
   for (const x of chosen) {
     const keep = x.at;
     for (let i = 0; i < keep; i++) {
       x.at = i;
-      if (applyAll() === reached) break;
+      if (applyAll() <= rank(reached)) break;
       x.at = keep;
     }
   }
