@@ -119,6 +119,29 @@ export const components = pgTable(
   (t) => [index("components_organisation_idx").on(t.organisationId)],
 );
 
+/**
+ * The organisation's library of hazards with suggested controls (by the hierarchy of control), which
+ * advisers copy into an assessment and edit there; admins maintain it. One row a hazard name.
+ */
+export const hazardLibrary = pgTable(
+  "hazard_library",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    hazard: text("hazard").notNull(),
+    whoIsAtRisk: text("who_is_at_risk").notNull(),
+    likelihoodBefore: integer("likelihood_before").notNull(),
+    severityBefore: integer("severity_before").notNull(),
+    /** [{ text, level }] in the content schema's shape. */
+    controls: jsonb("controls").notNull(),
+    likelihoodAfter: integer("likelihood_after").notNull(),
+    severityAfter: integer("severity_after").notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("hazard_library_organisation_hazard_idx").on(t.organisationId, t.hazard)],
+);
+
 const bytea = customType<{ data: Uint8Array; driverData: Uint8Array }>({ dataType: () => "bytea" });
 
 /** File contents, kept by the storage module (lib/storage.ts); the database is the default store. */

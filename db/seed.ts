@@ -19,6 +19,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const result = await db.transaction(async (tx) => {
     const [org] = await tx.insert(organisations).values({ name: DEMO_ORGANISATION }).returning();
+    await (await import("@/assessments/hazard-library/service")).addStarterHazards(tx, org.id);
     const people = await tx
       .insert(users)
       .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash })))

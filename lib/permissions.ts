@@ -20,6 +20,8 @@ export const ACTIONS = [
   "briefings:run",
   "site-notes:create",
   "score:use",
+  "hazard-library:read",
+  "hazard-library:manage",
 ] as const;
 
 export type Action = (typeof ACTIONS)[number];
@@ -33,10 +35,11 @@ const ADVISER: readonly Action[] = [
   "assessments:write",
   "assessments:submit",
   "score:use",
+  "hazard-library:read",
 ];
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {
-  admin: ["users:manage", "mail-log:read", ...ADVISER],
+  admin: ["users:manage", "mail-log:read", "hazard-library:manage", ...ADVISER],
   adviser: ADVISER,
   approver: ["reviews:read", "reviews:decide", "score:use"],
   foreman: ["briefings:run", "site-notes:create", "score:use"],

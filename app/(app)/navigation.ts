@@ -6,6 +6,7 @@ export const NAVIGATION: { href: string; label: string; action: Action | null }[
   { href: "/assessments", label: "Assessments", action: "assessments:read" },
   { href: "/jobs", label: "Jobs", action: "jobs:read" },
   { href: "/load-register", label: "Load register", action: "components:read" },
+  { href: "/hazard-library", label: "Hazard library", action: "hazard-library:read" },
   { href: "/reviews", label: "For review", action: "reviews:read" },
   { href: "/briefings", label: "Briefings", action: "briefings:run" },
   { href: "/admin/users", label: "People", action: "users:manage" },

@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import Link from "next/link";
 import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
+import { listLibrary } from "@/assessments/hazard-library/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
@@ -75,6 +76,7 @@ export default async function RevisionPage({ params, searchParams }: { params: P
           initialContent={content}
           register={register}
           approvers={can(actor, "assessments:submit") ? await listApprovers(actor) : []}
+          library={can(actor, "hazard-library:read") ? await listLibrary(actor) : []}
           initialStep={initialStep}
         />
       ) : (

@@ -1,6 +1,8 @@
 "use client";
 
+import { useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
+import { hazardFromLibrary, type LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { SecondaryButton } from "@/app/_components/form";
 import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating, type Content } from "@/assessments/method-statement/content";
 import { Choice, Num, Text } from "./fields";
@@ -107,12 +109,47 @@ function HazardRow({ index, onRemove }: { index: number; onRemove: () => void })
   );
 }
 
-export function HazardsStep() {
+/** A hazard from the organisation's library, copied into this assessment to be changed for the job. */
+function LibraryPicker({ library, onPick }: { library: LibraryEntry[]; onPick: (entry: LibraryEntry) => void }) {
+  const [chosen, setChosen] = useState("");
+  if (library.length === 0) return null;
+  const entry = library.find((e) => e.id === chosen);
+  return (
+    <div className="flex flex-wrap items-end gap-2 rounded-lg border border-rule bg-white p-3">
+      <div className="min-w-0 flex-1">
+        <label htmlFor="library-pick" className="block text-sm font-bold">
+          From the hazard library
+        </label>
+        <select id="library-pick" value={chosen} onChange={(e) => setChosen(e.target.value)} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5">
+          <option value="">Choose a hazard…</option>
+          {library.map((e) => (
+            <option key={e.id} value={e.id}>
+              {e.hazard}
+            </option>
+          ))}
+        </select>
+      </div>
+      <SecondaryButton
+        type="button"
+        disabled={!entry}
+        onClick={() => {
+          if (entry) onPick(entry);
+          setChosen("");
+        }}
+      >
+        Add with its controls
+      </SecondaryButton>
+    </div>
+  );
+}
+
+export function HazardsStep({ library }: { library: LibraryEntry[] }) {
   const { control } = useFormContext<Content>();
   const { fields, append, remove } = useFieldArray({ control, name: "hazards" });
   return (
     <div className="space-y-3">
       <p className="text-sm text-muted">Likelihood and severity from 1 to 5; the rating is their product. Prefer controls higher in the hierarchy: eliminate, substitute, engineering, then administrative, then PPE.</p>
+      <LibraryPicker library={library} onPick={(entry) => append(hazardFromLibrary(entry, newId("h")))} />
       {fields.map((field, i) => (
         <HazardRow key={field.id} index={i} onRemove={() => remove(i)} />
       ))}

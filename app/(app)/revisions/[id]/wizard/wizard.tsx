@@ -9,6 +9,7 @@ import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import { contentSchema, type Content } from "@/assessments/method-statement/content";
 import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
+import type { LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
 import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
@@ -23,12 +24,14 @@ interface Props {
   initialContent: Content;
   register: RegisterEntry[];
   approvers: { id: string; name: string }[];
+  /** The organisation's hazard library, for the hazards step. */
+  library: LibraryEntry[];
   initialStep?: StepKey;
 }
 
 const AUTOSAVE_MS = 1200;
 
-export function Wizard({ revisionId, initialVersion, initialContent, register, approvers, initialStep = "scope" }: Props) {
+export function Wizard({ revisionId, initialVersion, initialContent, register, approvers, library, initialStep = "scope" }: Props) {
   const router = useRouter();
   const methods = useForm<Content>({ defaultValues: initialContent, resolver: zodResolver(contentSchema) as Resolver<Content>, mode: "onChange" });
   const { control, getValues, trigger, watch } = methods;
@@ -118,7 +121,7 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
             {step === "scope" && <ScopeStep />}
             {step === "sequence" && <SequenceStep />}
             {step === "loads" && <LoadsStep register={register} revisionId={revisionId} />}
-            {step === "hazards" && <HazardsStep />}
+            {step === "hazards" && <HazardsStep library={library} />}
             {step === "people" && <PeopleStep />}
             {step === "emergency" && <EmergencyStep />}
           </form>
