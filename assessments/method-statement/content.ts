@@ -78,8 +78,9 @@ export const taskSchema = z.object({
   filter: filterInputsSchema.optional(),
   push: pushInputsSchema.optional(),
   lift: liftPlanInputsSchema.optional(),
-  /** The working environment of a handling task (not a lift with equipment). */
-  conditions: conditionsSchema.optional(),
+  /** The working environment of a handling task (not a lift with equipment). A checkbox group with
+   * nothing ticked can arrive as `false` from a form: read as none. */
+  conditions: z.preprocess((v) => (v === false ? [] : v), conditionsSchema.optional()),
 });
 
 export const CONTROL_LEVELS = ["eliminate", "substitute", "engineering", "administrative", "ppe"] as const;

@@ -297,3 +297,12 @@ describe("working conditions (HSE L23: the working environment is part of every 
     expect(s.whatIf!.suggestions[0]).toMatchObject({ change: { kind: "condition", condition: "wind-on-panels" }, band: "clear" });
   });
 });
+
+describe("working conditions from a form", () => {
+  it("a checkbox group with nothing ticked (false) is read as no conditions, never scored as something else", async () => {
+    const { taskSchema } = await import("@/assessments/method-statement/content");
+    const parsed = taskSchema.parse({ id: "t", description: "", componentId: null, quantity: 1, operation: "carry", conditions: false });
+    expect(parsed.conditions).toEqual([]);
+    expect(taskSchema.safeParse({ id: "t", description: "", componentId: null, quantity: 1, operation: "carry", conditions: ["fog"] }).success).toBe(false);
+  });
+});

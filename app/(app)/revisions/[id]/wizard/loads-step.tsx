@@ -227,7 +227,7 @@ export function LoadsStep({ register, revisionId }: { register: RegisterEntry[];
       ))}
       <SecondaryButton
         type="button"
-        onClick={() => append({ id: `t-${crypto.randomUUID().slice(0, 8)}`, description: "", componentId: null, quantity: 1, operation: "lift", ...defaultsFor("lift", undefined) })}
+        onClick={() => append({ id: `t-${crypto.randomUUID().slice(0, 8)}`, description: "", componentId: null, quantity: 1, operation: "lift", conditions: [], ...defaultsFor("lift", undefined) })}
       >
         Add a handling task
       </SecondaryButton>

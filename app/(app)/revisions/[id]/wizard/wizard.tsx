@@ -33,7 +33,9 @@ const AUTOSAVE_MS = 1200;
 
 export function Wizard({ revisionId, initialVersion, initialContent, register, approvers, library, initialStep = "scope" }: Props) {
   const router = useRouter();
-  const methods = useForm<Content>({ defaultValues: initialContent, resolver: zodResolver(contentSchema) as Resolver<Content>, mode: "onChange" });
+  // Checkbox groups need an array to start from, or react-hook-form reads them as one checkbox.
+  const defaultValues = useMemo(() => ({ ...initialContent, tasks: initialContent.tasks.map((t) => ({ ...t, conditions: t.conditions ?? [] })) }), [initialContent]);
+  const methods = useForm<Content>({ defaultValues, resolver: zodResolver(contentSchema) as Resolver<Content>, mode: "onChange" });
   const { control, getValues, trigger, watch } = methods;
   const [step, setStep] = useState<StepKey>(initialStep);
   const [save, setSave] = useState<SaveState>({ kind: "saved", at: null });
@@ -88,7 +90,10 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
     };
   }, [watch, saveNow, conflicted]);
 
-  const review = useMemo(() => reviewContent(contentSchema.safeParse(values).success ? (values as Content) : getValues(), register), [values, register, getValues]);
+  const review = useMemo(() => {
+    const parsed = contentSchema.safeParse(values);
+    return reviewContent(parsed.success ? parsed.data : getValues(), register);
+  }, [values, register, getValues]);
 
   const go = (key: StepKey) => {
     setStep(key);

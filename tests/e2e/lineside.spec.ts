@@ -1,0 +1,77 @@
+import { expect, test } from "@playwright/test";
+import { signIn, steps } from "./helpers";
+
+test("an admin keeps the hazard library; an adviser copies a hazard from it into an assessment", async ({ page, browser }) => {
+  await signIn(page, "admin@brackenfold.example");
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Hazard library" }).click();
+  await expect(page.getByTestId("library-entry").filter({ hasText: "Striking a buried cable or pipe while digging" })).toBeVisible();
+  await page.getByRole("link", { name: "New hazard" }).click();
+  const form = page.getByRole("form", { name: "Library hazard" });
+  await form.getByRole("button", { name: "Save to the library" }).click();
+  await expect(form.getByText("Describe the hazard").first()).toBeVisible();
+  await form.getByLabel("Hazard", { exact: true }).fill("Striking a buried cable or pipe while digging");
+  await form.getByLabel("Who is at risk").fill("Gang");
+  await form.getByLabel("Control 1", { exact: true }).fill("Scan before digging");
+  await form.getByRole("button", { name: "Save to the library" }).click();
+  await expect(form.getByText("Already in the library")).toBeVisible();
+  await form.getByLabel("Hazard", { exact: true }).fill("Hot work near the cable route");
+  await form.getByRole("button", { name: "Save to the library" }).click();
+  await expect(page.getByTestId("library-entry").filter({ hasText: "Hot work near the cable route" })).toBeVisible();
+
+  const adviserContext = await browser.newContext();
+  const adviser = await adviserContext.newPage();
+  await signIn(adviser, "adviser@brackenfold.example");
+  await adviser.goto("/hazard-library");
+  await expect(adviser.getByRole("link", { name: "New hazard" })).toHaveCount(0);
+  await adviser.goto("/assessments");
+  await adviser.getByRole("link", { name: "Equipment base and cable chamber at Carrowby" }).click();
+  await steps(adviser).getByRole("button", { name: /Hazards & controls/ }).click();
+  const before = await adviser.getByRole("article", { name: /^Hazard \d+$/ }).count();
+  await adviser.getByLabel("From the hazard library").selectOption({ label: "Striking a buried cable or pipe while digging" });
+  await adviser.getByRole("button", { name: "Add with its controls" }).click();
+  const added = adviser.getByRole("article", { name: `Hazard ${before + 1}` });
+  await expect(added.getByLabel("Hazard", { exact: true })).toHaveValue("Striking a buried cable or pipe while digging");
+  await expect(added.getByLabel("Control 2", { exact: true })).toHaveValue(/cable locating tool/);
+  await expect(adviser.getByText(/All changes saved/)).toBeVisible();
+  await adviserContext.close();
+});
+
+test("the lineside template: a braked trolley on rails, parts passed into an excavation, and a crane lift on mats", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/assessments");
+  await page.getByRole("link", { name: "Equipment base and cable chamber at Carrowby" }).click();
+  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  const band = (i: number) => page.getByTestId(`task-${i}`).getByTestId("task-result").locator("[data-band]").first();
+
+  // Trolley: braked, so Watch until the brake's operator is named — and the result says it.
+  const trolley = page.getByTestId("task-0");
+  await expect(trolley.getByTestId("gradient-reading")).toContainText("1 in 200");
+  await expect(band(0)).toHaveAttribute("data-band", "watch");
+  await expect(trolley.getByTestId("task-result")).toContainText("name who works the trolley's brake");
+  await trolley.getByLabel("Who works the brake").fill("Kieran Lusk");
+  await expect(trolley.getByTestId("task-result")).not.toContainText("name who works the trolley's brake");
+
+  // Passing sections down into the excavation: never Clear; the what-if offers a receiver in the excavation.
+  await expect(band(2)).toHaveAttribute("data-band", "act");
+  await expect(page.getByTestId("task-2").getByTestId("what-if-suggestion").first()).toContainText("second person standing in the excavation");
+
+  // The crane lift on mats: ground bearing shown on the lift plan; bad input refused; soft ground stops it.
+  await page.getByRole("link", { name: "Open the lift plan" }).click();
+  await page.waitForURL(/\/lifts\//);
+  const result = page.getByTestId("task-result");
+  await expect(result).toContainText("Ground pressure (kPa)");
+  await expect(result).toContainText("69 of 75");
+  await expect(result.locator("[data-band]").first()).toHaveAttribute("data-band", "watch");
+  await expect(result.getByTestId("what-if-suggestion").filter({ hasText: "Outrigger mats of at least 1.3 m" }).locator("[data-band]")).toHaveAttribute("data-band", "clear");
+  await page.getByLabel("Mat length").fill("0");
+  await expect(page.getByText("must be greater than 0")).toBeVisible();
+  await page.getByLabel("Mat length").fill("1.2");
+  await page.getByLabel("Ground", { exact: true }).selectOption("soft-clay");
+  await expect(result.locator("[data-band]").first()).toHaveAttribute("data-band", "stop");
+  await expect(result).toContainText("No presumed bearing value for soft clays and silts");
+  await page.getByLabel("Allowable bearing pressure").fill("120");
+  await expect(result.locator("[data-band]").first()).toHaveAttribute("data-band", "clear");
+  await expect(page.getByTestId("sling-diagram")).toHaveAttribute("data-hitch", "straight");
+  await page.getByLabel("Hitch").selectOption("basket");
+  await expect(page.getByText("a basket or endless sling is one sling: 1 leg")).toBeVisible();
+});
