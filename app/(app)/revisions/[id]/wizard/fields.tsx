@@ -103,7 +103,7 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
   };
   const g = "gradient" in parsed ? parsed.gradient : null;
   return (
-    <fieldset className="sm:col-span-3">
+    <fieldset className="col-span-2 sm:col-span-3">
       <legend className="text-sm font-bold">{label}</legend>
       <div className="mt-1 flex flex-wrap items-center gap-2">
         <select aria-label="Direction of travel" className={controlClass(undefined, true) + " !mt-0 !w-auto"} value={direction} onChange={(e) => update(e.target.value as Direction, form, typed)}>
