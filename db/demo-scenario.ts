@@ -83,3 +83,12 @@ export function demoLiftSchedule(seededOn = new Date()) {
     ],
   };
 }
+
+/** The demo's arrangement for working beside the line at Hollin Vale (invented people and references). */
+export const DEMO_LINESIDE = {
+  responsibleName: "Nerys Caldwell",
+  responsibleCompetence: "SSOW-PL 3318",
+  planningRef: "WHV-SSOW-2026-0417",
+  accessPoint: "Gorsey Lane access gate, 14m 30ch, up side",
+  positionsOfSafety: "Behind the temporary fence at any point along the base position; the cess walkway beyond the fence line is the position of safety on the walk in.",
+};

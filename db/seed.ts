@@ -5,11 +5,12 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/passwords";
 import { getDb, type Db } from "./client";
-import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
+import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_LINESIDE, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
 /** Three weeks from seeding: the approved demo assessment shows as due for review within 30 days. */
+const demoDay = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
 const demoReviewDate = () => new Date(Date.now() + 21 * 86_400_000).toISOString().slice(0, 10);
 import { components, jobAssignments, jobs, organisations, users } from "./schema";
 
@@ -64,6 +65,7 @@ async function seedDemoAssessments(organisationId: string) {
     { role: "Crane operator", name: team.operator.name, competence: team.operator.competenceRef },
     { role: "Slinger/signaller", name: team.slingerSignaller.name, competence: team.slingerSignaller.competenceRef },
   ];
+  Object.assign(content.lineside, DEMO_LINESIDE);
   await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
   await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base by hand at Carrowby", templateId: "equipment-base" });
   // The lineside methods at work: a braked trolley on the down gradient, parts passed into an excavation, ground bearing.
@@ -83,6 +85,10 @@ async function seedDemoAssessments(organisationId: string) {
     { role: "Person in charge", name: "Dafydd Strand", competence: "PTS 88213" },
     { role: "Operative", name: "Kieran Lusk", competence: "PTS 77120" },
   ];
+  // Working beside the line at Hollin Vale: the arrangement, its owner, the permit and the checks.
+  Object.assign(baseContent.lineside, DEMO_LINESIDE);
+  baseContent.permits = [{ kind: "dig", description: "", reference: "PTD-HV-0142", issuedBy: "Wendmoor Railway site permit office", validFrom: demoDay(0), validTo: demoDay(60) }];
+  Object.assign(baseContent.buriedServices, { recordsObtained: true, recordsRef: "SR-WHV-2291", scanned: true, scannedBy: "Kieran Lusk", scanDate: demoDay(-7), trialHoles: "One hand-dug trial hole at the cable route marker: signalling cable at 450 mm, 0.8 m west of the base." });
   const saved = await saveRevision(adviser, base.revisionId, { version: baseDraft.revision.version, content: baseContent });
   await submitRevision(adviser, base.revisionId, { version: saved.version, approverId: approver.id, reviewDate: demoReviewDate() }, { notify: false });
   const submitted = await getRevision(adviser, base.revisionId);

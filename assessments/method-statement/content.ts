@@ -104,6 +104,108 @@ export const hazardSchema = z.object({
   severityAfter: rating(),
 });
 
+/** A real calendar date as YYYY-MM-DD, or blank. */
+const optionalDate = () =>
+  z
+    .string()
+    .trim()
+    .refine((v) => v === "" || (/^\d{4}-\d{2}-\d{2}$/.test(v) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v)), "Use a real date")
+    .default("");
+/** A permit or planning reference: letters, digits and a few separators, or blank. */
+const reference = () =>
+  text(80)
+    .refine((v) => v === "" || /^[A-Za-z0-9][A-Za-z0-9 ./_:#-]*$/.test(v), "Use letters, digits, spaces and - / . _ : # only")
+    .default("");
+
+export const NEAR_LINE = ["not-near", "near", "on"] as const;
+export const NEAR_LINE_LABELS: Record<(typeof NEAR_LINE)[number], string> = {
+  "not-near": "Not on or near the line",
+  near: "Near the line (beside it, within the distance where protection is needed)",
+  on: "On the line",
+};
+export const PROTECTION_ARRANGEMENTS = ["fenced", "distance", "line-blockage", "possession", "warning-system", "other"] as const;
+export type ProtectionArrangement = (typeof PROTECTION_ARRANGEMENTS)[number];
+export const PROTECTION_LABELS: Record<ProtectionArrangement, string> = {
+  fenced: "Separated from the line by a fence or barrier",
+  distance: "Separated from the line by distance, to a marked limit",
+  "line-blockage": "Line blockage: no trains on the line while the work is done",
+  possession: "Possession: the line handed over for engineering work",
+  "warning-system": "Warning of approaching trains (lookouts or a warning system): the gang goes to a position of safety",
+  other: "Another arrangement, described below",
+};
+export const PERMIT_KINDS = ["dig", "hot-work", "electrical", "confined-space", "other"] as const;
+export const PERMIT_LABELS: Record<(typeof PERMIT_KINDS)[number], string> = {
+  dig: "Permit to dig",
+  "hot-work": "Hot work permit",
+  electrical: "Permit for work on or near electrical equipment",
+  "confined-space": "Confined space entry permit",
+  other: "Other permit",
+};
+export const EXCAVATION_SUPPORT = ["battered", "trench-box", "sheeting", "stepped", "shallow", "other"] as const;
+export const SUPPORT_LABELS: Record<(typeof EXCAVATION_SUPPORT)[number], string> = {
+  battered: "Sides battered back to a safe angle",
+  "trench-box": "Trench box or drag box",
+  sheeting: "Trench sheets and props",
+  stepped: "Sides stepped (benched)",
+  shallow: "Shallow, stable ground: no support, by the competent person's decision",
+  other: "Other support, described",
+};
+
+/** Working near the line: how the gang is kept safe from trains, and who answers for it. */
+export const linesideSchema = z.object({
+  nearLine: z.enum(NEAR_LINE).default("not-near"),
+  protection: z.enum(PROTECTION_ARRANGEMENTS).nullable().default(null),
+  protectionDetail: text(1000).default(""),
+  responsibleName: text(120).default(""),
+  responsibleCompetence: text(120).default(""),
+  planningRef: reference(),
+  accessPoint: text(300).default(""),
+  walkingRoute: text(1000).default(""),
+  positionsOfSafety: text(1000).default(""),
+  limits: text(1000).default(""),
+});
+
+export const permitSchema = z
+  .object({
+    kind: z.enum(PERMIT_KINDS),
+    description: text(200).default(""),
+    reference: reference(),
+    issuedBy: text(120).default(""),
+    validFrom: optionalDate(),
+    validTo: optionalDate(),
+  })
+  .refine((p) => !p.validFrom || !p.validTo || p.validTo >= p.validFrom, { path: ["validTo"], message: "Must be on or after the start date" });
+
+export const buriedServicesSchema = z.object({
+  recordsObtained: z.boolean().default(false),
+  recordsRef: reference(),
+  scanned: z.boolean().default(false),
+  scannedBy: text(120).default(""),
+  scanDate: optionalDate(),
+  trialHoles: text(1000).default(""),
+  handDigWithinM: z.number({ error: "Enter metres" }).min(0, "0 or more").max(10, "At most 10 m").nullable().default(null),
+  rule: text(1000).default(""),
+});
+
+export const excavationSchema = z.object({
+  present: z.boolean().default(false),
+  depthM: z.number({ error: "Enter metres" }).min(0.05, "At least 0.05 m").max(10, "At most 10 m").nullable().default(null),
+  support: z.enum(EXCAVATION_SUPPORT).nullable().default(null),
+  supportDetail: text(1000).default(""),
+  edgeProtection: text(1000).default(""),
+  inspection: text(1000).default(""),
+  accessEgress: text(1000).default(""),
+  lowering: text(1000).default(""),
+});
+
+export const environmentSchema = z.object({
+  spoilAndWaste: text(1000).default(""),
+  spillKit: text(500).default(""),
+  backfill: text(500).default(""),
+  noiseAndDust: text(1000).default(""),
+  welfare: text(1000).default(""),
+});
+
 export const contentSchema = z.object({
   scope: z.object({
     summary: text(2000),
@@ -123,6 +225,12 @@ export const contentSchema = z.object({
     nearestHospital: text(300),
     environment: text(2000),
   }),
+  // Added for lineside work; defaults let drafts saved before them open unchanged.
+  lineside: linesideSchema.default(() => linesideSchema.parse({})),
+  permits: z.array(permitSchema).max(20).default([]),
+  buriedServices: buriedServicesSchema.default(() => buriedServicesSchema.parse({})),
+  excavation: excavationSchema.default(() => excavationSchema.parse({})),
+  environment: environmentSchema.default(() => environmentSchema.parse({})),
 });
 
 export type Task = z.infer<typeof taskSchema>;
@@ -137,6 +245,11 @@ export function emptyContent(): Content {
     hazards: [],
     people: { roles: [], plant: [], ppe: [] },
     emergency: { arrangements: "", nearestHospital: "", environment: "" },
+    lineside: linesideSchema.parse({}),
+    permits: [],
+    buriedServices: buriedServicesSchema.parse({}),
+    excavation: excavationSchema.parse({}),
+    environment: environmentSchema.parse({}),
   };
 }
 

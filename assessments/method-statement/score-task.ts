@@ -10,7 +10,7 @@ import { scoreNiosh, type NioshRequest, type NioshResult } from "../rules/niosh"
 import { scorePush, type PushRequest, type PushResult } from "../rules/push";
 import type { Band } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
-import type { Content, Task } from "./content";
+import { PERMIT_LABELS, type Content, type Task } from "./content";
 import { solveForClear, type WhatIf } from "./what-if";
 
 export interface RegisterEntry {
@@ -198,9 +198,59 @@ export function scoreTask(task: Task, component: RegisterEntry | undefined): Tas
 }
 
 export interface ReviewItem {
-  step: "scope" | "sequence" | "loads" | "hazards" | "people" | "emergency";
+  step: "scope" | "line" | "sequence" | "loads" | "hazards" | "people" | "ground" | "emergency";
   message: string;
 }
+
+/** Tasks that put the hands below the standing surface: lowering into or lifting out of an excavation. */
+export function belowStandingLevelTasks(content: Content): Task[] {
+  return content.tasks.filter((t) => t.filter?.zone === "below-standing-level" || (t.operation === "lift" && t.niosh && (t.niosh.origin.v < 0 || t.niosh.destination.v < 0)));
+}
+
+/**
+ * What the lineside sections still lack. Blockers, not warnings: work on or near the line without a
+ * protection arrangement and a responsible person with their competence; a permit listed without its
+ * reference; digging without the checks for buried services; an excavation (or a task that lowers
+ * into one) without its depth, support and inspection.
+ */
+export function linesideGaps(content: Content): ReviewItem[] {
+  const out: ReviewItem[] = [];
+  const l = content.lineside;
+  if (l.nearLine !== "not-near") {
+    if (!l.protection) out.push({ step: "line", message: "Choose the protection arrangement for working on or near the line." });
+    else if (l.protection === "other" && !l.protectionDetail.trim()) out.push({ step: "line", message: "Describe the protection arrangement." });
+    if (!l.responsibleName.trim()) out.push({ step: "line", message: "Name the person responsible for the safe system of work." });
+    if (!l.responsibleCompetence.trim()) out.push({ step: "line", message: "Give the competence reference of the person responsible for the safe system of work." });
+    if (!l.positionsOfSafety.trim()) out.push({ step: "line", message: "Say where the positions of safety are." });
+  }
+  content.permits.forEach((p, i) => {
+    const name = p.kind === "other" ? p.description.trim() || `Permit ${i + 1}` : PERMIT_LABELS[p.kind];
+    if (p.kind === "other" && !p.description.trim()) out.push({ step: "ground", message: `Permit ${i + 1}: say which permit it is.` });
+    if (!p.reference.trim()) out.push({ step: "ground", message: `${name}: the permit is listed as needed but has no reference.` });
+    if (!p.issuedBy.trim()) out.push({ step: "ground", message: `${name}: say who issues it.` });
+  });
+  const below = belowStandingLevelTasks(content);
+  const digging = content.excavation.present || content.permits.some((p) => p.kind === "dig") || below.length > 0;
+  if (digging) {
+    const b = content.buriedServices;
+    if (!b.recordsObtained) out.push({ step: "ground", message: "Buried services: record that the service records were obtained before digging." });
+    if (!b.scanned) out.push({ step: "ground", message: "Buried services: record the scan with a cable locating tool before digging." });
+    else if (!b.scannedBy.trim() || !b.scanDate) out.push({ step: "ground", message: "Buried services: say who scanned, and when." });
+    if (!b.rule.trim()) out.push({ step: "ground", message: "Buried services: state the rule the gang follows near a located service." });
+  }
+  if (below.length && !content.excavation.present)
+    out.push({ step: "ground", message: `${below.length === 1 ? "A task lowers" : `${below.length} tasks lower`} a load below the standing surface: describe the excavation it goes into.` });
+  if (content.excavation.present) {
+    const e = content.excavation;
+    if (e.depthM === null) out.push({ step: "ground", message: "Excavation: give its depth." });
+    if (!e.support) out.push({ step: "ground", message: "Excavation: say how its sides are supported or battered." });
+    else if (e.support === "other" && !e.supportDetail.trim()) out.push({ step: "ground", message: "Excavation: describe the support." });
+    if (!e.inspection.trim()) out.push({ step: "ground", message: "Excavation: say who inspects it, before each shift and after anything that could weaken it." });
+    if (!e.accessEgress.trim()) out.push({ step: "ground", message: "Excavation: describe the safe way in and out." });
+  }
+  return out;
+}
+
 
 export interface Review {
   missing: ReviewItem[];
@@ -231,6 +281,7 @@ export function reviewContent(content: Content, register: RegisterEntry[]): Revi
   if (!content.people.ppe.some((p) => p.trim())) missing.push({ step: "people", message: "List the PPE required." });
   if (!content.emergency.arrangements.trim()) missing.push({ step: "emergency", message: "Describe the emergency arrangements." });
   if (!content.emergency.nearestHospital.trim()) missing.push({ step: "emergency", message: "Name the nearest hospital with an emergency department." });
+  missing.push(...linesideGaps(content));
   const banded = scores.map((s) => s.band).filter((b): b is Band => b !== null);
   return { missing, worstBand: banded.length ? worstBand(banded) : null, scores, canSubmit: missing.length === 0 };
 }

@@ -51,6 +51,42 @@ const standardPeople = (): Content["people"] => ({
   ppe: ["Hi-vis clothing", "Safety helmet", "Safety boots", "Gloves", "Eye protection"],
 });
 
+/**
+ * Starting text for work beside the line. The arrangement is a typical one for the job; the person
+ * responsible, references and positions of safety are the adviser's to fill from the site and the
+ * infrastructure manager's planning — the review refuses submission until they are.
+ */
+const nearTheLine = (protection: NonNullable<Content["lineside"]["protection"]>, protectionDetail: string): Content["lineside"] => ({
+  nearLine: "near",
+  protection,
+  protectionDetail,
+  responsibleName: "",
+  responsibleCompetence: "",
+  planningRef: "",
+  accessPoint: "",
+  walkingRoute: "From the access point along the cess walkway to the site; no walking on the ballast shoulder or between the rails.",
+  positionsOfSafety: "",
+  limits: "Nothing carried or placed within 3 m of the nearest rail; long items carried parallel to the line, on the side away from it.",
+});
+const permitToDig = (): Content["permits"][number] => ({ kind: "dig", description: "", reference: "", issuedBy: "", validFrom: "", validTo: "" });
+const buriedServicesChecks = (): Content["buriedServices"] => ({
+  recordsObtained: false,
+  recordsRef: "",
+  scanned: false,
+  scannedBy: "",
+  scanDate: "",
+  trialHoles: "",
+  handDigWithinM: 0.5,
+  rule: "Hand tools only within 0.5 m of a located service; stop and tell the supervisor on finding anything not on the records or the scan.",
+});
+const siteEnvironment = (): Content["environment"] => ({
+  spoilAndWaste: "Spoil bagged and taken back to the van; nothing left in the cess or the drainage.",
+  spillKit: "In the van at the access point; the supervisor knows how to use it.",
+  backfill: "",
+  noiseAndDust: "Powered tools used in short spells; water on cutting to keep dust down.",
+  welfare: "Welfare van at the access point: toilet, hand washing, hot water, shelter.",
+});
+
 const closeLift = (v1: number, v2: number, frequency: number): NonNullable<Task["niosh"]> => ({
   origin: { h: 30, v: v1, a: 0 },
   destination: { h: 35, v: v2, a: 30 },
@@ -105,6 +141,10 @@ export const TEMPLATES: Template[] = [
       ],
       hazards: standardHazards(),
       people: standardPeople(),
+      lineside: nearTheLine("fenced", "Temporary fence between the base position and the line, erected before work and kept in place throughout."),
+      permits: [permitToDig()],
+      buriedServices: buriedServicesChecks(),
+      environment: siteEnvironment(),
     }),
   },
   {
@@ -163,6 +203,8 @@ export const TEMPLATES: Template[] = [
         },
       ],
       people: standardPeople(),
+      lineside: nearTheLine("line-blockage", "The trolley runs and the troughs are placed only within the line blockage; the gang is clear of the line before it is given back."),
+      environment: siteEnvironment(),
     }),
   },
   {
@@ -254,6 +296,8 @@ export const TEMPLATES: Template[] = [
         plant: ["Lorry-loader crane", "Four-leg chain sling", "Three-leg chain sling", "Spreader mats"],
         ppe: ["Hi-vis clothing", "Safety helmet with chin strap", "Safety boots", "Rigger gloves"],
       },
+      lineside: nearTheLine("line-blockage", "Lifts made only within the line blockage; the crane's slew limited away from the line throughout."),
+      environment: siteEnvironment(),
     }),
   },
   {
@@ -359,6 +403,20 @@ export const TEMPLATES: Template[] = [
         roles: [...standardPeople().roles, { role: "Trolley brake operator", name: "", competence: "" }, { role: "Appointed person", name: "", competence: "" }],
         plant: ["Braked track trolley", "Lorry-loader crane", "Three-leg chain sling", "Outrigger mats 1.2 m", "Trench box"],
       },
+      lineside: nearTheLine("possession", "The trolley runs within the possession, between its limits; the base and chamber work continue behind the fence after it is given back."),
+      permits: [permitToDig()],
+      buriedServices: buriedServicesChecks(),
+      excavation: {
+        present: true,
+        depthM: 1.2,
+        support: "trench-box",
+        supportDetail: "Trench box set as the excavation is dug; spoil kept at least 1 m back from the edge.",
+        edgeProtection: "Barriers on all sides; covered with boards when left.",
+        inspection: "",
+        accessEgress: "Ladder inside the trench box, tied off, one metre above the edge.",
+        lowering: "Trough sections passed down to a second person standing in the excavation; the chamber ring lowered by the lorry-loader only.",
+      },
+      environment: siteEnvironment(),
     }),
   },
 ];

@@ -16,7 +16,7 @@ import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
 import { drawnSignaturePng, encodePng } from "@/lib/png";
 import type { Actor } from "@/lib/permissions";
-import { actorFor, demoOrganisation, reviewDateIn } from "./helpers";
+import { actorFor, completeLineside, demoOrganisation, reviewDateIn } from "./helpers";
 
 let fake: MailFake;
 let adviser: Actor;
@@ -166,8 +166,8 @@ describe("return with comments", () => {
     const list = await listAssessments(adviser);
     const id = list.find((a) => a.title === "Equipment base by hand at Carrowby")!.revisionId;
     const current = await getRevision(adviser, id);
-    // Make it submittable: people, and no task at Stop.
-    const content = structuredClone(current.content);
+    // Make it submittable: the lineside sections, people, and no task at Stop.
+    const content = completeLineside(current.content);
     content.people.roles = [{ role: "Person in charge", name: "Dafydd Strand", competence: "PTS 1234" }];
     content.tasks = content.tasks.filter((t) => t.operation !== "lift");
     const saved = await saveRevision(adviser, id, { version: current.revision.version, content });

@@ -2,6 +2,8 @@ import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { organisations, users, type Role } from "@/db/schema";
 import { seedDemo } from "@/db/seed";
+import { DEMO_LINESIDE } from "@/db/demo-scenario";
+import type { Content } from "@/assessments/method-statement/content";
 import type { Actor } from "@/lib/permissions";
 
 /** The demo organisation, seeded into this test file's database. */
@@ -29,3 +31,17 @@ export async function otherOrganisation(): Promise<{ organisationId: string; adm
 
 /** A review date the given number of days from today (YYYY-MM-DD): review dates must lie ahead. */
 export const reviewDateIn = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+
+/**
+ * Completes a draft's lineside sections as an adviser would before submitting (invented names and
+ * references, as in the demo): the arrangement and its owner, each permit's reference, the checks
+ * before digging, and the excavation where there is one.
+ */
+export function completeLineside(content: Content): Content {
+  const next = structuredClone(content);
+  Object.assign(next.lineside, DEMO_LINESIDE);
+  next.permits = next.permits.map((p, i) => ({ ...p, reference: p.reference || `PTD-TEST-${i + 1}`, issuedBy: p.issuedBy || "Site permit office" }));
+  Object.assign(next.buriedServices, { recordsObtained: true, scanned: true, scannedBy: "Kieran Lusk", scanDate: reviewDateIn(-3), rule: next.buriedServices.rule || "Hand tools only near a located service." });
+  if (next.excavation.present) Object.assign(next.excavation, { inspection: next.excavation.inspection || "Supervisor, before each shift and after rain.", accessEgress: next.excavation.accessEgress || "Ladder, tied off." });
+  return next;
+}

@@ -138,3 +138,30 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
     </fieldset>
   );
 }
+
+/** A select whose blank first option stores null (an arrangement not yet chosen). */
+export function NullableChoice({ name, label, options, placeholder }: { name: FieldPath<Content>; label: string; options: readonly (readonly [string, string])[]; placeholder: string }) {
+  const { register, error, id, control } = useContentField(name);
+  return (
+    <FieldFrame id={id} label={label} error={error} compact>
+      <select {...control} {...register(name, { setValueAs: (v: string | null) => (v === "" || v === null ? null : v) })}>
+        <option value="">{placeholder}</option>
+        {options.map(([value, text]) => (
+          <option key={value} value={value}>
+            {text}
+          </option>
+        ))}
+      </select>
+    </FieldFrame>
+  );
+}
+
+/** A date as YYYY-MM-DD, or blank. */
+export function DateField({ name, label }: { name: FieldPath<Content>; label: string }) {
+  const { register, error, id, control } = useContentField(name);
+  return (
+    <FieldFrame id={id} label={label} error={error} compact>
+      <input type="date" {...control} {...register(name)} />
+    </FieldFrame>
+  );
+}

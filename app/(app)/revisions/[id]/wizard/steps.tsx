@@ -218,7 +218,17 @@ export function EmergencyStep() {
     <div className="space-y-3">
       <Text name="emergency.nearestHospital" label="Nearest hospital with an emergency department" />
       <Text name="emergency.arrangements" label="Emergency arrangements" area hint="Who calls whom, the meeting point for the ambulance, first aid, the line's emergency contact." />
-      <Text name="emergency.environment" label="Environment" area hint="Waste, spills, wildlife, noise, neighbours." />
+      <fieldset className="space-y-3 rounded border border-rule p-3">
+        <legend className="px-1 font-bold">Environment and welfare</legend>
+        <Text name="environment.spoilAndWaste" label="Spoil and waste" area hint="Where spoil is stockpiled, how waste leaves site." />
+        <div className="grid gap-3 md:grid-cols-2">
+          <Text name="environment.spillKit" label="Spill kit" hint="Where it is kept, who is trained to use it." />
+          <Text name="environment.backfill" label="Backfill materials" />
+        </div>
+        <Text name="environment.noiseAndDust" label="Noise and dust" area />
+        <Text name="environment.welfare" label="Welfare facilities" area />
+        <Text name="emergency.environment" label="Other environmental notes" area hint="Wildlife, watercourses, neighbours." />
+      </fieldset>
     </div>
   );
 }

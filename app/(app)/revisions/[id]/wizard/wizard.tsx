@@ -12,6 +12,7 @@ import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessment
 import type { LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
+import { GroundStep, LineStep } from "./lineside-steps";
 import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
 import { STEPS, type StepKey } from "./steps-list";
 
@@ -124,6 +125,8 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
           </h2>
           <form noValidate onSubmit={(e) => e.preventDefault()}>
             {step === "scope" && <ScopeStep />}
+            {step === "line" && <LineStep />}
+            {step === "ground" && <GroundStep />}
             {step === "sequence" && <SequenceStep />}
             {step === "loads" && <LoadsStep register={register} revisionId={revisionId} />}
             {step === "hazards" && <HazardsStep library={library} />}
