@@ -2,7 +2,8 @@
  * Plain words for the gang: each load's handling instruction derived from the assessment and its
  * stored result, for the briefing screens and the briefing sheet. Pure.
  */
-import type { Content, Task } from "../method-statement/content";
+import { NEAR_LINE_LABELS, PROTECTION_LABELS, SUPPORT_LABELS, type Content, type Task } from "../method-statement/content";
+import { permitName } from "../method-statement/lineside";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
@@ -86,7 +87,54 @@ export function instructionFor(task: Task, score: TaskScore, componentName: stri
   };
 }
 
+/** Working near the line and the permits, told first: how the gang is kept safe from trains. */
+export interface LineBriefing {
+  where: string;
+  protection: string | null;
+  protectionDetail: string;
+  responsible: string;
+  accessPoint: string;
+  walkingRoute: string;
+  positionsOfSafety: string;
+  limits: string;
+  permits: { name: string; reference: string; issuedBy: string; valid: string }[];
+  digging: string[];
+}
+
+export function lineBriefing(content: Content): LineBriefing | null {
+  const l = content.lineside;
+  const permits = content.permits.map((p) => ({
+    name: permitName(p),
+    reference: p.reference,
+    issuedBy: p.issuedBy,
+    valid: p.validFrom || p.validTo ? `${p.validFrom || "…"} to ${p.validTo || "…"}` : "",
+  }));
+  const digging: string[] = [];
+  if (content.buriedServices.rule) digging.push(content.buriedServices.rule);
+  if (content.excavation.present) {
+    const e = content.excavation;
+    if (e.support) digging.push(`Excavation${e.depthM !== null ? ` ${fmt(e.depthM, 2)} m deep` : ""}: ${SUPPORT_LABELS[e.support].toLowerCase()}${e.supportDetail ? ` — ${e.supportDetail}` : ""}.`);
+    if (e.edgeProtection) digging.push(e.edgeProtection);
+    if (e.accessEgress) digging.push(`In and out: ${e.accessEgress}`);
+  }
+  if (l.nearLine === "not-near" && permits.length === 0 && digging.length === 0) return null;
+  return {
+    where: NEAR_LINE_LABELS[l.nearLine],
+    protection: l.nearLine === "not-near" || !l.protection ? null : PROTECTION_LABELS[l.protection],
+    protectionDetail: l.protectionDetail,
+    responsible: [l.responsibleName, l.responsibleCompetence && `(${l.responsibleCompetence})`].filter(Boolean).join(" "),
+    accessPoint: l.accessPoint,
+    walkingRoute: l.walkingRoute,
+    positionsOfSafety: l.positionsOfSafety,
+    limits: l.limits,
+    permits,
+    digging,
+  };
+}
+
 export interface BriefingScript {
+  /** Protection from trains, positions of safety and permits: told before anything else. */
+  line: LineBriefing | null;
   sequence: string[];
   loads: LoadInstruction[];
   hazards: { hazard: string; controls: string[] }[];
@@ -97,6 +145,7 @@ export interface BriefingScript {
 /** Everything the foreman reads out, in order. */
 export function briefingScript(content: Content, scores: TaskScore[], componentNames: Record<string, string>): BriefingScript {
   return {
+    line: lineBriefing(content),
     sequence: content.sequence.map((s) => s.text).filter(Boolean),
     loads: content.tasks.map((t, i) => instructionFor(t, scores[i], (t.componentId && componentNames[t.componentId]) || "Load")),
     hazards: content.hazards.map((h) => ({ hazard: h.hazard, controls: h.controls.map((c) => c.text) })),

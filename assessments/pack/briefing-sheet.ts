@@ -5,6 +5,7 @@
 import { PDFDocument } from "pdf-lib";
 import type { BriefingScript } from "../briefing/instructions";
 import { PACK_CAUTION } from "./document";
+import { LINE_CAUTION } from "../method-statement/lineside";
 import type { PackFonts } from "./fonts";
 import { embedPng } from "./images";
 import { COLOURS, Writer } from "./layout";
@@ -27,6 +28,20 @@ export async function buildBriefingSheet(input: BriefingSheetInput, fonts: PackF
   w.heading(`Briefing: ${input.title}`, 1);
   w.text(`${input.jobName} · revision ${input.revisionNumber}`, { size: 13, color: COLOURS.muted });
   for (const change of input.siteChanges) w.text(`SITE CHANGE reported by ${change.by}: ${change.text}`, { size: 14, font: fonts.bold, color: COLOURS.band.act });
+  const line = input.script.line;
+  if (line) {
+    w.heading("Safe from trains");
+    w.text(line.where, { size: 12, color: COLOURS.muted });
+    if (line.protection) w.text(line.protection, { size: 16, font: fonts.bold });
+    if (line.protectionDetail) w.text(line.protectionDetail, big);
+    if (line.responsible) w.text(`Responsible: ${line.responsible}`, { size: 14, font: fonts.bold });
+    if (line.positionsOfSafety) w.text(`Positions of safety: ${line.positionsOfSafety}`, { size: 15, font: fonts.bold });
+    if (line.limits) w.text(`Limits: ${line.limits}`, big);
+    if (line.accessPoint || line.walkingRoute) w.text(`Access: ${[line.accessPoint, line.walkingRoute].filter(Boolean).join(" — ")}`, big);
+    for (const p of line.permits) w.text(`${p.name}: ${p.reference || "no reference"}${p.issuedBy ? `, issued by ${p.issuedBy}` : ""}${p.valid ? `, valid ${p.valid}` : ""}`, { size: 14, font: fonts.bold });
+    for (const d of line.digging) w.text(`- ${d}`, { ...big, indent: 10 });
+    w.text(LINE_CAUTION, { size: 10, font: fonts.italic, color: COLOURS.muted });
+  }
   w.heading("Sequence of work");
   input.script.sequence.forEach((s, i) => w.text(`${i + 1}. ${s}`, big));
   w.heading("Each load");

@@ -12,7 +12,8 @@ import { GROUND_TYPES } from "../lift-plan/ground";
 import { DURATION_LABELS } from "../rules/niosh-frequency";
 import { CONDITION_TEXT } from "../rules/conditions";
 import { gradientText, SURFACE_LABELS } from "../rules/push";
-import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
+import { CONTROL_LEVEL_LABELS, NEAR_LINE_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
+import { buriedServicesRows, environmentRows, excavationRows, LINE_CAUTION, lineRows, permitRows } from "../method-statement/lineside";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
@@ -194,6 +195,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   w.heading("Scope", 3);
   w.text(content.scope.summary || "—");
   if (content.scope.startDate || content.scope.durationShifts) w.text(`Planned start ${content.scope.startDate || "—"}; ${content.scope.durationShifts} shift(s).`, { color: COLOURS.muted });
+  linesideSections(w, content);
   w.heading("Sequence of work", 3);
   content.sequence.forEach((s, i) => w.text(`${i + 1}. ${s.text}`, { indent: 4 }));
   w.heading("People", 3);
@@ -206,8 +208,10 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   w.pairs([
     ["Nearest hospital (A&E)", content.emergency.nearestHospital || "—"],
     ["Arrangements", content.emergency.arrangements || "—"],
-    ["Environment", content.emergency.environment || "—"],
   ]);
+  groundSections(w, content);
+  w.heading("Environment and welfare", 3);
+  w.pairs(environmentRows(content));
 
   // Hazard register
   w.heading("Hazard register");
@@ -288,6 +292,31 @@ function reasons(w: Writer, list: Reason[], warnings: Warning[]) {
     w.text(r.text, { size: 9.5, indent: 4, gap: 1 });
     w.text(`Source: ${r.source}`, { size: 8, color: COLOURS.muted, indent: 12 });
   }
+}
+
+/** Working near the line: told early in the method statement, as in the briefing. */
+function linesideSections(w: Writer, content: Content) {
+  w.heading("Working near the line", 3);
+  const rows = lineRows(content);
+  if (!rows) {
+    w.text(NEAR_LINE_LABELS[content.lineside.nearLine]);
+    return;
+  }
+  w.pairs(rows);
+  w.text(LINE_CAUTION, { size: 9, font: w.fonts.italic, color: COLOURS.muted });
+}
+
+/** Permits, the checks before digging and the excavation. */
+function groundSections(w: Writer, content: Content) {
+  w.heading("Permits", 3);
+  if (content.permits.length === 0) w.text("None listed.");
+  else w.table(["Permit", "Reference", "Issued by", "Valid"], permitRows(content), [0.34, 0.22, 0.26, 0.18]);
+  w.heading("Buried services", 3);
+  w.pairs(buriedServicesRows(content));
+  w.heading("Excavation", 3);
+  const excavation = excavationRows(content);
+  if (excavation) w.pairs(excavation);
+  else w.text("No excavation.");
 }
 
 function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groundNotes?: string) {

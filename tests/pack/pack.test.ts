@@ -104,19 +104,67 @@ describe("the pack PDF", () => {
     expect(types).toEqual(["image", "smask", "image", "image", "image", "smask"]);
   });
 
+  it("prints the lineside method statement: protection from trains, permits, buried services, the excavation, environment and welfare", async () => {
+    const base = packInput(2);
+    const content = structuredClone(base.content);
+    Object.assign(content.lineside, { nearLine: "near", protection: "possession", responsibleName: "Nerys Caldwell", responsibleCompetence: "SSOW-PL 3318", positionsOfSafety: "Behind the fence at the base" });
+    content.permits = [{ kind: "dig", description: "", reference: "PTD-HV-0142", issuedBy: "Permit office", validFrom: "2027-01-04", validTo: "2027-02-28" }];
+    Object.assign(content.buriedServices, { recordsObtained: true, scanned: true, scannedBy: "Kieran Lusk", scanDate: "2027-01-02", rule: "Hand tools only within 0.5 m" });
+    Object.assign(content.excavation, { present: true, depthM: 1.2, support: "trench-box", inspection: "Supervisor, before each shift" });
+    content.environment.welfare = "Welfare van at the access point";
+    const all = flat(text(write("lineside.pdf", await savePack(await buildPack({ ...base, content }, fonts)))));
+    for (const expected of [
+      "Working near the line",
+      "Possession: the line handed over for engineering work",
+      "Nerys Caldwell, SSOW-PL 3318",
+      "Positions of safety",
+      "Behind the fence at the base",
+      "PTD-HV-0142",
+      "2027-01-04 to 2027-02-28",
+      "by Kieran Lusk on 2027-01-02",
+      "Trench box or drag box",
+      "Welfare van at the access point",
+      "it does not plan protection from trains",
+    ])
+      expect(all).toContain(expected);
+  });
+
   it("the briefing sheet uses the same fonts and layout", async () => {
     const pdf = await buildBriefingSheet(
       {
         title: "Equipment base by hand (east side)",
         jobName: "Hollin Vale loop",
         revisionNumber: 2,
-        script: { sequence: ["Set out the base"], loads: [], hazards: [{ hazard: "Trapped fingers", controls: ["Use the bar"] }], ppe: ["Gloves"], emergency: { nearestHospital: "Carrowby General", arrangements: "First aider: site lead" } },
+        script: {
+          line: {
+            where: "Near the line",
+            protection: "Separated from the line by a fence or barrier",
+            protectionDetail: "Fence along the cess edge",
+            responsible: "Nerys Caldwell (SSOW-PL 3318)",
+            accessPoint: "Gorsey Lane gate",
+            walkingRoute: "",
+            positionsOfSafety: "Behind the fence",
+            limits: "",
+            permits: [{ name: "Permit to dig", reference: "PTD-HV-0142", issuedBy: "Permit office", valid: "" }],
+            digging: [],
+          },
+          sequence: ["Set out the base"],
+          loads: [],
+          hazards: [{ hazard: "Trapped fingers", controls: ["Use the bar"] }],
+          ppe: ["Gloves"],
+          emergency: { nearestHospital: "Carrowby General", arrangements: "First aider: site lead" },
+        },
         siteChanges: [],
       },
       fonts,
     );
     const all = flat(text(write("sheet.pdf", pdf)));
     expect(all).toContain("Briefing: Equipment base by hand (east side)");
+    // Protection from trains, the positions of safety and the permits come before anything else.
+    expect(all.indexOf("Safe from trains")).toBeGreaterThan(-1);
+    expect(all.indexOf("Safe from trains")).toBeLessThan(all.indexOf("Sequence of work"));
+    expect(all).toContain("Positions of safety: Behind the fence");
+    expect(all).toContain("Permit to dig: PTD-HV-0142");
     expect(all).toContain("Nearest hospital (A&E): Carrowby General");
     expect(all).toContain("Caution:");
   });

@@ -5,6 +5,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { BandChip } from "@/app/_components/results/band";
 import { SignatureField, type SignatureFieldHandle } from "@/app/_components/signature-field";
 import type { BriefingScript } from "@/assessments/briefing/instructions";
+import { LINE_CAUTION } from "@/assessments/method-statement/lineside";
 import { flush, loadQueue, newKey, saveQueue, type PendingSignOn } from "./sign-on-queue";
 
 interface Props {
@@ -17,12 +18,13 @@ interface Props {
   foremanName: string;
 }
 
-type Screen = { kind: "start" } | { kind: "sequence" } | { kind: "load"; index: number } | { kind: "hazards" } | { kind: "ppe" } | { kind: "emergency" } | { kind: "sign-on" } | { kind: "sign-off" } | { kind: "done" };
+type Screen = { kind: "start" } | { kind: "line" } | { kind: "sequence" } | { kind: "load"; index: number } | { kind: "hazards" } | { kind: "ppe" } | { kind: "emergency" } | { kind: "sign-on" } | { kind: "sign-off" } | { kind: "done" };
 
 const big = "min-h-14 rounded-lg px-5 py-3 text-xl font-bold";
 
 export function BriefingMode({ revisionId, title, revisionNumber, job, script, siteChanges, foremanName }: Props) {
   const screens: Screen[] = [
+    ...(script.line ? [{ kind: "line" } as Screen] : []),
     { kind: "sequence" },
     ...script.loads.map((_, index) => ({ kind: "load", index }) as Screen),
     { kind: "hazards" },
@@ -126,6 +128,7 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
             </button>
           </div>
         )}
+        {screen.kind === "line" && script.line && <LineScreen line={script.line} />}
         {screen.kind === "sequence" && (
           <div>
             <h2 className="mb-3 text-2xl font-bold">The job, step by step</h2>
@@ -211,6 +214,69 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
           )}
         </nav>
       )}
+    </div>
+  );
+}
+
+/** First of all: how the gang is kept safe from trains, where to stand clear, and the permits. */
+function LineScreen({ line }: { line: NonNullable<BriefingScript["line"]> }) {
+  return (
+    <div className="space-y-4 text-xl" data-testid="line-screen">
+      <h2 className="text-2xl font-bold">Safe from trains</h2>
+      <p className="text-base text-muted">{line.where}</p>
+      {line.protection && (
+        <div className="rounded-lg border-4 border-frame p-3">
+          <p className="text-2xl font-bold">{line.protection}</p>
+          {line.protectionDetail && <p>{line.protectionDetail}</p>}
+          {line.responsible && (
+            <p className="mt-2">
+              <strong>Responsible:</strong> {line.responsible}
+            </p>
+          )}
+        </div>
+      )}
+      {line.positionsOfSafety && (
+        <div>
+          <h3 className="font-bold">Positions of safety</h3>
+          <p className="text-2xl">{line.positionsOfSafety}</p>
+        </div>
+      )}
+      {line.limits && (
+        <div>
+          <h3 className="font-bold">Keep to these limits</h3>
+          <p>{line.limits}</p>
+        </div>
+      )}
+      {(line.accessPoint || line.walkingRoute) && (
+        <p>
+          <strong>Access:</strong> {[line.accessPoint, line.walkingRoute].filter(Boolean).join(" — ")}
+        </p>
+      )}
+      {line.permits.length > 0 && (
+        <div>
+          <h3 className="font-bold">Permits</h3>
+          <ul className="space-y-1">
+            {line.permits.map((p, i) => (
+              <li key={i}>
+                <strong>{p.name}</strong> <span className="font-bold tabular-nums">{p.reference || "— no reference"}</span>
+                {p.issuedBy && <span className="text-base text-muted"> · issued by {p.issuedBy}</span>}
+                {p.valid && <span className="text-base text-muted"> · valid {p.valid}</span>}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+      {line.digging.length > 0 && (
+        <div>
+          <h3 className="font-bold">Digging</h3>
+          <ul className="list-disc space-y-1 pl-7">
+            {line.digging.map((d, i) => (
+              <li key={i}>{d}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <p className="text-base text-muted">{LINE_CAUTION}</p>
     </div>
   );
 }

@@ -3,6 +3,21 @@ import { TaskResult } from "@/app/_components/results/task-result";
 import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "@/assessments/method-statement/content";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import type { Band } from "@/assessments/rules/types";
+import { NEAR_LINE_LABELS } from "@/assessments/method-statement/content";
+import { buriedServicesRows, environmentRows, excavationRows, LINE_CAUTION, lineRows, permitRows } from "@/assessments/method-statement/lineside";
+
+function Rows({ rows }: { rows: [string, string][] }) {
+  return (
+    <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[16rem_1fr]">
+      {rows.map(([k, v]) => (
+        <div key={k} className="contents">
+          <dt className="font-bold">{k}</dt>
+          <dd className="whitespace-pre-line">{v}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
 
 function Section({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -22,6 +37,16 @@ export function ReadOnlyRevision({ content, scores, worstBand }: { content: Cont
       </div>
       <Section title="Scope">
         <p className="whitespace-pre-line">{content.scope.summary || "—"}</p>
+      </Section>
+      <Section title="Near the line">
+        {lineRows(content) ? (
+          <>
+            <Rows rows={lineRows(content)!} />
+            <p className="text-sm text-muted">{LINE_CAUTION}</p>
+          </>
+        ) : (
+          <p>{NEAR_LINE_LABELS[content.lineside.nearLine]}</p>
+        )}
       </Section>
       <Section title="Sequence of work">
         <ol className="list-decimal pl-6">
@@ -85,12 +110,30 @@ export function ReadOnlyRevision({ content, scores, worstBand }: { content: Cont
           <strong>PPE:</strong> {content.people.ppe.filter(Boolean).join("; ") || "—"}
         </p>
       </Section>
+      <Section title="Permits, services & digging">
+        <h3 className="font-bold">Permits</h3>
+        {content.permits.length ? (
+          <ul>
+            {permitRows(content).map(([name, ref, by, valid], i) => (
+              <li key={i}>
+                <strong>{name}:</strong> {ref} · issued by {by} · valid {valid}
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p>None listed.</p>
+        )}
+        <h3 className="font-bold">Buried services</h3>
+        <Rows rows={buriedServicesRows(content)} />
+        <h3 className="font-bold">Excavation</h3>
+        {excavationRows(content) ? <Rows rows={excavationRows(content)!} /> : <p>No excavation.</p>}
+      </Section>
       <Section title="Emergency & environment">
         <p>
           <strong>Nearest hospital (emergency department):</strong> {content.emergency.nearestHospital || "—"}
         </p>
         <p className="whitespace-pre-line">{content.emergency.arrangements}</p>
-        <p className="whitespace-pre-line text-muted">{content.emergency.environment}</p>
+        <Rows rows={environmentRows(content)} />
       </Section>
     </div>
   );
