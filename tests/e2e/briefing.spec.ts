@@ -34,6 +34,16 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await page.getByRole("link", { name: "Brief the gang" }).click();
   await page.getByLabel("Where are you briefing?").fill("Gorsey Lane access gate");
   await page.getByRole("button", { name: "Start" }).click();
+  // First of all, how the gang is kept safe from trains: the arrangement, the positions of safety, the permits.
+  const line = page.getByTestId("line-screen");
+  await expect(line.getByRole("heading", { name: "Safe from trains" })).toBeVisible();
+  await expect(line).toContainText("Separated from the line by a fence or barrier");
+  await expect(line).toContainText("Nerys Caldwell");
+  await expect(line.getByRole("heading", { name: "Positions of safety" })).toBeVisible();
+  await expect(line).toContainText("Behind the temporary fence");
+  await expect(line).toContainText("PTD-HV-0142");
+  expect(await axe(page)).toEqual([]);
+  await page.getByRole("button", { name: "Next" }).click();
   await expect(page.getByRole("heading", { name: "The job, step by step" })).toBeVisible();
   expect(await axe(page)).toEqual([]);
   await page.getByRole("button", { name: "Next" }).click();

@@ -75,3 +75,55 @@ test("the lineside template: a braked trolley on rails, parts passed into an exc
   await page.getByLabel("Hitch").selectOption("basket");
   await expect(page.getByText("a basket or endless sling is one sling: 1 leg")).toBeVisible();
 });
+
+test("the review step blocks lineside gaps: no protection arrangement, no responsible person, a permit without its reference", async ({ page }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/assessments/new");
+  const form = page.getByRole("form", { name: "New assessment" });
+  await form.getByLabel("Job").selectOption({ label: "Carrowby cutting: troughing route renewal" });
+  await form.getByLabel("Title").fill("Trough route near the line");
+  await form.getByLabel(/Laying a cable trough route/).check();
+  await form.getByRole("button", { name: "Create and open" }).click();
+
+  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  const missing = page.getByTestId("missing");
+  await expect(missing).toContainText("Name the person responsible for the safe system of work.");
+  await expect(missing).toContainText("Say where the positions of safety are.");
+  await expect(page.getByRole("button", { name: "Submit for approval" })).toBeDisabled();
+
+  // Near the line: clearing the arrangement is a blocker too; the caution says what Heftwise does not do.
+  await missing.getByRole("button", { name: "Near the line" }).first().click();
+  await expect(page.getByText("it does not plan protection from trains")).toBeVisible();
+  await page.getByLabel("Protection arrangement").selectOption("");
+  await page.getByLabel("Person responsible for the safe system of work").fill("Nerys Caldwell");
+  await page.getByLabel("Their competence reference").fill("SSOW-PL 3318");
+  await page.getByLabel("Planning reference of the arrangement").fill("WHV <0417>");
+  await expect(page.getByText("Use letters, digits, spaces and - / . _ : # only")).toBeVisible();
+  await page.getByLabel("Planning reference of the arrangement").fill("WHV-SSOW-0417");
+  await page.getByLabel("Positions of safety").fill("The cess beyond the fence line, every 20 m");
+
+  // A permit listed without its reference; its dates the wrong way round.
+  await steps(page).getByRole("button", { name: /Permits, services & digging/ }).click();
+  await page.getByRole("button", { name: "Add a permit" }).click();
+  const permit = page.getByRole("group", { name: "Permit 1" });
+  await permit.getByLabel("Permit", { exact: true }).selectOption("hot-work");
+  await permit.getByLabel("Issued by").fill("Site permit office");
+  await permit.getByLabel("Valid from").fill("2027-03-10");
+  await permit.getByLabel("Valid to").fill("2027-03-01");
+  await expect(permit.getByText("Must be on or after the start date")).toBeVisible();
+  await permit.getByLabel("Valid to").fill("2027-03-12");
+
+  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await expect(missing).toContainText("Choose the protection arrangement for working on or near the line.");
+  await expect(missing).toContainText("Hot work permit: the permit is listed as needed but has no reference.");
+  await expect(missing).not.toContainText("Name the person responsible");
+  await expect(page.getByRole("button", { name: "Submit for approval" })).toBeDisabled();
+
+  await steps(page).getByRole("button", { name: /Near the line/ }).click();
+  await page.getByLabel("Protection arrangement").selectOption("line-blockage");
+  await steps(page).getByRole("button", { name: /Permits, services & digging/ }).click();
+  await page.getByRole("group", { name: "Permit 1" }).getByLabel("Reference").fill("HW-0093");
+  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await expect(missing).not.toContainText("protection arrangement");
+  await expect(missing).not.toContainText("Hot work permit");
+});
