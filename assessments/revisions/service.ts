@@ -114,6 +114,9 @@ export async function createAssessment(actor: Actor | null, input: unknown): Pro
   }
   content.emergency.nearestHospital ||= job.nearestHospital ?? "";
   content.emergency.arrangements ||= job.emergencyArrangements ?? "";
+  content.lineside.accessPoint ||= job.accessPoint ?? "";
+  // A job on the railway starts as near the line: saying it is not is a choice, never a default.
+  if (job.lineReference?.trim() && !data.templateId) content.lineside.nearLine = "near";
   const review = reviewContent(content, await register(actor.organisationId));
   return db.transaction(async (tx) => {
     const [assessment] = await tx.insert(assessments).values({ organisationId: actor.organisationId, jobId: job.id, title: data.title, createdBy: actor.id }).returning();

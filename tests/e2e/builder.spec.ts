@@ -54,6 +54,15 @@ test("an adviser builds an assessment through the wizard, watches the live score
   await form.getByRole("button", { name: "Create and open" }).click();
 
   await page.getByLabel("Scope of the work").fill("Fit an axle counter head and lay two trough sections.");
+  // A railway job starts near the line, with the job's access point.
+  await steps(page).getByRole("button", { name: /Near the line/ }).click();
+  await expect(page.getByLabel("Where is the work?")).toHaveValue("near");
+  await expect(page.getByLabel("Access point", { exact: true })).toHaveValue(/Gorsey Lane access gate/);
+  await page.getByLabel("Where is the work?").selectOption("on");
+  await page.getByLabel("Protection arrangement").selectOption("line-blockage");
+  await page.getByLabel("Person responsible for the safe system of work").fill("Nerys Caldwell");
+  await page.getByLabel("Their competence reference").fill("SSOW-PL 3318");
+  await page.getByLabel("Positions of safety").fill("Up cess beyond the cabinet, clear of the fence line");
   await steps(page).getByRole("button", { name: /Sequence of work/ }).click();
   await page.getByRole("button", { name: "Add a step" }).click();
   await page.getByLabel("Step 1", { exact: true }).fill("Brief the gang at the access point.");

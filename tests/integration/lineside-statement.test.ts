@@ -104,3 +104,15 @@ describe("dates and references are validated", () => {
     expect(parsed.excavation.present).toBe(false);
   });
 });
+
+describe("a new assessment on a railway job", () => {
+  it("starts near the line, with the job's access point", async () => {
+    const jobs = await (await import("@/assessments/jobs/queries")).listJobs(adviser);
+    const railway = jobs.find((j) => j.lineReference)!;
+    const { revisionId: id } = await createAssessment(adviser, { jobId: railway.id, title: "Blank, on the railway" });
+    const { content } = await getRevision(adviser, id);
+    expect(content.lineside.nearLine).toBe("near");
+    expect(content.lineside.accessPoint).toBe(railway.accessPoint);
+    expect(messages(content)).toContain("Choose the protection arrangement for working on or near the line.");
+  });
+});
