@@ -9,6 +9,7 @@ import { getDb } from "@/db/client";
 import { componentAttachments, components } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow, type FieldIssue } from "@/lib/errors";
+import { formulaNote, parseCsvNumber } from "./csv-cells";
 import { page, pageQuerySchema } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
 import { deleteFile, getFile, putFile } from "@/lib/storage";
@@ -87,9 +88,35 @@ export interface ImportRow {
   line: number;
   values: Record<string, string>;
   errors: FieldIssue[];
+  /** Stored as they are, but worth a look: text a spreadsheet would run as a formula. */
+  notes: FieldIssue[];
 }
 
-const toNumber = (v: string | undefined) => (v === undefined || v.trim() === "" ? null : Number(v.trim().replace(/,/g, "")));
+const NUMBER_COLUMNS = { mass_kg: "massKg", length_mm: "lengthMm", width_mm: "widthMm", height_mm: "heightMm" } as const;
+
+/** A CSV row as the component schema's input, and the cells that could not be read as numbers. */
+function rowCandidate(values: Record<string, string>) {
+  const cellErrors: FieldIssue[] = [];
+  const numbers: Record<string, number | null> = {};
+  for (const [column, field] of Object.entries(NUMBER_COLUMNS)) {
+    const cell = parseCsvNumber(values[column]);
+    if ("error" in cell) {
+      cellErrors.push({ path: field, message: cell.error });
+      numbers[field] = field === "massKg" ? Number.NaN : null;
+    } else numbers[field] = field === "massKg" ? (cell.value ?? Number.NaN) : cell.value;
+  }
+  const candidate = {
+    name: values.name ?? "",
+    massKg: numbers.massKg,
+    lengthMm: numbers.lengthMm,
+    widthMm: numbers.widthMm,
+    heightMm: numbers.heightMm,
+    grip: (values.grip ?? "").trim().toLowerCase(),
+    massSource: (values.mass_source ?? "").trim().toLowerCase(),
+    notes: values.notes ?? "",
+  };
+  return { candidate, cellErrors };
+}
 
 /** Parses and checks a CSV without writing anything: every row with its errors. */
 export async function previewImport(actor: Actor | null, csv: string): Promise<{ rows: ImportRow[]; problems: string[] }> {
@@ -111,23 +138,23 @@ export async function previewImport(actor: Actor | null, csv: string): Promise<{
   );
   const seen = new Set<string>();
   const rows = parsed.data.slice(0, MAX_IMPORT_ROWS).map((values, i): ImportRow => {
-    const candidate = {
-      name: values.name ?? "",
-      massKg: toNumber(values.mass_kg) ?? Number.NaN,
-      lengthMm: toNumber(values.length_mm),
-      widthMm: toNumber(values.width_mm),
-      heightMm: toNumber(values.height_mm),
-      grip: (values.grip ?? "").trim().toLowerCase(),
-      massSource: (values.mass_source ?? "").trim().toLowerCase(),
-      notes: values.notes ?? "",
-    };
+    const { candidate, cellErrors } = rowCandidate(values);
     const result = componentSchema.safeParse(candidate);
-    const errors: FieldIssue[] = result.success ? [] : result.error.issues.map((issue) => ({ path: String(issue.path[0] ?? ""), message: issue.message }));
+    // A cell that is not a number says why once, not again as the schema's "enter the mass".
+    const errors: FieldIssue[] = [
+      ...cellErrors,
+      ...(result.success ? [] : result.error.issues.map((issue) => ({ path: String(issue.path[0] ?? ""), message: issue.message })).filter((e) => !cellErrors.some((c) => c.path === e.path))),
+    ];
+    const notes: FieldIssue[] = [];
+    for (const column of ["name", "notes"] as const) {
+      const note = formulaNote(values[column]);
+      if (note) notes.push({ path: column, message: note });
+    }
     const key = candidate.name.trim().toLowerCase();
     if (key && existing.has(key)) errors.push({ path: "name", message: "Already in the register" });
     else if (key && seen.has(key)) errors.push({ path: "name", message: "Appears twice in this file" });
     seen.add(key);
-    return { line: i + 2, values, errors };
+    return { line: i + 2, values, errors, notes };
   });
   return { rows, problems };
 }
@@ -139,19 +166,7 @@ export async function importComponents(actor: Actor | null, csv: string): Promis
   if (problems.length || rowIssues.length)
     throw new AppError("validation", "Nothing was imported: fix the file and try again", [...problems.map((p) => ({ path: "file", message: p })), ...rowIssues]);
   const db = await getDb();
-  const values = rows.map((r) => ({
-    ...componentSchema.parse({
-      name: r.values.name,
-      massKg: toNumber(r.values.mass_kg),
-      lengthMm: toNumber(r.values.length_mm),
-      widthMm: toNumber(r.values.width_mm),
-      heightMm: toNumber(r.values.height_mm),
-      grip: r.values.grip.trim().toLowerCase(),
-      massSource: r.values.mass_source.trim().toLowerCase(),
-      notes: r.values.notes ?? "",
-    }),
-    organisationId: actor!.organisationId,
-  }));
+  const values = rows.map((r) => ({ ...componentSchema.parse(rowCandidate(r.values).candidate), organisationId: actor!.organisationId }));
   await db.transaction(async (tx) => {
     const inserted = await tx.insert(components).values(values).returning({ id: components.id });
     await recordAudit(tx, { organisationId: actor!.organisationId, actorId: actor!.id, action: "component.imported", entityType: "component", entityId: null, details: { count: inserted.length } });

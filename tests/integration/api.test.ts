@@ -147,6 +147,22 @@ describe("components", () => {
     expect((await call(actors.approver, importRoute.POST, { body: good, type: "text/csv" })).status).toBe(403);
     expect((await call(actors.adviser, importRoute.POST, { body: good, type: "application/json" })).status).toBe(415);
   });
+
+  it("CSV import reads masses exactly or refuses them: a decimal comma is 12.5 kg, never 125; '1,250' is refused; formula-like text is noted", async () => {
+    const ambiguous = "name,mass_kg,grip,mass_source\nComma lid,\"1,250\",fair,weighed\n";
+    const refused = await call(actors.adviser, importRoute.POST, { body: ambiguous, type: "text/csv" });
+    expect(refused.status).toBe(422);
+    expect(refused.json.error.issues.find((i: { path: string }) => i.path === "line 2.massKg").message).toMatch(/could mean 1250 or 1.250/);
+    expect((await call(actors.adviser, componentsRoute.GET, { query: "?q=Comma lid" })).json.total).toBe(0);
+
+    const comma = "name,mass_kg,grip,mass_source,notes\nComma lid,\"12,5\",fair,weighed,\n=HYPERLINK(\"x\"),3,good,weighed,@note\n";
+    const preview = await call(actors.adviser, importRoute.POST, { body: comma, type: "text/csv", query: "?dryRun=1" });
+    expect(preview.json.rows[0].errors).toEqual([]);
+    expect(preview.json.rows[1].notes.map((n: { path: string }) => n.path)).toEqual(["name", "notes"]);
+    expect((await call(actors.adviser, importRoute.POST, { body: comma, type: "text/csv" })).status).toBe(201);
+    const stored = (await call(actors.adviser, componentsRoute.GET, { query: "?q=Comma lid" })).json.items[0];
+    expect(stored.massKg).toBe(12.5);
+  });
 });
 
 describe("assessments, revisions and tasks", () => {

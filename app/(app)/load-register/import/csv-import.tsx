@@ -8,6 +8,7 @@ interface Row {
   line: number;
   values: Record<string, string>;
   errors: { path: string; message: string }[];
+  notes: { path: string; message: string }[];
 }
 
 export function CsvImport() {
@@ -89,10 +90,15 @@ export function CsvImport() {
                     <td className="px-3 py-2 tabular-nums">{r.values.mass_kg}</td>
                     <td className="px-3 py-2">{r.values.grip}</td>
                     <td className="px-3 py-2">{r.values.mass_source}</td>
-                    <td className="px-3 py-2 text-danger">
+                    <td className="px-3 py-2">
                       {r.errors.map((e) => (
-                        <div key={e.path + e.message}>
+                        <div key={e.path + e.message} className="text-danger">
                           {e.path}: {e.message}
+                        </div>
+                      ))}
+                      {r.notes.map((e) => (
+                        <div key={e.path + e.message} className="text-muted" data-testid="import-note">
+                          Note — {e.path} {e.message}
                         </div>
                       ))}
                     </td>
