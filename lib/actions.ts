@@ -2,7 +2,7 @@
  * What every server action returns: success with an optional message, or the AppError as plain
  * data the form can show (field messages included). Unexpected errors are logged, not shown.
  */
-import { AppError, type ErrorCode, type FieldIssue } from "./errors";
+import { toAppError, type ErrorCode, type FieldIssue } from "./errors";
 
 export type ActionResult<T = unknown> =
   | { ok: true; message?: string; data?: T }
@@ -13,7 +13,8 @@ export async function runAction<T>(fn: () => Promise<{ message?: string; data?: 
     const result = (await fn()) ?? {};
     return { ok: true, ...result };
   } catch (err) {
-    if (err instanceof AppError) return { ok: false, code: err.code, message: err.message, issues: err.issues };
+    const known = toAppError(err);
+    if (known) return { ok: false, code: known.code, message: known.message, issues: known.issues };
     console.error(err);
     return { ok: false, code: "internal", message: "Something went wrong on the server. Nothing was changed; try again." };
   }

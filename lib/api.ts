@@ -1,20 +1,48 @@
 /**
- * Route handler plumbing: read a JSON body safely (type, size, syntax), and turn any AppError into
- * its status and `{"error": {...}}` body. Handlers stay thin: parse, authorize, call the domain.
+ * Route handler plumbing: read a body safely (type, a byte limit enforced while reading, syntax),
+ * and turn any AppError into its status and `{"error": {...}}` body. Handlers stay thin: parse,
+ * authorize, call the domain.
  */
 import { NextResponse } from "next/server";
-import { AppError } from "./errors";
+import { AppError, toAppError } from "./errors";
 
 export const MAX_JSON_BYTES = 1_000_000;
 
+const tooLarge = (maxBytes: number) => new AppError("payload_too_large", `The body is larger than ${formatBytes(maxBytes)}`);
+const formatBytes = (n: number) => (n >= 1024 * 1024 ? `${Math.round(n / 1024 / 1024)} MB` : `${Math.round(n / 1000)} kB`);
+
+/**
+ * The body's bytes, read as a stream and abandoned as soon as it passes `maxBytes` (413): a body
+ * without a Content-Length (chunked) is never buffered whole. A declared length over the limit is
+ * refused before reading.
+ */
+export async function readBodyBytes(request: Request, maxBytes: number): Promise<Uint8Array> {
+  if (Number(request.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge(maxBytes);
+  if (!request.body) return new Uint8Array(0);
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge(maxBytes);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks);
+}
+
+const requireType = (request: Request, accepted: string[], message: string) => {
+  const type = (request.headers.get("content-type") ?? "").toLowerCase();
+  if (!accepted.some((a) => type.startsWith(a))) throw new AppError("unsupported_media_type", message);
+};
+
 export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Promise<unknown> {
-  const type = request.headers.get("content-type") ?? "";
-  if (!type.toLowerCase().startsWith("application/json"))
-    throw new AppError("unsupported_media_type", "Send the body as application/json");
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > maxBytes) throw new AppError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
-  const text = await request.text();
-  if (Buffer.byteLength(text) > maxBytes) throw new AppError("payload_too_large", `The body is larger than ${maxBytes} bytes`);
+  requireType(request, ["application/json"], "Send the body as application/json");
+  const text = new TextDecoder().decode(await readBodyBytes(request, maxBytes));
   try {
     return JSON.parse(text);
   } catch {
@@ -22,8 +50,24 @@ export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Pro
   }
 }
 
+/** A text body (CSV) of one of the accepted types, within the byte limit. */
+export async function readText(request: Request, accepted: string[], maxBytes: number, message: string): Promise<string> {
+  requireType(request, accepted, message);
+  return new TextDecoder().decode(await readBodyBytes(request, maxBytes));
+}
+
+/** A multipart/form-data body within the byte limit (files included). */
+export async function readForm(request: Request, maxBytes: number, message: string): Promise<FormData> {
+  requireType(request, ["multipart/form-data"], message);
+  const bytes = await readBodyBytes(request, maxBytes);
+  return new Response(new Blob([bytes as Uint8Array<ArrayBuffer>]), { headers: { "content-type": request.headers.get("content-type")! } }).formData().catch(() => {
+    throw new AppError("bad_request", "The upload could not be read");
+  });
+}
+
 export function errorResponse(err: unknown): NextResponse {
-  if (err instanceof AppError) return NextResponse.json(err.toJSON(), { status: err.status });
+  const known = toAppError(err);
+  if (known) return NextResponse.json(known.toJSON(), { status: known.status });
   console.error(err);
   return NextResponse.json({ error: { code: "internal", message: "Something went wrong on the server" } }, { status: 500 });
 }

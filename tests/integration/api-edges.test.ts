@@ -66,4 +66,45 @@ describe.each(routes)("$name", ({ load, method, allowed, refused, params = {} })
     expect((await send(handler, method, params, "{}", "text/plain")).status).toBe(415);
     expect((await send(handler, method, params, JSON.stringify({ pad: "x".repeat(1_100_000) }))).status).toBe(413);
   });
+
+  it("answers 413 to a chunked body over the limit as soon as it passes it, without reading the rest", async () => {
+    const handler = await load();
+    session.actor = actors[allowed];
+    let pulled = 0;
+    const chunk = new TextEncoder().encode(`"${"x".repeat(64 * 1024)}",`);
+    const body = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled++;
+        if (pulled > 400) controller.close(); // about 26 MB if read whole
+        else controller.enqueue(pulled === 1 ? new TextEncoder().encode("[") : chunk);
+      },
+    });
+    const res = await handler(new Request("http://localhost/api/v1/x", { method, headers: { "content-type": "application/json" }, body, duplex: "half" } as RequestInit), { params: Promise.resolve(params) });
+    expect(res.status).toBe(413);
+    expect(pulled).toBeLessThan(40);
+  });
+});
+
+describe("text PostgreSQL cannot store, and the database's own refusals", () => {
+  it("a NUL or a broken character in any text field answers 422 on that field, and nothing is written", async () => {
+    const jobs = (await import("@/app/api/v1/jobs/route")).POST as Handler;
+    session.actor = actors.adviser;
+    const job = { name: "Tolgarth\u0000 footbridge", client: "Wendmoor Railway Infrastructure", location: "Tolgarth", nearestHospital: "Tolgarth Community Hospital", emergencyArrangements: "Call 999" };
+    const nul = await send(jobs, "POST", {}, JSON.stringify(job));
+    expect(nul.status).toBe(422);
+    expect(nul.body.error.issues).toEqual([{ path: "name", message: expect.stringContaining("cannot be stored") }]);
+    const broken = await send(jobs, "POST", {}, JSON.stringify({ ...job, name: "Tolgarth", location: "Tolgarth \ud800 cess" }));
+    expect(broken.status).toBe(422);
+    expect(broken.body.error.issues[0].path).toBe("location");
+    const list = await (await import("@/app/api/v1/jobs/route")).GET(new Request("http://localhost/api/v1/jobs?q=Tolgarth"));
+    expect(((await list.json()) as { items: { name: string }[] }).items.filter((j) => j.name.startsWith("Tolgarth"))).toEqual([]);
+  });
+
+  it("a database refusal of the data (class 22) is a 422 and a taken unique key a 409, never a 500", async () => {
+    const { toAppError } = await import("@/lib/errors");
+    expect(toAppError({ code: "22P05", message: "unsupported Unicode escape sequence" })?.status).toBe(422);
+    expect(toAppError(Object.assign(new Error("Failed query"), { cause: { code: "22021" } }))?.status).toBe(422);
+    expect(toAppError(Object.assign(new Error("Failed query"), { cause: { code: "23505" } }))?.status).toBe(409);
+    expect(toAppError(new Error("something else"))).toBeNull();
+  });
 });

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { verifyPack } from "@/assessments/revisions/approval";
-import { handler } from "@/lib/api";
+import { handler, readForm } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 
 export const MAX_VERIFY_BYTES = 20 * 1024 * 1024;
@@ -10,11 +10,7 @@ export const MAX_VERIFY_BYTES = 20 * 1024 * 1024;
  * at most 20 MB. The answer names the revision only for a pack Heftwise issued or an altered copy of one.
  */
 export const POST = handler(async (request: Request) => {
-  if (!(request.headers.get("content-type") ?? "").startsWith("multipart/form-data")) throw new AppError("unsupported_media_type", "Upload the PDF as multipart/form-data");
-  if (Number(request.headers.get("content-length") ?? "0") > MAX_VERIFY_BYTES + 64 * 1024) throw new AppError("payload_too_large", "The file is larger than 20 MB");
-  const form = await request.formData().catch(() => {
-    throw new AppError("bad_request", "The upload could not be read");
-  });
+  const form = await readForm(request, MAX_VERIFY_BYTES + 64 * 1024, "Upload the PDF as multipart/form-data");
   const file = form.get("file");
   if (!(file instanceof File) || file.size === 0) throw new AppError("validation", "Choose a PDF", [{ path: "file", message: "Choose a PDF" }]);
   if (file.size > MAX_VERIFY_BYTES) throw new AppError("payload_too_large", "The file is larger than 20 MB");

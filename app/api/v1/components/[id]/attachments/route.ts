@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { addAttachment, getComponent, MAX_ATTACHMENT_BYTES } from "@/assessments/load-register/service";
-import { handler } from "@/lib/api";
+import { handler, readForm } from "@/lib/api";
 import { requireApiActor } from "@/lib/auth/api";
 import { AppError } from "@/lib/errors";
 
@@ -9,13 +9,7 @@ export const POST = handler(async (request: Request, { params }: { params: Promi
   const actor = await requireApiActor("components:write");
   const { id } = await params;
   await getComponent(actor, id);
-  if (!(request.headers.get("content-type") ?? "").startsWith("multipart/form-data"))
-    throw new AppError("unsupported_media_type", "Send the file as multipart/form-data in a field named file");
-  if (Number(request.headers.get("content-length") ?? "0") > MAX_ATTACHMENT_BYTES + 64 * 1024)
-    throw new AppError("payload_too_large", `Files can be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
-  const form = await request.formData().catch(() => {
-    throw new AppError("bad_request", "The upload could not be read");
-  });
+  const form = await readForm(request, MAX_ATTACHMENT_BYTES + 64 * 1024, "Send the file as multipart/form-data in a field named file");
   const file = form.get("file");
   if (!(file instanceof File)) throw new AppError("validation", "Choose a file", [{ path: "file", message: "Choose a file" }]);
   const row = await addAttachment(actor, id, { name: file.name, data: new Uint8Array(await file.arrayBuffer()) });
