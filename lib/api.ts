@@ -4,6 +4,7 @@
  * authorize, call the domain.
  */
 import { NextResponse } from "next/server";
+import { config } from "./config";
 import { AppError, toAppError } from "./errors";
 
 export const MAX_JSON_BYTES = 1_000_000;
@@ -72,10 +73,28 @@ export function errorResponse(err: unknown): NextResponse {
   return NextResponse.json({ error: { code: "internal", message: "Something went wrong on the server" } }, { status: 500 });
 }
 
-/** Wraps a route handler so that every thrown error becomes a JSON error response. */
+const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
+
+/**
+ * A state-changing request from another site's page carries the user's cookie but the browser
+ * marks where it came from: refuse it (403). Requests without an Origin or Sec-Fetch-Site (scripts,
+ * curl) are judged by their credentials alone.
+ */
+export function refuseCrossSite(request: Request, publicOrigin: string): void {
+  if (SAFE_METHODS.has(request.method)) return;
+  const site = request.headers.get("sec-fetch-site");
+  if (site === "cross-site" || site === "same-site") throw new AppError("forbidden", "Requests from another site are refused");
+  const origin = request.headers.get("origin");
+  if (origin && origin !== "null" && origin !== publicOrigin) throw new AppError("forbidden", "Requests from another site are refused");
+  if (origin === "null") throw new AppError("forbidden", "Requests from another site are refused");
+}
+
+/** Wraps a route handler so that cross-site writes are refused and every thrown error becomes a JSON error response. */
 export function handler<Args extends unknown[]>(fn: (...args: Args) => Promise<Response>) {
   return async (...args: Args): Promise<Response> => {
     try {
+      const request = args[0];
+      if (request instanceof Request) refuseCrossSite(request, new URL(config().NEXTAUTH_URL).origin);
       return await fn(...args);
     } catch (err) {
       return errorResponse(err);

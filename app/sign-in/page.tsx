@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { AuthFrame } from "@/app/_components/auth-frame";
+import { safeCallbackPath } from "@/lib/auth/callback";
 import { getActor } from "@/lib/auth/session";
 import { SignInForm } from "./sign-in-form";
 
@@ -10,7 +11,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   if (await getActor()) redirect("/");
   const { callbackUrl, welcome } = await searchParams;
   // Only paths on this site: an open redirect would let a link send people elsewhere after sign-in.
-  const target = callbackUrl && callbackUrl.startsWith("/") && !callbackUrl.startsWith("//") ? callbackUrl : "/";
+  const target = safeCallbackPath(callbackUrl);
   return (
     <AuthFrame title="Sign in">
       <p className="mb-4 text-sm text-muted">Manual-handling and lift-plan assessments for your sites.</p>

@@ -85,6 +85,29 @@ describe.each(routes)("$name", ({ load, method, allowed, refused, params = {} })
   });
 });
 
+describe("writes from another site's page are refused, whatever the content type", () => {
+  const job = { name: "Cross-site job", client: "Wendmoor Railway Infrastructure", location: "Tolgarth", nearestHospital: "Tolgarth Community Hospital", emergencyArrangements: "Call 999" };
+  const post = async (headers: Record<string, string>) => {
+    const jobs = (await import("@/app/api/v1/jobs/route")).POST as Handler;
+    session.actor = actors.adviser;
+    const res = await jobs(new Request("http://localhost/api/v1/jobs", { method: "POST", headers: { "content-type": "application/json", ...headers }, body: JSON.stringify(job) }), { params: Promise.resolve({}) });
+    return res.status;
+  };
+  it.each([{ origin: "https://evil.example" }, { origin: "null" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://other.localhost:3000" }])("%o → 403", async (headers) => {
+    expect(await post(headers)).toBe(403);
+  });
+  it("a CSV import from another site is refused too (a simple content type a form can send)", async () => {
+    const imp = (await import("@/app/api/v1/components/import/route")).POST as Handler;
+    session.actor = actors.adviser;
+    const res = await imp(new Request("http://localhost/api/v1/components/import", { method: "POST", headers: { "content-type": "text/plain", origin: "https://evil.example" }, body: "name,mass_kg,grip,mass_source\nEvil,1,good,weighed\n" }), { params: Promise.resolve({}) });
+    expect(res.status).toBe(403);
+  });
+  it("the same origin, or a client that sends no Origin, is judged by its credentials", async () => {
+    const { config } = await import("@/lib/config");
+    expect(await post({ origin: new URL(config().NEXTAUTH_URL).origin, "sec-fetch-site": "same-origin" })).toBe(201);
+  });
+});
+
 describe("text PostgreSQL cannot store, and the database's own refusals", () => {
   it("a NUL or a broken character in any text field answers 422 on that field, and nothing is written", async () => {
     const jobs = (await import("@/app/api/v1/jobs/route")).POST as Handler;
