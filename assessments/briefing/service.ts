@@ -21,6 +21,7 @@ import { contentSchema } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { briefingScript } from "./instructions";
 import { attendeeSchema, completeBriefingSchema, siteChangeSchema, startBriefingSchema } from "./schemas";
+import { isAssignedToJob } from "./assignment";
 
 const isUuid = (s: string) => z.uuid().safeParse(s).success;
 const startOfToday = () => {
@@ -68,8 +69,7 @@ async function briefableRevision(actor: Actor, revisionId: string) {
     ? await db.select({ revision: revisions, assessment: assessments, job: jobs }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).innerJoin(jobs, eq(jobs.id, assessments.jobId)).where(eq(revisions.id, revisionId))
     : [];
   if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved") throw AppError.notFound("Approved revision");
-  const [assigned] = await db.select().from(jobAssignments).where(and(eq(jobAssignments.jobId, row.job.id), eq(jobAssignments.userId, actor.id)));
-  if (!assigned) throw AppError.notFound("Approved revision");
+  if (!(await isAssignedToJob(actor, row.job.id))) throw AppError.notFound("Approved revision");
   return row;
 }
 
@@ -198,6 +198,8 @@ export async function createSiteChangeNote(actor: Actor | null, input: unknown, 
 export async function listForemen(actor: Actor | null, jobId: string) {
   authorize(actor, "jobs:write");
   const db = await getDb();
+  const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
+  if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
   const foremen = await db.select({ id: users.id, name: users.name }).from(users).where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "foreman"), eq(users.active, true))).orderBy(asc(users.name));
   const assigned = isUuid(jobId) ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId)) : [];
   return foremen.map((f) => ({ ...f, assigned: assigned.some((a) => a.userId === f.id) }));

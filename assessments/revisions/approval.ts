@@ -22,6 +22,7 @@ import { renderPack } from "../pack/render";
 import { STEP_KEYS, submitRevisionSchema } from "./schemas";
 import { reviewContent } from "../method-statement/score-task";
 import { contentHash, getRevision, loadRevision } from "./service";
+import { isAssignedToJob } from "../briefing/assignment";
 
 const appUrl = () => config().NEXTAUTH_URL.replace(/\/$/, "");
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
@@ -227,14 +228,15 @@ export async function getPackFile(actor: Actor | null, revisionId: string): Prom
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   const db = await getDb();
   const [row] = z.uuid().safeParse(revisionId).success
-    ? await db.select({ revision: revisions, title: assessments.title }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).where(eq(revisions.id, revisionId))
+    ? await db.select({ revision: revisions, title: assessments.title, jobId: assessments.jobId }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).where(eq(revisions.id, revisionId))
     : [];
   if (!row || row.revision.organisationId !== actor.organisationId) throw AppError.notFound("Pack");
   const r = row.revision;
   const allowed =
     can(actor, "assessments:read") ||
     (can(actor, "reviews:read") && r.approverId === actor.id) ||
-    (can(actor, "briefings:run") && (r.status === "approved" || r.status === "superseded"));
+    // A foreman: the same rule as the briefings — approved work of the jobs they are assigned to.
+    (can(actor, "briefings:run") && (r.status === "approved" || r.status === "superseded") && (await isAssignedToJob(actor, row.jobId)));
   if (!allowed) throw new AppError("forbidden", "Your role does not allow this");
   const [pack] = await db
     .select({ kind: issuedPacks.kind, data: storedFiles.data })
@@ -275,9 +277,12 @@ export async function verifyPack(data: Uint8Array): Promise<Verification> {
     const r = await describe(issued.revisionId);
     return { result: "authentic", status: r.status, title: r.title, revision: r.number, organisation: r.organisation, approvedAt: r.approvedAt, kind: issued.kind };
   }
+  // An altered copy is named only when Heftwise issued a pack of that revision: a file that merely
+  // contains a revision's id (a draft's, say) learns nothing about it.
   const named = Buffer.from(data).toString("latin1").match(/heftwise-revision:([0-9a-f-]{36})/);
   if (named) {
-    const r = await describe(named[1]);
+    const [issuedForRevision] = await db.select({ id: issuedPacks.id }).from(issuedPacks).where(eq(issuedPacks.revisionId, named[1])).limit(1);
+    const r = issuedForRevision ? await describe(named[1]) : undefined;
     if (r) return { result: "altered", status: r.status, title: r.title, revision: r.number, organisation: r.organisation };
   }
   return { result: "unknown" };

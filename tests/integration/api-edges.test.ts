@@ -93,7 +93,7 @@ describe("writes from another site's page are refused, whatever the content type
     const res = await jobs(new Request("http://localhost/api/v1/jobs", { method: "POST", headers: { "content-type": "application/json", ...headers }, body: JSON.stringify(job) }), { params: Promise.resolve({}) });
     return res.status;
   };
-  it.each([{ origin: "https://evil.example" }, { origin: "null" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://other.localhost:3000" }])("%o → 403", async (headers) => {
+  it.each([{ origin: "https://evil.example" }, { origin: "null" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site", origin: "http://other.localhost:3000" }] as Record<string, string>[])("%o → 403", async (headers) => {
     expect(await post(headers)).toBe(403);
   });
   it("a CSV import from another site is refused too (a simple content type a form can send)", async () => {

@@ -5,7 +5,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
-import { briefingSheetPdf, completeBriefing, createSiteChangeNote, getBriefingRecord, getBriefingScript, listForemanJobs, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
+import { briefingSheetPdf, completeBriefing, createSiteChangeNote, getBriefingRecord, getBriefingScript, listForemanJobs, listForemen, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
 import { listAssessments } from "@/assessments/revisions/service";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
@@ -47,11 +47,20 @@ describe("what a foreman sees", () => {
 
   it("unassigning the foreman hides the job; another organisation gets 404", async () => {
     const jobId = (await listForemanJobs(foreman)).find((j) => j.revisions.length)!.job.id;
+    expect(await code(getPackFile(foreman, approvedId))).toBe("ok");
     await setJobForemen(adviser, jobId, { foremanIds: [] });
     expect(await code(getBriefingScript(foreman, approvedId))).toBe("not_found");
+    // One rule for both: no assignment, no pack either.
+    expect(await code(getPackFile(foreman, approvedId))).toBe("forbidden");
     await setJobForemen(adviser, jobId, { foremanIds: [foreman.id] });
     const other = await otherOrganisation();
     expect(await code(setJobForemen(other.admin, jobId, { foremanIds: [] }))).toBe("not_found");
+    expect(await code(listForemen(other.admin, jobId))).toBe("not_found");
+  });
+
+  it("a file that merely contains a draft's id learns nothing about it at /verify", async () => {
+    const draft = (await listAssessments(adviser)).find((a) => a.status === "draft")!;
+    expect(await verifyPack(Buffer.from(`%PDF-1.4 heftwise-revision:${draft.revisionId}`))).toEqual({ result: "unknown" });
   });
 });
 
