@@ -8,12 +8,18 @@ import { PNG } from "pngjs";
 import { z } from "zod";
 
 const MAX_SIDE = 4000;
+/**
+ * A signature pad is a strip, drawn at most at twice the screen's resolution (signature-field.tsx):
+ * about 0.5 megapixels on a tablet. Two megapixels bounds the work of decoding one to a few tens of
+ * milliseconds, so a crafted image cannot stall the server for everyone else.
+ */
+export const MAX_SIGNATURE_PIXELS = 2_000_000;
 
 function decodable(bytes: Buffer): boolean {
   if (bytes.byteLength < 33 || bytes.subarray(0, 8).toString("hex") !== "89504e470d0a1a0a") return false;
   const width = bytes.readUInt32BE(16);
   const height = bytes.readUInt32BE(20);
-  if (width === 0 || height === 0 || width > MAX_SIDE || height > MAX_SIDE) return false;
+  if (width === 0 || height === 0 || width > MAX_SIDE || height > MAX_SIDE || width * height > MAX_SIGNATURE_PIXELS) return false;
   try {
     const { data } = PNG.sync.read(bytes);
     // Something drawn: at least one pixel that is not fully transparent.

@@ -18,7 +18,8 @@ export const SignatureField = forwardRef<SignatureFieldHandle, { label: string; 
     const el = canvas.current!;
     const resize = () => {
       // Match the canvas to its box and the screen's pixel ratio, or strokes land off the pointer.
-      const ratio = Math.max(window.devicePixelRatio || 1, 1);
+      // At most twice the CSS size: sharp enough on any screen, and within the server's pixel limit.
+      const ratio = Math.min(Math.max(window.devicePixelRatio || 1, 1), 2);
       const data = pad.current?.toData();
       el.width = el.offsetWidth * ratio;
       el.height = el.offsetHeight * ratio;
