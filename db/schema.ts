@@ -116,7 +116,8 @@ export const components = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("components_organisation_idx").on(t.organisationId)],
+  // One name per organisation, whatever the case: enforced here so that parallel creates cannot race.
+  (t) => [index("components_organisation_idx").on(t.organisationId), uniqueIndex("components_organisation_name_idx").on(t.organisationId, sql`lower(${t.name})`)],
 );
 
 /**

@@ -110,3 +110,6 @@ export function databaseCode(err: unknown): string | null {
     if (typeof e.code === "string" && /^[0-9A-Z]{5}$/.test(e.code)) return e.code;
   return null;
 }
+
+/** A unique key already taken (PostgreSQL 23505), from the driver's error or the ORM's wrapper. */
+export const isUniqueViolation = (err: unknown) => databaseCode(err) === "23505";

@@ -8,7 +8,7 @@ import { z } from "zod";
 import { getDb, type Db } from "@/db/client";
 import { hazardLibrary } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { AppError, parseOrThrow } from "@/lib/errors";
+import { AppError, isUniqueViolation, parseOrThrow } from "@/lib/errors";
 import { authorize, type Actor } from "@/lib/permissions";
 import type { Hazard } from "../method-statement/content";
 import { libraryEntrySchema, type LibraryEntry, type LibraryEntryInput } from "./schemas";
@@ -65,7 +65,6 @@ export async function getEntry(actor: Actor | null, id: string): Promise<{ id: s
 }
 
 const duplicate = () => new AppError("conflict", "The library already has a hazard of that name", [{ path: "hazard", message: "Already in the library: change the name, or edit that entry" }]);
-const isUniqueViolation = (e: unknown) => (e as { code?: string; cause?: { code?: string } })?.code === "23505" || (e as { cause?: { code?: string } })?.cause?.code === "23505";
 
 export async function createEntry(actor: Actor | null, input: unknown): Promise<LibraryEntry> {
   authorize(actor, "hazard-library:manage");

@@ -8,7 +8,7 @@ import { z } from "zod";
 import { getDb } from "@/db/client";
 import { componentAttachments, components } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { AppError, parseOrThrow, type FieldIssue } from "@/lib/errors";
+import { AppError, isUniqueViolation, parseOrThrow, type FieldIssue } from "@/lib/errors";
 import { formulaNote, parseCsvNumber } from "./csv-cells";
 import { page, pageQuerySchema } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
@@ -52,11 +52,23 @@ export async function getComponent(actor: Actor | null, componentId: string) {
   return { ...component, attachments };
 }
 
+const nameTaken = () => new AppError("conflict", "A component with this name is already in the register", [{ path: "name", message: "A component with this name is already in the register" }]);
+
+/** The register's unique index decides (parallel creates cannot both pass); this check only answers early. */
 async function assertNameFree(organisationId: string, name: string, exceptId?: string) {
   const db = await getDb();
   const existing = await db.select({ id: components.id }).from(components).where(and(eq(components.organisationId, organisationId), ilike(components.name, name.replace(/[%_\\]/g, "\\$&"))));
-  if (existing.some((e) => e.id !== exceptId))
-    throw new AppError("validation", "Some fields need attention", [{ path: "name", message: "A component with this name is already in the register" }]);
+  if (existing.some((e) => e.id !== exceptId)) throw nameTaken();
+}
+
+/** Runs a write that may take a name another write took first: 409 on the name field, never a 500. */
+async function guardName<T>(write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (err) {
+    if (isUniqueViolation(err)) throw nameTaken();
+    throw err;
+  }
 }
 
 export async function createComponent(actor: Actor | null, input: unknown) {
@@ -64,11 +76,13 @@ export async function createComponent(actor: Actor | null, input: unknown) {
   const data = parseOrThrow(componentSchema, input);
   await assertNameFree(actor.organisationId, data.name);
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [row] = await tx.insert(components).values({ ...data, organisationId: actor.organisationId }).returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.created", entityType: "component", entityId: row.id });
-    return row;
-  });
+  return guardName(() =>
+    db.transaction(async (tx) => {
+      const [row] = await tx.insert(components).values({ ...data, organisationId: actor.organisationId }).returning();
+      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.created", entityType: "component", entityId: row.id });
+      return row;
+    }),
+  );
 }
 
 export async function updateComponent(actor: Actor | null, componentId: string, input: unknown) {
@@ -77,11 +91,13 @@ export async function updateComponent(actor: Actor | null, componentId: string, 
   const data = parseOrThrow(componentSchema, input);
   await assertNameFree(actor.organisationId, data.name, componentId);
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [row] = await tx.update(components).set({ ...data, updatedAt: new Date() }).where(eq(components.id, componentId)).returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.updated", entityType: "component", entityId: row.id });
-    return row;
-  });
+  return guardName(() =>
+    db.transaction(async (tx) => {
+      const [row] = await tx.update(components).set({ ...data, updatedAt: new Date() }).where(eq(components.id, componentId)).returning();
+      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.updated", entityType: "component", entityId: row.id });
+      return row;
+    }),
+  );
 }
 
 export interface ImportRow {
@@ -167,10 +183,10 @@ export async function importComponents(actor: Actor | null, csv: string): Promis
     throw new AppError("validation", "Nothing was imported: fix the file and try again", [...problems.map((p) => ({ path: "file", message: p })), ...rowIssues]);
   const db = await getDb();
   const values = rows.map((r) => ({ ...componentSchema.parse(rowCandidate(r.values).candidate), organisationId: actor!.organisationId }));
-  await db.transaction(async (tx) => {
+  await guardName(() => db.transaction(async (tx) => {
     const inserted = await tx.insert(components).values(values).returning({ id: components.id });
     await recordAudit(tx, { organisationId: actor!.organisationId, actorId: actor!.id, action: "component.imported", entityType: "component", entityId: null, details: { count: inserted.length } });
-  });
+  }));
   return { imported: values.length };
 }
 

@@ -148,6 +148,15 @@ describe("components", () => {
     expect((await call(actors.adviser, importRoute.POST, { body: good, type: "application/json" })).status).toBe(415);
   });
 
+  it("parallel creates of one name (any case) make one component; the others answer 409 on the name", async () => {
+    const body = (name: string) => ({ body: { name, massKg: 5, grip: "good", massSource: "weighed" } });
+    const results = await Promise.all(["Race lid", "RACE LID", "race lid", "Race Lid"].map((n) => call(actors.adviser, componentsRoute.POST, body(n))));
+    expect(results.map((r) => r.status).sort()).toEqual([201, 409, 409, 409]);
+    const refused = results.find((r) => r.status === 409)!;
+    expect(refused.json.error.issues).toEqual([{ path: "name", message: "A component with this name is already in the register" }]);
+    expect((await call(actors.adviser, componentsRoute.GET, { query: "?q=race lid" })).json.total).toBe(1);
+  });
+
   it("CSV import reads masses exactly or refuses them: a decimal comma is 12.5 kg, never 125; '1,250' is refused; formula-like text is noted", async () => {
     const ambiguous = "name,mass_kg,grip,mass_source\nComma lid,\"1,250\",fair,weighed\n";
     const refused = await call(actors.adviser, importRoute.POST, { body: ambiguous, type: "text/csv" });
