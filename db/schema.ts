@@ -121,6 +121,24 @@ export const components = pgTable(
 );
 
 /**
+ * Signed-in sessions. The session token carries only this row's id (and the user's): a token whose
+ * row is gone — signed out, signed out everywhere, the account deactivated — stops working at once,
+ * even if it was copied, and can never be revived.
+ */
+export const userSessions = pgTable(
+  "user_sessions",
+  {
+    id: id(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: createdAt(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  },
+  (t) => [index("user_sessions_user_idx").on(t.userId)],
+);
+
+/**
  * The organisation's library of hazards with suggested controls (by the hierarchy of control), which
  * advisers copy into an assessment and edit there; admins maintain it. One row a hazard name.
  */

@@ -7,6 +7,7 @@ declare module "next-auth" {
   }
   interface Session {
     user: { id: string; role: Role; organisationId: string; name?: string | null; email?: string | null };
+    sessionId: string;
   }
 }
 
@@ -15,5 +16,7 @@ declare module "next-auth/jwt" {
     userId: string;
     role: Role;
     organisationId: string;
+    /** The server-side session record this token belongs to. */
+    sessionId: string;
   }
 }

@@ -2,6 +2,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { config } from "@/lib/config";
 import { checkCredentials } from "./credentials";
+import { closeSession, openSession, SESSION_MAX_AGE_S } from "./sessions";
 
 function clientAddress(headers: Record<string, unknown> | undefined): string | null {
   const forwarded = headers?.["x-forwarded-for"];
@@ -15,7 +16,7 @@ export const authOptions: NextAuthOptions = {
   get secret() {
     return config().secret;
   },
-  session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
+  session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_S },
   pages: { signIn: "/sign-in", signOut: "/sign-out", error: "/sign-in" },
   providers: [
     CredentialsProvider({
@@ -30,17 +31,25 @@ export const authOptions: NextAuthOptions = {
   ],
   callbacks: {
     async jwt({ token, user }) {
-      // `user` is present only at sign-in: copy the claims into the token then.
+      // `user` is present only at sign-in: open the server-side session and copy the claims then.
       if (user) {
         token.userId = user.id;
         token.role = user.role;
         token.organisationId = user.organisationId;
+        token.sessionId = await openSession(user.id);
       }
       return token;
     },
     async session({ session, token }) {
       session.user = { ...session.user, id: token.userId, role: token.role, organisationId: token.organisationId };
+      session.sessionId = token.sessionId;
       return session;
+    },
+  },
+  events: {
+    // Signing out ends the session on the server too: a copy of the token stops working.
+    async signOut({ token }) {
+      await closeSession(token?.sessionId);
     },
   },
 };

@@ -12,6 +12,7 @@ import { getDb } from "@/db/client";
 import { users } from "@/db/schema";
 import type { Actor } from "@/lib/permissions";
 import { authOptions } from "./options";
+import { sessionIsOpen } from "./sessions";
 
 export const getActor = cache(async (): Promise<Actor | null> => {
   // Who is calling is known only at request time: never prerender a page that asks.
@@ -22,6 +23,8 @@ export const getActor = cache(async (): Promise<Actor | null> => {
   const db = await getDb();
   const user = await db.query.users.findFirst({ where: eq(users.id, id) });
   if (!user || !user.active || !user.passwordHash) return null;
+  // The token is only as good as its session record: signed out (here or everywhere) means gone.
+  if (!(await sessionIsOpen(session.sessionId, user.id))) return null;
   return { id: user.id, organisationId: user.organisationId, role: user.role, name: user.name, email: user.email };
 });
 

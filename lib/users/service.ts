@@ -16,6 +16,7 @@ import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, type Actor } from "@/lib/permissions";
 import { changeRoleSchema, inviteSchema, resendInviteSchema, ROLE_LABELS, setActiveSchema } from "./schemas";
+import { closeAllSessions } from "@/lib/auth/sessions";
 
 export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
@@ -116,6 +117,8 @@ export async function setActive(actor: Actor | null, input: unknown): Promise<vo
   const db = await getDb();
   await db.transaction(async (tx) => {
     await tx.update(users).set({ active, updatedAt: new Date() }).where(eq(users.id, user.id));
+    // Deactivation ends every session; reactivation then has nothing old to revive.
+    if (!active) await closeAllSessions(user.id, tx);
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: active ? "user.reactivated" : "user.deactivated", entityType: "user", entityId: user.id });
   });
 }

@@ -118,5 +118,34 @@ test("deactivating a user stops their session at once", async ({ page, browser }
 
   await row.getByRole("button", { name: "Reactivate" }).click();
   await expect(row).toContainText("Active");
+  // Reactivation revives no old session: the approver's page still needs a fresh sign-in.
+  await approverPage.goto("/reviews");
+  await expect(approverPage).toHaveURL(/\/sign-in/);
   await other.close();
+});
+
+test("signing out ends the session: a copy of its cookie no longer works; 'everywhere' ends the other devices' too", async ({ page, browser }) => {
+  await signIn(page, "adviser@brackenfold.example");
+  const copied = await page.context().cookies();
+  await page.goto("/sign-out");
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  const thief = await browser.newContext();
+  await thief.addCookies(copied);
+  const stolen = await thief.newPage();
+  await stolen.goto("/assessments");
+  await expect(stolen).toHaveURL(/\/sign-in/);
+  await thief.close();
+
+  // Signed in on two devices; "Sign out everywhere" on one ends the other.
+  const office = await browser.newContext();
+  const officePage = await office.newPage();
+  await signIn(officePage, "adviser@brackenfold.example");
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/sign-out");
+  await page.getByRole("button", { name: "Sign out everywhere" }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  await officePage.goto("/assessments");
+  await expect(officePage).toHaveURL(/\/sign-in/);
+  await office.close();
 });

@@ -1,0 +1,34 @@
+/**
+ * Server-side session records behind the JWT: sign-in opens one, sign-out closes it, "sign out
+ * everywhere" and deactivation close all of a user's. Every request checks its record, so a copied
+ * token dies with its session.
+ */
+import { and, eq, gt } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { userSessions } from "@/db/schema";
+
+export const SESSION_MAX_AGE_S = 12 * 60 * 60;
+
+export async function openSession(userId: string): Promise<string> {
+  const db = await getDb();
+  const [row] = await db.insert(userSessions).values({ userId, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) }).returning({ id: userSessions.id });
+  return row.id;
+}
+
+export async function sessionIsOpen(sessionId: string | undefined, userId: string): Promise<boolean> {
+  if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return false;
+  const db = await getDb();
+  const [row] = await db.select({ id: userSessions.id }).from(userSessions).where(and(eq(userSessions.id, sessionId), eq(userSessions.userId, userId), gt(userSessions.expiresAt, new Date())));
+  return !!row;
+}
+
+export async function closeSession(sessionId: string | undefined): Promise<void> {
+  if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return;
+  const db = await getDb();
+  await db.delete(userSessions).where(eq(userSessions.id, sessionId));
+}
+
+/** Every session of a user, on every device. */
+export async function closeAllSessions(userId: string, tx?: Pick<Awaited<ReturnType<typeof getDb>>, "delete">): Promise<void> {
+  await (tx ?? (await getDb())).delete(userSessions).where(eq(userSessions.userId, userId));
+}
