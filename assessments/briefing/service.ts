@@ -209,10 +209,10 @@ export const assignmentSchema = z.object({ foremanIds: z.array(z.uuid()).max(50)
 
 export async function setJobForemen(actor: Actor | null, jobId: string, input: unknown): Promise<void> {
   authorize(actor, "jobs:write");
-  const { foremanIds } = parseOrThrow(assignmentSchema, input);
   const db = await getDb();
   const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
   if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
+  const { foremanIds } = parseOrThrow(assignmentSchema, input);
   const valid = foremanIds.length
     ? await db.select({ id: users.id }).from(users).where(and(inArray(users.id, foremanIds), eq(users.organisationId, actor.organisationId), eq(users.role, "foreman")))
     : [];

@@ -44,8 +44,9 @@ const packName = (title: string, number: number, kind: string) => `${title.repla
 /** Submits a complete draft to a named approver; refused (422) while anything required is missing. */
 export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "assessments:submit");
-  const data = parseOrThrow(submitRevisionSchema, input);
+  // Whose record first: another organisation's revision is "not found" whatever the body says.
   const current = await getRevision(actor, revisionId);
+  const data = parseOrThrow(submitRevisionSchema, input);
   if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
   if (current.revision.version !== data.version) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
   const review = reviewContent(current.content, current.register);

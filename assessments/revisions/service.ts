@@ -152,8 +152,9 @@ export async function getRevision(actor: Actor | null, revisionId: string) {
 /** Saves a draft. A stale version answers 409 and nothing is written; so does a locked revision. */
 export async function saveRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ version: number; worstBand: string | null }> {
   authorize(actor, "assessments:write");
-  const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
+  // Whose record first: another organisation's revision is "not found" whatever the body says.
   const current = await getRevision(actor, revisionId);
+  const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
   if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
   const review = reviewContent(data.content, current.register);
   const db = await getDb();
@@ -196,6 +197,7 @@ export async function listTasks(actor: Actor | null, revisionId: string) {
 
 export async function addTask(actor: Actor | null, revisionId: string, input: unknown) {
   authorize(actor, "assessments:write");
+  await getRevision(actor, revisionId);
   const { version, task } = parseOrThrow(taskBodySchema, input);
   return changeTasks(actor, revisionId, version, (tasks) => {
     if (tasks.some((t) => t.id === task.id)) throw new AppError("conflict", `A task with id ${task.id} already exists`);
@@ -205,6 +207,7 @@ export async function addTask(actor: Actor | null, revisionId: string, input: un
 
 export async function replaceTask(actor: Actor | null, revisionId: string, taskId: string, input: unknown) {
   authorize(actor, "assessments:write");
+  await getRevision(actor, revisionId);
   const { version, task } = parseOrThrow(taskBodySchema, input);
   return changeTasks(actor, revisionId, version, (tasks) => {
     if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
@@ -214,6 +217,7 @@ export async function replaceTask(actor: Actor | null, revisionId: string, taskI
 
 export async function removeTask(actor: Actor | null, revisionId: string, taskId: string, input: unknown) {
   authorize(actor, "assessments:write");
+  await getRevision(actor, revisionId);
   const { version } = parseOrThrow(versionBodySchema, input);
   return changeTasks(actor, revisionId, version, (tasks) => {
     if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
