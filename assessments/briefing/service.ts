@@ -3,7 +3,7 @@
  * for phones that lose signal), completion with the foreman's own signature, site change notes, and
  * the briefing sheet.
  */
-import { and, asc, desc, eq, gte, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, organisations, revisions, siteChangeNotes, users } from "@/db/schema";
@@ -121,11 +121,23 @@ export async function recordAttendee(actor: Actor | null, briefingId: string, in
     throw new AppError("conflict", "This briefing is closed: the foreman has signed it off.");
   }
   const db = await getDb();
-  const [inserted] = await db
-    .insert(briefingAttendees)
-    .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: data.signature, signedAt: new Date(data.signedAt) })
-    .onConflictDoNothing({ target: briefingAttendees.idempotencyKey })
-    .returning({ id: briefingAttendees.id });
+  // The briefing row is the lock: a sign-on waits for a sign-off in progress, then sees it closed,
+  // so nobody signs on after the record was put into the re-issued pack.
+  const inserted = await db.transaction(async (tx) => {
+    const [open] = await tx.select({ completedAt: briefings.completedAt }).from(briefings).where(eq(briefings.id, briefingId)).for("update");
+    if (open?.completedAt) return "closed" as const;
+    const [row] = await tx
+      .insert(briefingAttendees)
+      .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: data.signature, signedAt: new Date(data.signedAt) })
+      .onConflictDoNothing({ target: briefingAttendees.idempotencyKey })
+      .returning({ id: briefingAttendees.id });
+    return row;
+  });
+  if (inserted === "closed") {
+    const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
+    if (existing?.briefingId === briefingId) return { id: existing.id, duplicate: true };
+    throw new AppError("conflict", "This briefing is closed: the foreman has signed it off.");
+  }
   if (inserted) return { id: inserted.id, duplicate: false };
   const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
   if (!existing || existing.briefingId !== briefingId) throw new AppError("conflict", "This sign-on key belongs to another briefing.");
@@ -146,7 +158,13 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
   const key = await getSigningKey(actor.organisationId, org!.name);
   await db.transaction(async (tx) => {
-    await tx.update(briefings).set({ completedAt: new Date(), foremanSignature: data.signature }).where(eq(briefings.id, briefingId));
+    // Claim the sign-off: of two at once, only one updates the row and re-issues the pack.
+    const [claimed] = await tx
+      .update(briefings)
+      .set({ completedAt: new Date(), foremanSignature: data.signature })
+      .where(and(eq(briefings.id, briefingId), isNull(briefings.completedAt)))
+      .returning({ id: briefings.id });
+    if (!claimed) throw new AppError("conflict", "This briefing is already signed off.");
     const pdf = await renderPack(tx, briefing.revisionId, key);
     await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.completed", entityType: "revision", entityId: briefing.revisionId, details: { briefingId, attendees: attendees.length } });

@@ -11,7 +11,7 @@ import { recordAudit } from "@/lib/audit";
 import { setPasswordSchema } from "@/lib/auth/schemas";
 import { hashPassword } from "@/lib/auth/passwords";
 import { config } from "@/lib/config";
-import { AppError, parseOrThrow } from "@/lib/errors";
+import { AppError, isUniqueViolation, parseOrThrow } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, type Actor } from "@/lib/permissions";
@@ -50,16 +50,21 @@ async function organisationUser(actor: Actor, userId: string) {
   return user;
 }
 
-async function issueInvite(actor: Actor, user: { id: string; name: string; email: string; role: Role }): Promise<SendOutcome> {
-  const db = await getDb();
+type Tx = Parameters<Parameters<Awaited<ReturnType<typeof getDb>>["transaction"]>[0]>[0];
+
+/** Records a new invitation link for the user inside the caller's transaction; returns the token to e-mail. */
+async function recordInvite(tx: Tx, actor: Actor, user: { id: string; email: string; role: Role }): Promise<string> {
   const token = randomBytes(32).toString("base64url");
   const expiresAt = new Date(Date.now() + config().INVITE_TTL_HOURS * 3600_000);
-  await db.transaction(async (tx) => {
-    // A new link replaces any earlier one that was not used.
-    await tx.delete(invites).where(and(eq(invites.userId, user.id), isNull(invites.usedAt)));
-    await tx.insert(invites).values({ organisationId: actor.organisationId, userId: user.id, tokenHash: hashToken(token), expiresAt, createdBy: actor.id });
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.invited", entityType: "user", entityId: user.id, details: { email: user.email, role: user.role } });
-  });
+  // A new link replaces any earlier one that was not used.
+  await tx.delete(invites).where(and(eq(invites.userId, user.id), isNull(invites.usedAt)));
+  await tx.insert(invites).values({ organisationId: actor.organisationId, userId: user.id, tokenHash: hashToken(token), expiresAt, createdBy: actor.id });
+  await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.invited", entityType: "user", entityId: user.id, details: { email: user.email, role: user.role } });
+  return token;
+}
+
+/** The invitation e-mail, sent after the transaction that recorded it has committed. */
+function sendInvite(actor: Actor, user: { name: string; email: string; role: Role }, token: string): Promise<SendOutcome> {
   const url = `${config().NEXTAUTH_URL.replace(/\/$/, "")}/invite/${token}`;
   const body = renderMail({
     heading: `${actor.name} has invited you to Heftwise`,
@@ -81,8 +86,18 @@ export async function inviteUser(actor: Actor | null, input: unknown): Promise<{
   const existing = await db.query.users.findFirst({ where: eq(users.email, data.email) });
   if (existing)
     throw new AppError("validation", "Some fields need attention", [{ path: "email", message: "This e-mail address already has an account" }]);
-  const [user] = await db.insert(users).values({ organisationId: actor.organisationId, email: data.email, name: data.name, role: data.role }).returning();
-  const mail = await issueInvite(actor, user);
+  // The person and their invitation are written together, or not at all; a parallel invitation of
+  // the same address that got there first answers like the check above.
+  const { user, token } = await db
+    .transaction(async (tx) => {
+      const [created] = await tx.insert(users).values({ organisationId: actor.organisationId, email: data.email, name: data.name, role: data.role }).returning();
+      return { user: created, token: await recordInvite(tx, actor, created) };
+    })
+    .catch((err) => {
+      if (isUniqueViolation(err)) throw new AppError("conflict", "Some fields need attention", [{ path: "email", message: "This e-mail address already has an account" }]);
+      throw err;
+    });
+  const mail = await sendInvite(actor, user, token);
   return { userId: user.id, mail };
 }
 
@@ -92,7 +107,9 @@ export async function resendInvite(actor: Actor | null, input: unknown): Promise
   const user = await organisationUser(actor, userId);
   if (user.passwordHash) throw new AppError("conflict", "This person has already set a password");
   if (!user.active) throw new AppError("conflict", "Reactivate this person before inviting them again");
-  return issueInvite(actor, user);
+  const db = await getDb();
+  const token = await db.transaction((tx) => recordInvite(tx, actor, user));
+  return sendInvite(actor, user, token);
 }
 
 export async function changeRole(actor: Actor | null, input: unknown): Promise<void> {

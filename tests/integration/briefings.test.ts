@@ -7,6 +7,9 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
 import { briefingSheetPdf, completeBriefing, createSiteChangeNote, getBriefingRecord, getBriefingScript, listForemanJobs, listForemen, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
 import { listAssessments } from "@/assessments/revisions/service";
+import { eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { issuedPacks } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
 import { drawnSignaturePng } from "@/lib/png";
@@ -16,6 +19,13 @@ let foreman: Actor;
 let adviser: Actor;
 let approvedId: string;
 const signature = `data:image/png;base64,${drawnSignaturePng(7).toString("base64")}`;
+/** The text of a PDF, by poppler's pdftotext. */
+async function pdfText(data: Uint8Array): Promise<string> {
+  const file = path.join(mkdtempSync(path.join(tmpdir(), "heftwise-brief-")), "pack.pdf");
+  writeFileSync(file, data);
+  return execFileSync("pdftotext", [file, "-"], { encoding: "utf8" });
+}
+
 const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
 const attendee = (key: string, name = "Kieran Lusk") => ({ key, name, employer: "Brackenfold Lineside", cardNumber: "PTS 77120", signature, signedAt: new Date().toISOString() });
 
@@ -94,6 +104,25 @@ describe("a briefing", () => {
       expect(text).toContain("Briefing record");
       expect(text).toContain("Aled Menhenick (Brackenfold Lineside), card PTS 77120");
     }
+  });
+
+  it("two sign-offs at once re-issue the pack once; a sign-on racing them is either in the re-issued pack or refused", async () => {
+    const db = await getDb();
+    const { briefingId } = await startBriefing(foreman, { revisionId: approvedId, place: "Gorsey Lane gate" });
+    await recordAttendee(foreman, briefingId, attendee("key-race-aaaaaaaaaaaa", "Bethan Quayle"));
+    const packsBefore = (await db.select().from(issuedPacks).where(eq(issuedPacks.revisionId, approvedId))).length;
+    const [a, b, late] = await Promise.allSettled([
+      completeBriefing(foreman, briefingId, { signature }),
+      completeBriefing(foreman, briefingId, { signature }),
+      recordAttendee(foreman, briefingId, attendee("key-race-bbbbbbbbbbbb", "Late Arrival")),
+    ]);
+    expect([a.status, b.status].sort()).toEqual(["fulfilled", "rejected"]);
+    expect(((a.status === "rejected" ? a : b) as PromiseRejectedResult).reason).toMatchObject({ code: "conflict" });
+    expect((await db.select().from(issuedPacks).where(eq(issuedPacks.revisionId, approvedId))).length).toBe(packsBefore + 1);
+    const pack = await getPackFile(adviser, approvedId);
+    const inPack = Buffer.from(pack.data).toString("latin1").includes("Late Arrival") || (await pdfText(pack.data)).includes("Late Arrival");
+    if (late.status === "fulfilled") expect(inPack).toBe(true);
+    else expect((late as PromiseRejectedResult).reason).toMatchObject({ code: "conflict" });
   });
 
   it("a site change note marks the revision and shows on the next briefing, even when the e-mail fails", async () => {

@@ -191,3 +191,18 @@ describe("signing in", () => {
     await expect(checkCredentials({ email, password: DEMO_PASSWORD }, "10.1.1.1")).rejects.toThrow(/Too many attempts/);
   });
 });
+
+describe("invitations under concurrency", () => {
+  it("two simultaneous invitations of one address make one person with one invitation; the other is refused", async () => {
+    const email = "at-once@brackenfold.example";
+    const results = await Promise.allSettled([inviteUser(admin, { name: "Twice Invited", email, role: "foreman" }), inviteUser(admin, { name: "Twice Invited", email, role: "foreman" })]);
+    expect(results.map((r) => r.status).sort()).toEqual(["fulfilled", "rejected"]);
+    const refused = results.find((r) => r.status === "rejected") as PromiseRejectedResult;
+    expect(refused.reason).toBeInstanceOf(AppError);
+    expect([409, 422]).toContain((refused.reason as AppError).status);
+    const db = await getDb();
+    const people = await db.select().from(users).where(eq(users.email, email));
+    expect(people).toHaveLength(1);
+    expect(await db.select().from(invites).where(eq(invites.userId, people[0].id))).toHaveLength(1);
+  });
+});
