@@ -3,10 +3,15 @@
  * directory; `DATABASE_URL` switches the same code to a PostgreSQL server through `pg`.
  * Drivers are loaded with dynamic import() so the unused one never loads.
  *
- * PGlite does not lock its data directory, and two processes opening it corrupt it: a lock file
- * beside the directory refuses a second process with a clear message.
+ * PGlite does not lock its data directory, and two processes opening it corrupt it: a lock beside
+ * the directory refuses a second process with a clear message. The lock is a Unix socket the holder
+ * listens on, so the operating system releases it when the holder dies, however it dies (a reused
+ * pid cannot keep it, as it could a pid file).
  */
-import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { createHash } from "node:crypto";
+import { existsSync, mkdirSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { createConnection, createServer, type Server } from "node:net";
 import path from "node:path";
 import type { PgliteDatabase } from "drizzle-orm/pglite";
 import { config } from "@/lib/config";
@@ -25,34 +30,59 @@ export const MIGRATIONS_FOLDER = path.join(process.cwd(), "db", "migrations");
 
 export class DatabaseLockedError extends Error {}
 
-function processAlive(pid: number): boolean {
-  try {
-    process.kill(pid, 0);
-    return true;
-  } catch (err) {
-    return (err as NodeJS.ErrnoException).code === "EPERM";
-  }
+const lockedMessage = (dataDir: string) =>
+  `The database folder ${dataDir} is in use by another Heftwise process. ` +
+  `Stop that process first, or set HEFTWISE_DATA_DIR to another folder. ` +
+  `Two processes on one PGlite folder would corrupt it.`;
+
+/** Whether a live process answers on the socket: a file left by a dead holder refuses the connection. */
+function heldByLiveProcess(socketPath: string): Promise<boolean> {
+  return new Promise((resolve) => {
+    const probe = createConnection(socketPath);
+    probe.once("connect", () => {
+      probe.destroy();
+      resolve(true);
+    });
+    probe.once("error", () => resolve(false));
+  });
 }
 
-function acquireLock(dataDir: string): () => void {
-  const lockFile = `${dataDir}.lock`;
-  if (existsSync(lockFile)) {
-    const pid = Number(readFileSync(lockFile, "utf8").trim());
-    if (pid && pid !== process.pid && processAlive(pid))
-      throw new DatabaseLockedError(
-        `The database folder ${dataDir} is in use by another Heftwise process (pid ${pid}). ` +
-          `Stop that process first, or set HEFTWISE_DATA_DIR to another folder. ` +
-          `Two processes on one PGlite folder would corrupt it.`,
-      );
+function listen(server: Server, socketPath: string): Promise<void> {
+  return new Promise((resolve, reject) => {
+    server.once("error", reject);
+    server.listen(socketPath, () => {
+      server.off("error", reject);
+      resolve();
+    });
+  });
+}
+
+/** Beside the folder; a path too long for a socket (about 100 bytes) gets a hashed name in the temp folder. */
+export function lockPath(dataDir: string): string {
+  const beside = `${dataDir}.lock`;
+  return Buffer.byteLength(beside) < 100 ? beside : path.join(tmpdir(), `heftwise-${createHash("sha256").update(dataDir).digest("hex").slice(0, 16)}.lock`);
+}
+
+async function acquireLock(dataDir: string): Promise<() => void> {
+  const socketPath = lockPath(dataDir);
+  mkdirSync(path.dirname(socketPath), { recursive: true });
+  // The holder accepts and drops connections; the socket never keeps the process alive on its own.
+  const server = createServer((socket) => socket.destroy());
+  server.unref();
+  try {
+    await listen(server, socketPath);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== "EADDRINUSE") throw err;
+    if (await heldByLiveProcess(socketPath)) throw new DatabaseLockedError(lockedMessage(dataDir));
+    // Left by a holder that died: take it over.
+    rmSync(socketPath, { force: true });
+    await listen(server, socketPath).catch((again) => {
+      throw (again as NodeJS.ErrnoException).code === "EADDRINUSE" ? new DatabaseLockedError(lockedMessage(dataDir)) : again;
+    });
   }
-  mkdirSync(path.dirname(lockFile), { recursive: true });
-  writeFileSync(lockFile, String(process.pid));
   return () => {
-    try {
-      if (readFileSync(lockFile, "utf8").trim() === String(process.pid)) rmSync(lockFile);
-    } catch {
-      // already gone
-    }
+    server.close();
+    if (existsSync(socketPath)) rmSync(socketPath, { force: true });
   };
 }
 
@@ -76,7 +106,7 @@ async function open(): Promise<Handle> {
     import("drizzle-orm/pglite/migrator"),
   ]);
   const inMemory = pgliteDir === "memory://";
-  const release = inMemory ? () => {} : acquireLock(path.resolve(pgliteDir));
+  const release = inMemory ? () => {} : await acquireLock(path.resolve(pgliteDir));
   try {
     if (!inMemory) mkdirSync(path.resolve(pgliteDir), { recursive: true });
     const client = inMemory ? new PGlite() : new PGlite(path.resolve(pgliteDir));
