@@ -50,6 +50,11 @@ export interface MethodRequests {
   lift?: LiftRequest;
 }
 
+/** The guideline filter's request from a task's filter inputs; `also` adds what the operation uses. */
+function filterRequest(f: NonNullable<Task["filter"]>, load: number, conditions: Task["conditions"], also: Partial<FilterRequest>): FilterRequest {
+  return { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize, conditions, ...also };
+}
+
 /**
  * The request each method gets for this task, built field by field so that every input a method
  * uses reaches it from where the task records it — and nothing left over from another operation
@@ -78,38 +83,14 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           conditions: task.conditions,
         };
       // One person: the filter takes the lift's own frequency and its largest twist.
-      if (f)
-        out.filter = {
-          method: "filter",
-          sex: f.sex,
-          zone: f.zone,
-          reach: f.reach,
-          load: load!,
-          frequency: n ? n.frequency : f.frequency,
-          twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg,
-          teamSize: 1,
-          conditions: task.conditions,
-        };
+      if (f) out.filter = filterRequest(f, load!, task.conditions, { frequency: n ? n.frequency : f.frequency, twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg, teamSize: 1 });
       break;
     }
     case "team-lift":
-      if (f) out.filter = { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load: load!, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize, conditions: task.conditions };
+      if (f) out.filter = filterRequest(f, load!, task.conditions, {});
       break;
     case "carry":
-      if (f)
-        out.filter = {
-          method: "filter",
-          sex: f.sex,
-          zone: f.zone,
-          reach: f.reach,
-          load: load!,
-          frequency: f.frequency,
-          twistDeg: f.twistDeg,
-          teamSize: f.teamSize,
-          carryDistanceM: f.carryDistanceM,
-          durationHours: f.durationHours,
-          conditions: task.conditions,
-        };
+      if (f) out.filter = filterRequest(f, load!, task.conditions, { carryDistanceM: f.carryDistanceM, durationHours: f.durationHours });
       break;
     case "push": {
       const p = task.push;
