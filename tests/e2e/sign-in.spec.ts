@@ -149,3 +149,22 @@ test("signing out ends the session: a copy of its cookie no longer works; 'every
   await expect(officePage).toHaveURL(/\/sign-in/);
   await office.close();
 });
+
+test("the server answers like a careful colleague: security headers on every page, 413 for an oversized form, 403 for a cross-site write", async ({ page, request }) => {
+  const res = await page.goto("/sign-in");
+  const headers = res!.headers();
+  expect(headers["content-security-policy"]).toContain("frame-ancestors 'none'");
+  expect(headers["x-content-type-options"]).toBe("nosniff");
+  expect(headers["referrer-policy"]).toBe("strict-origin-when-cross-origin");
+  expect(headers["permissions-policy"]).toContain("camera=()");
+  expect(headers["x-powered-by"]).toBeUndefined();
+
+  // A server action sent more than its limit: a clear 413, not an error from inside the framework.
+  const big = await request.post("/jobs/new", { headers: { "next-action": "0123456789abcdef", "content-type": "text/plain;charset=UTF-8" }, data: "x".repeat(1_100_000) });
+  expect(big.status()).toBe(413);
+  expect((await big.json()).error.code).toBe("payload_too_large");
+
+  // A write from another site's page, with a simple content type a plain form can send.
+  const crossSite = await request.post("/api/v1/components/import", { headers: { origin: "https://evil.example", "content-type": "text/plain" }, data: "name,mass_kg,grip,mass_source\n" });
+  expect(crossSite.status()).toBe(403);
+});
