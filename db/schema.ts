@@ -139,6 +139,16 @@ export const userSessions = pgTable(
 );
 
 /**
+ * Sign-in failures by key ("pair:<email>|<address>", "address:<address>", "account:<email>"), kept
+ * in the database so that several app instances on one PostgreSQL server throttle as one.
+ */
+export const signInAttempts = pgTable("sign_in_attempts", {
+  key: text("key").primaryKey(),
+  failures: integer("failures").notNull(),
+  lastFailure: timestamp("last_failure", { withTimezone: true }).notNull(),
+});
+
+/**
  * The organisation's library of hazards with suggested controls (by the hierarchy of control), which
  * advisers copy into an assessment and edit there; admins maintain it. One row a hazard name.
  */

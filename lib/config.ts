@@ -2,6 +2,7 @@
  * The environment, read and checked once. A process with a missing or invalid variable refuses to
  * start (see instrumentation.ts) and names the variable, rather than failing later on a request.
  */
+import { isIP } from "node:net";
 import { z } from "zod";
 
 const isProduction = () => process.env.NODE_ENV === "production";
@@ -21,6 +22,13 @@ const schema = z
     SMTP_URL: urlWithScheme(["smtp", "smtps"], "smtp://127.0.0.1:2525").optional(),
     MAIL_FROM: z.string().trim().min(3).default("Heftwise <no-reply@heftwise.localhost>"),
     INVITE_TTL_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(72),
+    /** Addresses of reverse proxies whose X-Forwarded-For is believed; none by default. */
+    HEFTWISE_TRUSTED_PROXIES: z
+      .string()
+      .trim()
+      .default("")
+      .transform((v) => v.split(",").map((a) => a.trim()).filter(Boolean))
+      .refine((list) => list.every((a) => isIP(a) !== 0), "must be a comma-separated list of IP addresses"),
   })
   .superRefine((env, ctx) => {
     if (!isProduction()) return;

@@ -1,14 +1,14 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { clientAddressFrom } from "@/lib/client-address";
 import { config } from "@/lib/config";
 import { checkCredentials } from "./credentials";
 import { closeSession, openSession, SESSION_MAX_AGE_S } from "./sessions";
 
+/** The caller's address: X-Forwarded-For as the server left it (lib/client-address.ts). */
 function clientAddress(headers: Record<string, unknown> | undefined): string | null {
   const forwarded = headers?.["x-forwarded-for"];
-  if (typeof forwarded === "string" && forwarded) return forwarded.split(",")[0].trim();
-  const real = headers?.["x-real-ip"];
-  return typeof real === "string" && real ? real : null;
+  return clientAddressFrom(typeof forwarded === "string" ? forwarded : null, config().HEFTWISE_TRUSTED_PROXIES);
 }
 
 export const authOptions: NextAuthOptions = {

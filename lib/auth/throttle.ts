@@ -1,56 +1,73 @@
 /**
- * Slows down repeated sign-in failures from one account or one address. After FREE_FAILURES
- * failures within the window, each further attempt must wait, doubling from BASE_WAIT_MS up to
- * MAX_WAIT_MS; a success clears the account's count. Kept in the process's memory: Heftwise runs
- * as one process per data directory.
+ * The sign-in throttle. Failures are counted per key, in the database (several app instances on one
+ * PostgreSQL server behave as one), and forgotten after a quiet window:
+ * - per account and address ("pair"): after 5 failures within 15 minutes each further attempt from
+ *   that address waits, doubling from 30 s to 15 min — so guessing is slow, while the account's
+ *   owner signing in from another address is never locked out by someone else's failures;
+ * - per address: after 20 failures (many accounts tried from one place) the address waits too;
+ * - per account: failures from anywhere only slow the check down, by up to 2 s, never refuse it.
+ * Addresses come from lib/client-address.ts, which believes forwarded headers only from
+ * configured proxies.
  */
-const WINDOW_MS = 15 * 60_000;
-const FREE_FAILURES = 5;
-const BASE_WAIT_MS = 30_000;
-const MAX_WAIT_MS = 15 * 60_000;
+import { inArray, sql } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { signInAttempts } from "@/db/schema";
 
-interface Entry {
+export const WINDOW_MS = 15 * 60_000;
+export const FREE_PAIR_FAILURES = 5;
+export const FREE_ADDRESS_FAILURES = 20;
+export const BASE_WAIT_MS = 30_000;
+export const MAX_WAIT_MS = 15 * 60_000;
+export const SLOWDOWN_STEP_MS = 250;
+export const MAX_SLOWDOWN_MS = 2_000;
+
+export interface Attempts {
   failures: number;
   lastFailure: number;
 }
 
-export class SignInThrottle {
-  private entries = new Map<string, Entry>();
-
-  constructor(private readonly now: () => number = Date.now) {}
-
-  /** Milliseconds the caller must still wait before another attempt for any of these keys (0 = go). */
-  waitMs(keys: string[]): number {
-    let wait = 0;
-    for (const key of keys) {
-      const entry = this.current(key);
-      if (!entry || entry.failures < FREE_FAILURES) continue;
-      const backoff = Math.min(MAX_WAIT_MS, BASE_WAIT_MS * 2 ** (entry.failures - FREE_FAILURES));
-      wait = Math.max(wait, entry.lastFailure + backoff - this.now());
-    }
-    return Math.max(0, wait);
-  }
-
-  recordFailure(keys: string[]): void {
-    for (const key of keys) {
-      const entry = this.current(key) ?? { failures: 0, lastFailure: 0 };
-      this.entries.set(key, { failures: entry.failures + 1, lastFailure: this.now() });
-    }
-  }
-
-  recordSuccess(keys: string[]): void {
-    for (const key of keys) this.entries.delete(key);
-  }
-
-  private current(key: string): Entry | undefined {
-    const entry = this.entries.get(key);
-    if (entry && this.now() - entry.lastFailure > WINDOW_MS) {
-      this.entries.delete(key);
-      return undefined;
-    }
-    return entry;
-  }
+/** Milliseconds still to wait after `failures`, the last at `lastFailure` (pure). */
+export function waitAfter(entry: Attempts | undefined, free: number, now: number): number {
+  if (!entry || now - entry.lastFailure > WINDOW_MS || entry.failures < free) return 0;
+  const backoff = Math.min(MAX_WAIT_MS, BASE_WAIT_MS * 2 ** (entry.failures - free));
+  return Math.max(0, entry.lastFailure + backoff - now);
 }
 
-const globalForThrottle = globalThis as unknown as { __heftwiseThrottle?: SignInThrottle };
-export const signInThrottle = (globalForThrottle.__heftwiseThrottle ??= new SignInThrottle());
+/** How much to slow an account's check after failures from anywhere (pure). */
+export function slowdownAfter(entry: Attempts | undefined, now: number): number {
+  if (!entry || now - entry.lastFailure > WINDOW_MS || entry.failures <= FREE_PAIR_FAILURES) return 0;
+  return Math.min(MAX_SLOWDOWN_MS, SLOWDOWN_STEP_MS * (entry.failures - FREE_PAIR_FAILURES));
+}
+
+export const throttleKeys = (email: string, address: string | null) => ({
+  pair: `pair:${email}|${address ?? "unknown"}`,
+  address: address ? `address:${address}` : null,
+  account: `account:${email}`,
+});
+
+export async function readAttempts(keys: string[]): Promise<Map<string, Attempts>> {
+  const db = await getDb();
+  const rows = keys.length ? await db.select().from(signInAttempts).where(inArray(signInAttempts.key, keys)) : [];
+  return new Map(rows.map((r) => [r.key, { failures: r.failures, lastFailure: r.lastFailure.getTime() }]));
+}
+
+/** One more failure for each key; a count older than the window starts again. */
+export async function recordFailure(keys: string[]): Promise<void> {
+  const db = await getDb();
+  for (const key of keys)
+    await db
+      .insert(signInAttempts)
+      .values({ key, failures: 1, lastFailure: new Date() })
+      .onConflictDoUpdate({
+        target: signInAttempts.key,
+        set: {
+          failures: sql`case when ${signInAttempts.lastFailure} < now() - ${`${WINDOW_MS / 1000} seconds`}::interval then 1 else ${signInAttempts.failures} + 1 end`,
+          lastFailure: sql`now()`,
+        },
+      });
+}
+
+export async function clearAttempts(keys: string[]): Promise<void> {
+  const db = await getDb();
+  await db.delete(signInAttempts).where(inArray(signInAttempts.key, keys));
+}

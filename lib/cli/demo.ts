@@ -29,7 +29,7 @@ const origin = `http://localhost:${port}`;
 const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
 
 const SOURCE_DIRS = ["app", "assessments", "db", "lib", "fonts", "public"];
-const SOURCE_FILES = ["next.config.ts", "package.json", "postcss.config.mjs", "instrumentation.ts", "tsconfig.json"];
+const SOURCE_FILES = ["next.config.ts", "package.json", "postcss.config.mjs", "instrumentation.ts", "proxy.ts", "tsconfig.json"];
 
 function newestSourceTime(): number {
   let newest = 0;
@@ -94,7 +94,8 @@ async function main() {
   const { startMailFake } = await import("@/lib/mail/fake-server");
   const fake = await startMailFake({ smtpPort: Number(args["smtp-port"]), httpPort: Number(args["inbox-port"]) });
 
-  const server = spawn(process.execPath, [nextBin, "start", "-p", String(port), "-H", "127.0.0.1"], { stdio: ["ignore", "pipe", "inherit"], env });
+  // The production server (server.ts): Next.js behind a server that cleans forwarded addresses.
+  const server = spawn(process.execPath, ["--import", "tsx", path.join(root, "server.ts")], { stdio: ["ignore", "pipe", "inherit"], env: { ...env, PORT: String(port), HOSTNAME: "127.0.0.1" } });
   server.stdout.on("data", (chunk: Buffer) => {
     process.stdout.write(chunk);
     if (chunk.toString().includes("Ready")) printWelcome(seeded.created);

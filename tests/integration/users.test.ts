@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { DEMO_PASSWORD } from "@/db/demo-scenario";
-import { auditEvents, invites, outboundEmails, users } from "@/db/schema";
+import { auditEvents, invites, outboundEmails, signInAttempts, users } from "@/db/schema";
 import { checkCredentials, SIGN_IN_FAILED } from "@/lib/auth/credentials";
 import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
@@ -185,10 +185,26 @@ describe("signing in", () => {
     expect(wrong).toBe(SIGN_IN_FAILED);
   });
 
-  it("repeated failures on one account are slowed down, even with the right password", async () => {
+  it("five failures on an account from one address make that address wait, even with the right password; kept in the database", async () => {
     const email = "admin@brackenfold.example";
-    for (let i = 0; i < 5; i++) await checkCredentials({ email, password: `wrong-${i}-password` }, `10.1.0.${i}`).catch(() => undefined);
-    await expect(checkCredentials({ email, password: DEMO_PASSWORD }, "10.1.1.1")).rejects.toThrow(/Too many attempts/);
+    for (let i = 0; i < 5; i++) await checkCredentials({ email, password: `wrong-${i}-password` }, "10.1.0.9").catch(() => undefined);
+    await expect(checkCredentials({ email, password: DEMO_PASSWORD }, "10.1.0.9")).rejects.toThrow(/Too many attempts/);
+    const db = await getDb();
+    expect((await db.select().from(signInAttempts)).map((r) => r.key)).toEqual(expect.arrayContaining([`pair:${email}|10.1.0.9`, `account:${email}`, "address:10.1.0.9"]));
+  });
+
+  it("the owner signing in from an address that has not failed is slowed a little, never locked out", async () => {
+    const email = "admin@brackenfold.example";
+    // Someone else keeps failing on the admin's account from their own address.
+    for (let i = 0; i < 3; i++) await checkCredentials({ email, password: `guess-${i}-password` }, "10.1.0.9").catch(() => undefined);
+    const actor = await checkCredentials({ email, password: DEMO_PASSWORD }, "10.2.0.1");
+    expect(actor.email).toBe(email);
+  });
+
+  it("an address that tries many accounts waits, for any account", async () => {
+    for (let i = 0; i < 20; i++) await checkCredentials({ email: `nobody-${i}@nowhere.example`, password: "whatever-pass" }, "10.3.0.3").catch(() => undefined);
+    await expect(checkCredentials({ email: "adviser@brackenfold.example", password: DEMO_PASSWORD }, "10.3.0.3")).rejects.toThrow(/Too many attempts/);
+    expect((await checkCredentials({ email: "adviser@brackenfold.example", password: DEMO_PASSWORD }, "10.3.0.4")).email).toBe("adviser@brackenfold.example");
   });
 });
 
