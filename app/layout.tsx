@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import { hyperlegible } from "./fonts";
 import "./globals.css";
 
@@ -9,7 +10,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#16302b" };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request: its scripts carry the nonce of that request's
+  // Content-Security-Policy (proxy.ts), which cached HTML could not.
+  await connection();
   return (
     <html lang="en-GB" className={hyperlegible.variable}>
       <body className="min-h-screen font-sans antialiased">{children}</body>

@@ -151,9 +151,26 @@ test("signing out ends the session: a copy of its cookie no longer works; 'every
 });
 
 test("the server answers like a careful colleague: security headers on every page, 413 for an oversized form, 403 for a cross-site write", async ({ page, request }) => {
+  const blocked: string[] = [];
+  page.on("console", (m) => {
+    if (/Content Security Policy|Refused to (execute|load)/i.test(m.text())) blocked.push(m.text());
+  });
   const res = await page.goto("/sign-in");
   const headers = res!.headers();
   expect(headers["content-security-policy"]).toContain("frame-ancestors 'none'");
+  // Scripts only with this response's nonce; never eval.
+  const nonce = headers["content-security-policy"].match(/'nonce-([^']+)'/)?.[1];
+  expect(nonce).toBeTruthy();
+  expect(headers["content-security-policy"]).not.toContain("unsafe-eval");
+  expect(await page.locator(`script[nonce]`).count()).toBeGreaterThan(0);
+  // The page still works under the policy: signing in runs the form's scripts.
+  await page.getByLabel("E-mail").fill("adviser@brackenfold.example");
+  await page.getByLabel("Password").fill("not-the-password");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByText("E-mail or password not recognised.")).toBeVisible();
+  expect(blocked).toEqual([]);
+  const again = (await page.request.get("/sign-in")).headers()["content-security-policy"];
+  expect(again.match(/'nonce-([^']+)'/)?.[1]).not.toBe(nonce);
   expect(headers["x-content-type-options"]).toBe("nosniff");
   expect(headers["referrer-policy"]).toBe("strict-origin-when-cross-origin");
   expect(headers["permissions-policy"]).toContain("camera=()");
