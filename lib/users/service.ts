@@ -63,6 +63,20 @@ async function recordInvite(tx: Tx, actor: Actor, user: { id: string; email: str
   return token;
 }
 
+/** To the owner of an address that already has an account elsewhere: who tried, and what to do. */
+function sendElsewhereNotice(actor: Actor, email: string): Promise<SendOutcome> {
+  const body = renderMail({
+    heading: "Someone tried to add your address to Heftwise",
+    paragraphs: [
+      `${actor.name} tried to give this e-mail address an account in their organisation on Heftwise.`,
+      "Your address already has a Heftwise account with another organisation, and one address can belong to one organisation only, so nothing was changed.",
+      "If you should work in both, give them another address to invite.",
+    ],
+    footnote: "If you did not expect this, you can ignore this e-mail.",
+  });
+  return sendMail({ organisationId: actor.organisationId, kind: "invite", to: email, subject: "Your Heftwise account", ...body });
+}
+
 /** The invitation e-mail, sent after the transaction that recorded it has committed. */
 function sendInvite(actor: Actor, user: { name: string; email: string; role: Role }, token: string): Promise<SendOutcome> {
   const url = `${config().NEXTAUTH_URL.replace(/\/$/, "")}/invite/${token}`;
@@ -79,13 +93,21 @@ function sendInvite(actor: Actor, user: { name: string; email: string; role: Rol
   return sendMail({ organisationId: actor.organisationId, kind: "invite", to: user.email, subject: "Your Heftwise account", ...body });
 }
 
-export async function inviteUser(actor: Actor | null, input: unknown): Promise<{ userId: string; mail: SendOutcome }> {
+const alreadyHere = () => new AppError("validation", "Some fields need attention", [{ path: "email", message: "This person is already in your organisation" }]);
+
+/**
+ * Invites a person. An address already in the admin's own organisation is named on its field (the
+ * admin sees their people anyway). An address with an account in another organisation must not be
+ * revealed: nothing is created, its owner is told by e-mail, and the admin sees what any invitation
+ * shows — so `userId` is null only then, and only the server knows it.
+ */
+export async function inviteUser(actor: Actor | null, input: unknown): Promise<{ userId: string | null; mail: SendOutcome }> {
   authorize(actor, "users:manage");
   const data = parseOrThrow(inviteSchema, input);
   const db = await getDb();
   const existing = await db.query.users.findFirst({ where: eq(users.email, data.email) });
-  if (existing)
-    throw new AppError("validation", "Some fields need attention", [{ path: "email", message: "This e-mail address already has an account" }]);
+  if (existing?.organisationId === actor.organisationId) throw alreadyHere();
+  if (existing) return { userId: null, mail: await sendElsewhereNotice(actor, data.email) };
   // The person and their invitation are written together, or not at all; a parallel invitation of
   // the same address that got there first answers like the check above.
   const { user, token } = await db
@@ -94,7 +116,7 @@ export async function inviteUser(actor: Actor | null, input: unknown): Promise<{
       return { user: created, token: await recordInvite(tx, actor, created) };
     })
     .catch((err) => {
-      if (isUniqueViolation(err)) throw new AppError("conflict", "Some fields need attention", [{ path: "email", message: "This e-mail address already has an account" }]);
+      if (isUniqueViolation(err)) throw new AppError("conflict", "Some fields need attention", [{ path: "email", message: "This person is already in your organisation" }]);
       throw err;
     });
   const mail = await sendInvite(actor, user, token);

@@ -103,9 +103,22 @@ describe("inviting someone", () => {
     expect((await inspectInvite(second)).state).toBe("valid");
   });
 
-  it("refuses an address that already has an account, with the field named", async () => {
+  it("an address with an account in another organisation is not revealed: nothing is created, its owner is told, the admin sees an invitation", async () => {
+    const other = await otherOrganisation();
+    const theirs = other.admin.email;
+    const db = await getDb();
+    const before = await db.select().from(users).where(eq(users.organisationId, organisationId));
+    const result = await inviteUser(admin, { email: theirs, name: "Someone Else", role: "adviser" });
+    expect(result.mail.status).toBe("sent");
+    expect(result.userId).toBeNull();
+    expect(await db.select().from(users).where(eq(users.organisationId, organisationId))).toHaveLength(before.length);
+    const notice = fake.messages.filter((m) => m.to.includes(theirs)).at(-1)!;
+    expect(notice.text).toContain("already has a Heftwise account with another organisation");
+  });
+
+  it("refuses an address that already has an account here, with the field named", async () => {
     const err = await expectAppError(inviteUser(admin, { email: "adviser@brackenfold.example", name: "Dup", role: "adviser" }), "validation");
-    expect(err.issues).toEqual([{ path: "email", message: "This e-mail address already has an account" }]);
+    expect(err.issues).toEqual([{ path: "email", message: "This person is already in your organisation" }]);
   });
 
   it("names every bad field", async () => {
@@ -134,7 +147,7 @@ describe("inviting someone", () => {
       expect(logged.status).toBe("failed");
       expect(logged.attempts).toBe(3);
       expect(logged.lastError).toBeTruthy();
-      expect(await db.query.users.findFirst({ where: eq(users.id, userId) })).toBeTruthy();
+      expect(await db.query.users.findFirst({ where: eq(users.id, userId!) })).toBeTruthy();
     } finally {
       cfg.smtpUrl = original;
       g.__heftwiseTransport = undefined;
