@@ -91,6 +91,15 @@ export function parseOrThrow<T>(schema: z.ZodType<T>, input: unknown, message?: 
   return parsed.data;
 }
 
+/** As `parseOrThrow`, for schemas with asynchronous checks (a drawn signature's decoding). */
+export async function parseOrThrowAsync<T>(schema: z.ZodType<T>, input: unknown, message?: string): Promise<T> {
+  const unstorable = unstorableText(input);
+  if (unstorable.length) throw new AppError("validation", message ?? "Some fields need attention", unstorable);
+  const parsed = await schema.safeParseAsync(input);
+  if (!parsed.success) throw AppError.validation(parsed.error, message);
+  return parsed.data;
+}
+
 /**
  * The AppError an error stands for, or null for one that is truly unexpected. A database's refusal
  * of the data (PostgreSQL class 22: a value it cannot store) is the caller's input: 422, never 500;

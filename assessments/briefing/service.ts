@@ -9,7 +9,7 @@ import { getDb } from "@/db/client";
 import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, organisations, revisions, siteChangeNotes, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
-import { AppError, parseOrThrow } from "@/lib/errors";
+import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, type Actor } from "@/lib/permissions";
@@ -112,8 +112,8 @@ async function ownBriefing(actor: Actor, briefingId: string) {
 /** Records one sign-on. Sending the same key again returns the first record: nothing is duplicated. */
 export async function recordAttendee(actor: Actor | null, briefingId: string, input: unknown): Promise<{ id: string; duplicate: boolean }> {
   authorize(actor, "briefings:run");
-  const data = parseOrThrow(attendeeSchema, input);
   const briefing = await ownBriefing(actor, briefingId);
+  const data = await parseOrThrowAsync(attendeeSchema, input);
   if (briefing.completedAt) {
     const db = await getDb();
     const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
@@ -147,8 +147,8 @@ export async function recordAttendee(actor: Actor | null, briefingId: string, in
 /** The foreman signs last; the briefing is then closed. */
 export async function completeBriefing(actor: Actor | null, briefingId: string, input: unknown): Promise<void> {
   authorize(actor, "briefings:run");
-  const data = parseOrThrow(completeBriefingSchema, input);
   const briefing = await ownBriefing(actor, briefingId);
+  const data = await parseOrThrowAsync(completeBriefingSchema, input);
   if (briefing.completedAt) throw new AppError("conflict", "This briefing is already signed off.");
   const db = await getDb();
   const attendees = await db.select({ id: briefingAttendees.id }).from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId));

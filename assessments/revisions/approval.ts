@@ -12,7 +12,7 @@ import { assessments, auditEvents, issuedPacks, organisations, revisions, signat
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
 import { drawnSignatureSchema } from "@/lib/drawn-signature";
-import { AppError, parseOrThrow } from "@/lib/errors";
+import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, can, type Actor } from "@/lib/permissions";
@@ -137,7 +137,7 @@ async function submittedToMe(actor: Actor, revisionId: string, version: number) 
 /** Countersigns: locks the revision, supersedes the previous approved one, stores the signed pack. All or nothing. */
 export async function approveRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "reviews:decide");
-  const data = parseOrThrow(approveSchema, input);
+  const data = await parseOrThrowAsync(approveSchema, input);
   const png = data.signature;
   const revision = await submittedToMe(actor, revisionId, data.version);
   const db = await getDb();

@@ -181,6 +181,10 @@ test("the server answers like a careful colleague: security headers on every pag
   expect(big.status()).toBe(413);
   expect((await big.json()).error.code).toBe("payload_too_large");
 
+  // A server action posted from another site's page.
+  const foreignAction = await request.post("/jobs/new", { headers: { "next-action": "0123456789abcdef", origin: "https://evil.example", "content-type": "text/plain;charset=UTF-8" }, data: "[]" });
+  expect(foreignAction.status()).toBe(403);
+
   // A write from another site's page, with a simple content type a plain form can send.
   const crossSite = await request.post("/api/v1/components/import", { headers: { origin: "https://evil.example", "content-type": "text/plain" }, data: "name,mass_kg,grip,mass_source\n" });
   expect(crossSite.status()).toBe(403);
