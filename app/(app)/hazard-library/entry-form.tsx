@@ -4,13 +4,32 @@ import * as Dialog from "@radix-ui/react-dialog";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type Resolver, type UseFormRegister } from "react-hook-form";
 import { FormMessage, PrimaryButton, SecondaryButton, SelectField, TextField } from "@/app/_components/form";
 import { libraryEntrySchema, type LibraryEntryInput } from "@/assessments/hazard-library/schemas";
 import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating } from "@/assessments/method-statement/content";
 import { deleteEntryAction, saveEntryAction } from "./actions";
 
 const RATINGS = [1, 2, 3, 4, 5];
+
+/** Likelihood and severity, before or after the controls, with their product. */
+function RatingPair({ when, register, rating }: { when: "before" | "after"; register: UseFormRegister<LibraryEntryInput>; rating: number }) {
+  const field = (kind: "likelihood" | "severity") => `${kind}${when === "before" ? "Before" : "After"}` as const;
+  return (
+    <div className="grid grid-cols-3 gap-3 sm:max-w-lg">
+      {(["likelihood", "severity"] as const).map((kind) => (
+        <SelectField key={kind} label={`${kind === "likelihood" ? "Likelihood" : "Severity"} ${when}`} {...register(field(kind), { valueAsNumber: true })}>
+          {RATINGS.map((r) => (
+            <option key={r}>{r}</option>
+          ))}
+        </SelectField>
+      ))}
+      <p className="self-end pb-2 text-sm">
+        Rating <strong className="tabular-nums">{rating}</strong>
+      </p>
+    </div>
+  );
+}
 
 /** Add or change one library hazard; the same schema checks it here and on the server. */
 export function EntryForm({ entryId, initial }: { entryId: string | null; initial?: LibraryEntryInput }) {
@@ -52,21 +71,7 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
         <TextField label="Hazard" error={e.hazard?.message} {...register("hazard")} />
         <TextField label="Who is at risk" error={e.whoIsAtRisk?.message} {...register("whoIsAtRisk")} />
       </div>
-      <div className="grid grid-cols-3 gap-3 sm:max-w-lg">
-        <SelectField label="Likelihood before" {...register("likelihoodBefore", { valueAsNumber: true })}>
-          {RATINGS.map((r) => (
-            <option key={r}>{r}</option>
-          ))}
-        </SelectField>
-        <SelectField label="Severity before" {...register("severityBefore", { valueAsNumber: true })}>
-          {RATINGS.map((r) => (
-            <option key={r}>{r}</option>
-          ))}
-        </SelectField>
-        <p className="self-end pb-2 text-sm">
-          Rating <strong className="tabular-nums">{rating(values.likelihoodBefore, values.severityBefore)}</strong>
-        </p>
-      </div>
+      <RatingPair when="before" register={register} rating={rating(values.likelihoodBefore, values.severityBefore)} />
       <fieldset className="space-y-2">
         <legend className="font-bold">Controls, by the hierarchy of control</legend>
         {e.controls?.root?.message || e.controls?.message ? <FormMessage tone="error">{e.controls?.root?.message ?? e.controls?.message}</FormMessage> : null}
@@ -89,21 +94,7 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
           Add a control
         </SecondaryButton>
       </fieldset>
-      <div className="grid grid-cols-3 gap-3 sm:max-w-lg">
-        <SelectField label="Likelihood after" {...register("likelihoodAfter", { valueAsNumber: true })}>
-          {RATINGS.map((r) => (
-            <option key={r}>{r}</option>
-          ))}
-        </SelectField>
-        <SelectField label="Severity after" {...register("severityAfter", { valueAsNumber: true })}>
-          {RATINGS.map((r) => (
-            <option key={r}>{r}</option>
-          ))}
-        </SelectField>
-        <p className="self-end pb-2 text-sm">
-          Rating <strong className="tabular-nums">{rating(values.likelihoodAfter, values.severityAfter)}</strong>
-        </p>
-      </div>
+      <RatingPair when="after" register={register} rating={rating(values.likelihoodAfter, values.severityAfter)} />
       <div className="flex flex-wrap gap-2">
         <PrimaryButton type="submit" disabled={formState.isSubmitting}>
           {formState.isSubmitting ? "Saving…" : "Save to the library"}

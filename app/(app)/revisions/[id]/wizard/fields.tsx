@@ -41,11 +41,29 @@ export function Text({ name, label, area = false, hint }: { name: FieldPath<Cont
   );
 }
 
-export function Choice({ name, label, options, asNumber = false }: { name: FieldPath<Content>; label: string; options: readonly (readonly [string | number, string])[]; asNumber?: boolean }) {
+/**
+ * A select bound to the content. With `placeholder`, a blank first option stores null (an
+ * arrangement not yet chosen); `asNumber` stores numbers.
+ */
+export function Choice({
+  name,
+  label,
+  options,
+  asNumber = false,
+  placeholder,
+}: {
+  name: FieldPath<Content>;
+  label: string;
+  options: readonly (readonly [string | number, string])[];
+  asNumber?: boolean;
+  placeholder?: string;
+}) {
   const { register, error, id, control } = useContentField(name);
+  const as = asNumber ? { valueAsNumber: true as const } : placeholder !== undefined ? { setValueAs: (v: string | null) => (v === "" || v === null ? null : v) } : undefined;
   return (
     <FieldFrame id={id} label={label} error={error} compact>
-      <select {...control} {...register(name, asNumber ? { valueAsNumber: true } : undefined)}>
+      <select {...control} {...register(name, as)}>
+        {placeholder !== undefined && <option value="">{placeholder}</option>}
         {options.map(([value, text]) => (
           <option key={value} value={value}>
             {text}
@@ -136,23 +154,6 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
       )}
       <FieldError id={`${id}-error`} message={error} compact />
     </fieldset>
-  );
-}
-
-/** A select whose blank first option stores null (an arrangement not yet chosen). */
-export function NullableChoice({ name, label, options, placeholder }: { name: FieldPath<Content>; label: string; options: readonly (readonly [string, string])[]; placeholder: string }) {
-  const { register, error, id, control } = useContentField(name);
-  return (
-    <FieldFrame id={id} label={label} error={error} compact>
-      <select {...control} {...register(name, { setValueAs: (v: string | null) => (v === "" || v === null ? null : v) })}>
-        <option value="">{placeholder}</option>
-        {options.map(([value, text]) => (
-          <option key={value} value={value}>
-            {text}
-          </option>
-        ))}
-      </select>
-    </FieldFrame>
   );
 }
 

@@ -16,7 +16,7 @@ import {
 } from "@/assessments/method-statement/content";
 import { belowStandingLevelTasks } from "@/assessments/method-statement/score-task";
 import { LINE_CAUTION } from "@/assessments/method-statement/lineside";
-import { Check, Choice, DateField, NullableChoice, Num, Text } from "./fields";
+import { Check, Choice, DateField, Num, Text } from "./fields";
 
 export function LineStep() {
   const nearLine = useWatch<Content, "lineside.nearLine">({ name: "lineside.nearLine" });
@@ -29,7 +29,7 @@ export function LineStep() {
         <>
           <fieldset className="space-y-3 rounded border border-rule p-3">
             <legend className="px-1 font-bold">Protection from trains</legend>
-            <NullableChoice name="lineside.protection" label="Protection arrangement" placeholder="Choose the arrangement…" options={PROTECTION_ARRANGEMENTS.map((p) => [p, PROTECTION_LABELS[p]] as const)} />
+            <Choice name="lineside.protection" label="Protection arrangement" placeholder="Choose the arrangement…" options={PROTECTION_ARRANGEMENTS.map((p) => [p, PROTECTION_LABELS[p]] as const)} />
             <Text name="lineside.protectionDetail" label={protection === "other" ? "Describe the arrangement" : "Details of the arrangement"} area hint="Where the barrier or limit runs, the times of the blockage or possession, how warning is given." />
             <div className="grid gap-3 md:grid-cols-3">
               <Text name="lineside.responsibleName" label="Person responsible for the safe system of work" />
@@ -110,7 +110,7 @@ export function GroundStep() {
           <div className="space-y-3">
             <div className="grid gap-3 md:grid-cols-[10rem_1fr]">
               <Num name="excavation.depthM" label="Depth" unit="m" optional />
-              <NullableChoice name="excavation.support" label="Support or battering" placeholder="Choose…" options={EXCAVATION_SUPPORT.map((e) => [e, SUPPORT_LABELS[e]] as const)} />
+              <Choice name="excavation.support" label="Support or battering" placeholder="Choose…" options={EXCAVATION_SUPPORT.map((e) => [e, SUPPORT_LABELS[e]] as const)} />
             </div>
             <Text name="excavation.supportDetail" label="Details of the support" area />
             <Text name="excavation.edgeProtection" label="Edge protection and barriers" area />
