@@ -22,7 +22,7 @@ if (process.env.TEST_DATABASE_URL)
     resolve: { alias },
     test: {
       name: "postgres",
-      include: ["tests/integration/**/*.test.ts"],
+      include: ["tests/integration/**/*.test.ts", "tests/postgres/**/*.test.ts"],
       env: { HEFTWISE_TEST_SERVER: process.env.TEST_DATABASE_URL, NODE_ENV: "test" },
       ...common,
     },

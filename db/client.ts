@@ -95,6 +95,9 @@ async function open(): Promise<Handle> {
       import("drizzle-orm/node-postgres/migrator"),
     ]);
     const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
+    // An idle connection the server ends (a restart, a failover, an administrator) must not take the
+    // process down: the pool drops it and opens another on the next query.
+    pool.on("error", (err) => console.error(`Database connection lost (${(err as { code?: string }).code ?? "no code"}): ${err.message}; it will be reopened.`));
     const db = drizzle(pool, { schema });
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
     // Both drivers expose the same query builder; the PGlite type stands for both.
