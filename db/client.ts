@@ -14,7 +14,7 @@ import { tmpdir } from "node:os";
 import { createConnection, createServer, type Server } from "node:net";
 import path from "node:path";
 import type { PgliteDatabase } from "drizzle-orm/pglite";
-import { config } from "@/lib/config";
+import { databaseConfig } from "./config";
 import * as schema from "./schema";
 
 export type Db = PgliteDatabase<typeof schema>;
@@ -87,7 +87,7 @@ async function acquireLock(dataDir: string): Promise<() => void> {
 }
 
 async function open(): Promise<Handle> {
-  const { DATABASE_URL, pgliteDir } = config();
+  const { DATABASE_URL, pgliteDir } = databaseConfig();
   if (DATABASE_URL) {
     const [{ Pool }, { drizzle }, { migrate }] = await Promise.all([
       import("pg"),

@@ -21,8 +21,8 @@ async function main(out: string) {
   process.env.SMTP_URL = `smtp://127.0.0.1:${fake.smtpPort}`;
   try {
     const { getDb, closeDb } = await import("@/db/client");
-    const { seedDemo } = await import("@/db/seed");
-    const { DEMO_USERS } = await import("@/db/demo-scenario");
+    const { seedDemo } = await import("@/assessments/demo/seed");
+    const { DEMO_USERS } = await import("@/assessments/demo/scenario");
     const { users } = await import("@/db/schema");
     const { eq } = await import("drizzle-orm");
     const { listAssessments, getRevision } = await import("@/assessments/revisions/service");

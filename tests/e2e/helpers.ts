@@ -1,5 +1,5 @@
 import { expect, type Page } from "@playwright/test";
-import { DEMO_PASSWORD } from "@/db/demo-scenario";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import { INBOX_URL } from "../../playwright.config";
 
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {

@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { DEMO_USERS } from "@/db/demo-scenario";
+import { DEMO_USERS } from "@/assessments/demo/scenario";
 import { signIn, waitForMail } from "./helpers";
 
 const navigationByRole = {

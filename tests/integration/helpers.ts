@@ -1,8 +1,8 @@
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { organisations, users, type Role } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
-import { DEMO_LINESIDE } from "@/db/demo-scenario";
+import { seedDemo } from "@/assessments/demo/seed";
+import { DEMO_LINESIDE } from "@/assessments/demo/scenario";
 import type { Content } from "@/assessments/method-statement/content";
 import type { Actor } from "@/lib/permissions";
 

@@ -2,7 +2,7 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
-import { DEMO_PASSWORD } from "@/db/demo-scenario";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import { auditEvents, invites, outboundEmails, signInAttempts, users } from "@/db/schema";
 import { checkCredentials, SIGN_IN_FAILED } from "@/lib/auth/credentials";
 import { AppError } from "@/lib/errors";

@@ -6,7 +6,7 @@
 import { TEMPLATES } from "@/assessments/method-statement/templates";
 import { reviewContent, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import type { PackInput } from "@/assessments/pack/document";
-import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_LIFT_TEAM } from "@/db/demo-scenario";
+import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_LIFT_TEAM } from "@/assessments/demo/scenario";
 import { drawnSignaturePng } from "@/lib/png";
 
 export function packInput(taskCount: number, overrides: Partial<PackInput> = {}): PackInput {

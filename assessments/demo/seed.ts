@@ -4,15 +4,19 @@
  */
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/passwords";
-import { getDb, type Db } from "./client";
-import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_LINESIDE, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./demo-scenario";
+import { getDb, type Db } from "@/db/client";
+import { components, jobAssignments, jobs, organisations, users } from "@/db/schema";
+import { drawnSignaturePng } from "@/lib/png";
+import { addStarterHazards } from "../hazard-library/service";
+import { approveRevision, submitRevision } from "../revisions/approval";
+import { createAssessment, getRevision, saveRevision } from "../revisions/service";
+import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_LINESIDE, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./scenario";
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
 /** Three weeks from seeding: the approved demo assessment shows as due for review within 30 days. */
 const demoDay = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
 const demoReviewDate = () => new Date(Date.now() + 21 * 86_400_000).toISOString().slice(0, 10);
-import { components, jobAssignments, jobs, organisations, users } from "./schema";
 
 export async function seedDemo(db: Db): Promise<{ created: boolean; organisationId: string }> {
   const existing = await db.query.organisations.findFirst({ where: eq(organisations.name, DEMO_ORGANISATION) });
@@ -20,7 +24,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const result = await db.transaction(async (tx) => {
     const [org] = await tx.insert(organisations).values({ name: DEMO_ORGANISATION }).returning();
-    await (await import("@/assessments/hazard-library/service")).addStarterHazards(tx, org.id);
+    await addStarterHazards(tx, org.id);
     const people = await tx
       .insert(users)
       .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash })))
@@ -41,7 +45,6 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
  * lift team and examinations filled in) and a by-hand job left as a draft.
  */
 async function seedDemoAssessments(organisationId: string) {
-  const { createAssessment, getRevision, saveRevision } = await import("@/assessments/revisions/service");
   const db = await getDb();
   const [adviserRow] = await db.select().from(users).where(eq(users.email, DEMO_ADVISER_EMAIL));
   const adviser = { id: adviserRow.id, organisationId, role: adviserRow.role, name: adviserRow.name, email: adviserRow.email };
@@ -72,8 +75,6 @@ async function seedDemoAssessments(organisationId: string) {
   await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base and cable chamber at Carrowby", templateId: "lineside-base" });
 
   // An approved revision for the foreman to brief from, at Hollin Vale (approved without e-mails).
-  const { submitRevision, approveRevision } = await import("@/assessments/revisions/approval");
-  const { drawnSignaturePng } = await import("@/lib/png");
   const [approverRow] = await db.select().from(users).where(eq(users.email, DEMO_APPROVER_EMAIL));
   const approver = { id: approverRow.id, organisationId, role: approverRow.role, name: approverRow.name, email: approverRow.email };
   const base = await createAssessment(adviser, { jobId: hollinVale.id, title: "Equipment base by hand at Hollin Vale", templateId: "equipment-base" });

@@ -2,7 +2,7 @@
  * The invented demo scenario: Brackenfold Lineside Ltd, a contractor working for the (invented)
  * Wendmoor Railway on its Hollin Vale branch. Every company, person and place here is made up.
  */
-import type { Role } from "./schema";
+import type { Role } from "@/db/schema";
 
 export const DEMO_ORGANISATION = "Brackenfold Lineside Ltd";
 export const DEMO_PASSWORD = "hollin-vale-demo";

@@ -87,7 +87,7 @@ async function main() {
   // Migrate and seed in this process, then close: the server opens the data directory next,
   // and two processes must never hold it at once.
   const { getDb, closeDb } = await import("@/db/client");
-  const { seedDemo } = await import("@/db/seed");
+  const { seedDemo } = await import("@/assessments/demo/seed");
   const seeded = await seedDemo(await getDb());
   await closeDb();
 
@@ -116,7 +116,7 @@ async function main() {
 }
 
 function printWelcome(created: boolean) {
-  void import("@/db/demo-scenario").then(({ DEMO_USERS, DEMO_PASSWORD, DEMO_ORGANISATION }) => {
+  void import("@/assessments/demo/scenario").then(({ DEMO_USERS, DEMO_PASSWORD, DEMO_ORGANISATION }) => {
     const lines = [
       "",
       `Heftwise demo is running: ${origin}`,
