@@ -18,6 +18,10 @@ import { databaseConfig } from "./config";
 import * as schema from "./schema";
 
 export type Db = PgliteDatabase<typeof schema>;
+/** A transaction's handle, as `db.transaction(async (tx) => …)` passes it. */
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+/** Whatever runs a query: the database itself, or a transaction the caller opened. */
+export type Queryable = Db | Tx;
 
 interface Handle {
   db: Db;

@@ -97,7 +97,7 @@ export const jobs = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("jobs_organisation_idx").on(t.organisationId)],
+  (t) => [index("jobs_organisation_idx").on(t.organisationId), index("jobs_organisation_name_idx").on(t.organisationId, t.name, t.id)],
 );
 
 export const components = pgTable(
@@ -217,7 +217,8 @@ export const assessments = pgTable(
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
-  (t) => [index("assessments_organisation_idx").on(t.organisationId)],
+  // The list sorted by title, page after page: a walk along this index (keyset pagination).
+  (t) => [index("assessments_organisation_idx").on(t.organisationId), index("assessments_organisation_title_idx").on(t.organisationId, t.title, t.id)],
 );
 
 export const revisions = pgTable(
@@ -242,6 +243,12 @@ export const revisions = pgTable(
     results: jsonb("results"),
     /** The worst band of the tasks as saved (null while none is scored), for lists and filters. */
     worstBand: text("worst_band"),
+    /**
+     * The assessment's newest revision (the highest number), kept by the code that creates a
+     * revision: lists and counts read "the latest revision of each assessment" from an index
+     * instead of grouping every revision.
+     */
+    isLatest: boolean("is_latest").notNull().default(false),
     /** Set by a foreman's site change note: conditions differ from the assessment. */
     needsReview: boolean("needs_review").notNull().default(false),
     contentHash: text("content_hash"),
@@ -253,6 +260,12 @@ export const revisions = pgTable(
   (t) => [
     uniqueIndex("revisions_assessment_number_unique").on(t.assessmentId, t.number),
     index("revisions_organisation_idx").on(t.organisationId),
+    // At most one latest revision an assessment; the list's default order (last saved first).
+    uniqueIndex("revisions_latest_unique").on(t.assessmentId).where(sql`${t.isLatest}`),
+    index("revisions_latest_updated_idx").on(t.organisationId, t.updatedAt, t.id).where(sql`${t.isLatest}`),
+    // Counts by status for the overview; an approver's queue.
+    index("revisions_organisation_status_idx").on(t.organisationId, t.status),
+    index("revisions_approver_status_idx").on(t.approverId, t.status),
   ],
 );
 
@@ -269,7 +282,7 @@ export const auditEvents = pgTable(
     details: jsonb("details"),
     createdAt: createdAt(),
   },
-  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId), index("audit_events_organisation_idx").on(t.organisationId)],
+  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId, t.createdAt), index("audit_events_organisation_idx").on(t.organisationId, t.createdAt)],
 );
 
 export const outboundEmails = pgTable(

@@ -1,4 +1,4 @@
-import type { Db } from "@/db/client";
+import type { Queryable } from "@/db/client";
 import { auditEvents } from "@/db/schema";
 
 export interface AuditEntry {
@@ -11,9 +11,8 @@ export interface AuditEntry {
   details?: Record<string, unknown>;
 }
 
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /** Records who did what, when — inside the caller's transaction, so the event and the change land together. */
-export async function recordAudit(tx: Db | Tx, entry: AuditEntry): Promise<void> {
+export async function recordAudit(tx: Queryable, entry: AuditEntry): Promise<void> {
   await tx.insert(auditEvents).values({ ...entry, contentHash: entry.contentHash ?? null, details: entry.details ?? null });
 }

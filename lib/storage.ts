@@ -5,10 +5,9 @@
  */
 import { createHash } from "node:crypto";
 import { and, eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import { storedFiles } from "@/db/schema";
 
-type Tx = Parameters<Parameters<Awaited<ReturnType<typeof getDb>>["transaction"]>[0]>[0];
 
 export interface StoredFile {
   id: string;

@@ -1,8 +1,8 @@
 import Link from "next/link";
-import { listJobs } from "@/assessments/jobs/queries";
-import { listComponents } from "@/assessments/load-register/queries";
+import { countJobs } from "@/assessments/jobs/queries";
+import { countComponents } from "@/assessments/load-register/queries";
 import { listForemanJobs } from "@/assessments/briefing/service";
-import { countRevisionsByStatus, listAwaitingReview } from "@/assessments/revisions/queries";
+import { countAwaitingReview, countRevisionsByStatus } from "@/assessments/revisions/queries";
 import { requireActor } from "@/lib/auth/session";
 import { can, type Actor } from "@/lib/permissions";
 
@@ -24,13 +24,12 @@ function Card({ title, value, href, children }: { title: string; value?: number 
 }
 
 async function AdviserOverview({ actor }: { actor: Actor }) {
-  const [jobRows, componentRows, byStatus] = await Promise.all([listJobs(actor), listComponents(actor), countRevisionsByStatus(actor)]);
-  const estimated = componentRows.filter((c) => c.massSource === "estimated").length;
+  const [jobCount, register, byStatus] = await Promise.all([countJobs(actor), countComponents(actor), countRevisionsByStatus(actor)]);
   return (
     <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-      <Card title="Jobs" value={jobRows.length} href="/jobs" />
-      <Card title="Load register" value={componentRows.length} href="/load-register">
-        {estimated > 0 && <p className="mt-1 text-sm font-bold text-band-watch">{estimated} with estimated mass</p>}
+      <Card title="Jobs" value={jobCount} href="/jobs" />
+      <Card title="Load register" value={register.total} href="/load-register">
+        {register.estimated > 0 && <p className="mt-1 text-sm font-bold text-band-watch">{register.estimated} with estimated mass</p>}
       </Card>
       <Card title="Drafts" value={byStatus.draft ?? 0} />
       <Card title="Awaiting approval" value={byStatus.submitted ?? 0} />
@@ -45,7 +44,7 @@ export default async function OverviewPage() {
       <h1 className="text-2xl font-bold">Good to see you, {actor.name.split(" ")[0]}</h1>
       {can(actor, "assessments:read") && <AdviserOverview actor={actor} />}
       {can(actor, "reviews:read") && (
-        <Card title="Waiting for your countersignature" value={(await listAwaitingReview(actor)).length} href="/reviews" />
+        <Card title="Waiting for your countersignature" value={await countAwaitingReview(actor)} href="/reviews" />
       )}
       {can(actor, "briefings:run") && (
         <Card title="Approved assessments ready to brief" value={(await listForemanJobs(actor)).reduce((n, j) => n + j.revisions.length, 0)} href="/briefings" />

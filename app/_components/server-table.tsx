@@ -7,6 +7,7 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
 import { useState } from "react";
+import { apiRequest } from "@/lib/api-client";
 
 export interface FilterSpec {
   key: string;
@@ -49,12 +50,7 @@ export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {},
   const query = useQuery({
     queryKey: [endpoint, params.toString()],
     placeholderData: keepPreviousData,
-    queryFn: async (): Promise<PageResponse<T>> => {
-      const res = await fetch(`${endpoint}?${params}`);
-      const body = await res.json();
-      if (!res.ok) throw new Error(body.error?.message ?? "Could not load the list");
-      return body;
-    },
+    queryFn: ({ signal }) => apiRequest<PageResponse<T>>(`${endpoint}?${params}`, { signal }),
   });
 
   const table = useReactTable({ data: query.data?.items ?? [], columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true });

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { FormMessage, PrimaryButton } from "@/app/_components/form";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 type Answer =
   | { result: "authentic"; status: string; title: string; revision: number; organisation: string; approvedAt: string | null; kind: string }
@@ -23,11 +24,13 @@ export function VerifyForm() {
     setBusy(true);
     const form = new FormData();
     form.set("file", file);
-    const res = await fetch("/api/verify", { method: "POST", body: form });
-    const body = await res.json().catch(() => ({}));
-    setBusy(false);
-    if (res.ok) setAnswer(body);
-    else setProblem(body.error?.message ?? "The file could not be checked.");
+    try {
+      setAnswer(await apiRequest<Answer>("/api/verify", { body: form }));
+    } catch (err) {
+      setProblem(messageOf(err));
+    } finally {
+      setBusy(false);
+    }
   };
 
   return (

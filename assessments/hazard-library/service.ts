@@ -5,7 +5,7 @@
  */
 import { and, asc, eq } from "drizzle-orm";
 import { z } from "zod";
-import { getDb, type Db } from "@/db/client";
+import { getDb, type Queryable } from "@/db/client";
 import { hazardLibrary } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, isUniqueViolation, parseOrThrow } from "@/lib/errors";
@@ -15,7 +15,6 @@ import { libraryEntrySchema, type LibraryEntry, type LibraryEntryInput } from ".
 import { STARTER_HAZARDS } from "./starter";
 
 
-type Tx = Db | Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 const toEntry = (row: typeof hazardLibrary.$inferSelect): LibraryEntry => ({
   id: row.id,
@@ -29,7 +28,7 @@ const toEntry = (row: typeof hazardLibrary.$inferSelect): LibraryEntry => ({
 });
 
 /** Adds the starter hazards an organisation does not have yet (by name); returns how many were added. */
-export async function addStarterHazards(tx: Tx, organisationId: string): Promise<number> {
+export async function addStarterHazards(tx: Queryable, organisationId: string): Promise<number> {
   const added = await tx
     .insert(hazardLibrary)
     .values(STARTER_HAZARDS.map((h) => ({ ...h, organisationId })))

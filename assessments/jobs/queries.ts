@@ -1,8 +1,8 @@
-import { asc, count, eq } from "drizzle-orm";
+import { and, asc, count, eq, getTableColumns } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { jobs } from "@/db/schema";
 import { parseOrThrow } from "@/lib/errors";
-import { page, pageQuerySchema } from "@/lib/pagination";
+import { afterCursor, keysetColumns, keysetPage, orderOf, pageQuerySchema, type Keyset } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
 
 export async function listJobs(actor: Actor | null) {
@@ -11,11 +11,29 @@ export async function listJobs(actor: Actor | null) {
   return db.select().from(jobs).where(eq(jobs.organisationId, actor.organisationId)).orderBy(asc(jobs.name));
 }
 
+const JOB_ORDER: Keyset = { name: "name", column: jobs.name, id: jobs.id, descending: false, type: "text" };
+
 export async function listJobsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "jobs:read");
   const q = parseOrThrow(pageQuerySchema, query, "Invalid query");
   const db = await getDb();
+  const mine = eq(jobs.organisationId, actor.organisationId);
+  const [rows, [{ total }]] = await Promise.all([
+    db
+      .select({ ...getTableColumns(jobs), ...keysetColumns(JOB_ORDER) })
+      .from(jobs)
+      .where(and(mine, afterCursor(JOB_ORDER, q.cursor)))
+      .orderBy(...orderOf(JOB_ORDER))
+      .limit(q.limit + 1),
+    db.select({ total: count() }).from(jobs).where(mine),
+  ]);
+  return keysetPage(rows, JOB_ORDER, q.limit, Number(total));
+}
+
+/** How many jobs the organisation has, for the overview. */
+export async function countJobs(actor: Actor | null): Promise<number> {
+  authorize(actor, "jobs:read");
+  const db = await getDb();
   const [{ total }] = await db.select({ total: count() }).from(jobs).where(eq(jobs.organisationId, actor.organisationId));
-  const items = await db.select().from(jobs).where(eq(jobs.organisationId, actor.organisationId)).orderBy(asc(jobs.name), asc(jobs.id)).limit(q.limit).offset(q.cursor);
-  return page(items, q.cursor, q.limit, Number(total));
+  return Number(total);
 }

@@ -2,7 +2,7 @@
  * The load register: components with their masses and where the masses came from, a CSV import
  * that is all-or-nothing, and attachments (data sheets, photographs) checked by their content.
  */
-import { and, asc, count, desc, eq, ilike, type SQL } from "drizzle-orm";
+import { and, asc, count, eq, getTableColumns, ilike, type SQL } from "drizzle-orm";
 import Papa from "papaparse";
 import { z } from "zod";
 import { getDb } from "@/db/client";
@@ -10,7 +10,7 @@ import { componentAttachments, components } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, isUniqueViolation, parseOrThrow, type FieldIssue } from "@/lib/errors";
 import { formulaNote, parseCsvNumber } from "./csv-cells";
-import { page, pageQuerySchema } from "@/lib/pagination";
+import { afterCursor, keysetColumns, keysetPage, orderOf, pageQuerySchema, type Keyset } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
 import { deleteFile, getFile, putFile } from "@/lib/storage";
 import { componentSchema, CSV_COLUMNS, MAX_IMPORT_ROWS } from "./schemas";
@@ -24,19 +24,32 @@ export const componentListQuerySchema = pageQuerySchema.extend({
   sort: z.enum(["name", "-name", "massKg", "-massKg"]).default("name"),
 });
 
+const COMPONENT_ORDERS = {
+  name: { column: components.name, id: components.id, type: "text" },
+  massKg: { column: components.massKg, id: components.id, type: "float8" },
+} as const;
+
+/** The register filtered, sorted and paged by keyset; the total counted in SQL. */
 export async function listComponentsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "components:read");
   const q = parseOrThrow(componentListQuerySchema, query, "Invalid query");
+  const descending = q.sort.startsWith("-");
+  const keyset: Keyset = { name: q.sort, descending, ...COMPONENT_ORDERS[q.sort.replace("-", "") as "name" | "massKg"] };
   const db = await getDb();
   const where: SQL[] = [eq(components.organisationId, actor.organisationId)];
   if (q.q) where.push(ilike(components.name, `%${q.q.replace(/[%_\\]/g, "\\$&")}%`));
   if (q.massSource) where.push(eq(components.massSource, q.massSource));
   if (q.grip) where.push(eq(components.grip, q.grip));
-  const column = q.sort.endsWith("massKg") ? components.massKg : components.name;
-  const order = q.sort.startsWith("-") ? desc(column) : asc(column);
-  const [{ total }] = await db.select({ total: count() }).from(components).where(and(...where));
-  const items = await db.select().from(components).where(and(...where)).orderBy(order, asc(components.id)).limit(q.limit).offset(q.cursor);
-  return page(items, q.cursor, q.limit, Number(total));
+  const [rows, [{ total }]] = await Promise.all([
+    db
+      .select({ ...getTableColumns(components), ...keysetColumns(keyset) })
+      .from(components)
+      .where(and(...where, afterCursor(keyset, q.cursor)))
+      .orderBy(...orderOf(keyset))
+      .limit(q.limit + 1),
+    db.select({ total: count() }).from(components).where(and(...where)),
+  ]);
+  return keysetPage(rows, keyset, q.limit, Number(total));
 }
 
 export async function getComponent(actor: Actor | null, componentId: string) {

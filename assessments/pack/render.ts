@@ -5,10 +5,11 @@
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { and, asc, eq, inArray, isNotNull } from "drizzle-orm";
-import type { Db } from "@/db/client";
+import type { Queryable } from "@/db/client";
 import { assessments, briefingAttendees, briefings, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
 import { config } from "@/lib/config";
 import { woffToTtf } from "@/lib/woff";
+import { isUuid } from "@/lib/ids";
 import { contentSchema } from "../method-statement/content";
 import type { TaskScore } from "../method-statement/score-task";
 import { buildPack } from "./document";
@@ -27,13 +28,12 @@ export function packFonts(): Promise<PackFonts> {
 
 export const verifyUrl = () => `${config().NEXTAUTH_URL.replace(/\/$/, "")}/verify`;
 
-type Tx = Db | Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /**
  * The pack PDF of a revision; signed when the organisation's key is given (fetch it before any
  * transaction: PGlite serves one connection, so a query outside an open transaction would wait on it).
  */
-export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8Array; passphrase: string }): Promise<Uint8Array> {
+export async function renderPack(tx: Queryable, revisionId: string, key?: { p12: Uint8Array; passphrase: string }): Promise<Uint8Array> {
   const [row] = await tx
     .select({ revision: revisions, assessment: assessments, job: jobs, organisation: organisations })
     .from(revisions)
@@ -43,7 +43,10 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
     .where(eq(revisions.id, revisionId));
   const { revision, assessment, job, organisation } = row;
   const nameOf = async (id: string | null) => (id ? ((await tx.select({ name: users.name }).from(users).where(eq(users.id, id)))[0]?.name ?? null) : null);
-  const register = await tx.select({ id: components.id, name: components.name }).from(components).where(eq(components.organisationId, organisation.id));
+  // The names of the components the tasks use (the rest of the register is not in the pack).
+  const content = contentSchema.parse(revision.content);
+  const componentIds = [...new Set(content.tasks.map((t) => t.componentId).filter(isUuid))];
+  const register = componentIds.length ? await tx.select({ id: components.id, name: components.name }).from(components).where(and(eq(components.organisationId, organisation.id), inArray(components.id, componentIds))) : [];
   const signed = await tx.select().from(signatures).where(eq(signatures.revisionId, revisionId)).orderBy(asc(signatures.signedAt));
   const held = await tx.select().from(briefings).where(and(eq(briefings.revisionId, revisionId), isNotNull(briefings.completedAt))).orderBy(asc(briefings.startedAt));
   const attendees = held.length ? await tx.select().from(briefingAttendees).where(inArray(briefingAttendees.briefingId, held.map((b) => b.id))).orderBy(asc(briefingAttendees.signedAt)) : [];
@@ -63,7 +66,7 @@ export async function renderPack(tx: Tx, revisionId: string, key?: { p12: Uint8A
         reviewDate: revision.reviewDate,
         contentHash: revision.contentHash ?? "",
       },
-      content: contentSchema.parse(revision.content),
+      content,
       scores: (revision.results ?? []) as TaskScore[],
       componentNames: Object.fromEntries(register.map((c) => [c.id, c.name])),
       signatures: signed.map((s) => ({ name: s.signerName, role: s.signerRole, signedAt: s.signedAt, png: s.image })),

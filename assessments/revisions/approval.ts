@@ -7,7 +7,7 @@
 import { createHash } from "node:crypto";
 import { and, asc, desc, eq, ne } from "drizzle-orm";
 import { z } from "zod";
-import { getDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import { assessments, auditEvents, issuedPacks, organisations, revisions, signatures, storedFiles, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
@@ -26,7 +26,6 @@ import { isAssignedToJob } from "../briefing/assignment";
 
 const appUrl = () => config().NEXTAUTH_URL.replace(/\/$/, "");
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
-type Tx = Parameters<Parameters<Awaited<ReturnType<typeof getDb>>["transaction"]>[0]>[0];
 
 export async function storePack(tx: Tx, organisationId: string, revisionId: string, pdf: Uint8Array, kind: "draft" | "approved") {
   const file = await putFile(tx, organisationId, pdf, "application/pdf");
@@ -215,9 +214,11 @@ export async function startNewRevision(actor: Actor | null, revisionId: string):
   return db.transaction(async (tx) => {
     const siblings = await tx.select().from(revisions).where(eq(revisions.assessmentId, revision.assessmentId)).orderBy(desc(revisions.number));
     if (siblings.some((s) => s.status === "draft" || s.status === "submitted")) throw new AppError("conflict", "This assessment already has a revision in progress.");
+    // The new draft becomes the assessment's latest; the unique index allows one at a time.
+    await tx.update(revisions).set({ isLatest: false }).where(and(eq(revisions.assessmentId, revision.assessmentId), eq(revisions.isLatest, true)));
     const [created] = await tx
       .insert(revisions)
-      .values({ organisationId: actor.organisationId, assessmentId: revision.assessmentId, number: siblings[0].number + 1, content: revision.content, results: revision.results, worstBand: revision.worstBand, authorId: actor.id })
+      .values({ organisationId: actor.organisationId, assessmentId: revision.assessmentId, number: siblings[0].number + 1, isLatest: true, content: revision.content, results: revision.results, worstBand: revision.worstBand, authorId: actor.id })
       .returning({ id: revisions.id });
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.started", entityType: "revision", entityId: created.id, contentHash: contentHash(revision.content), details: { from: revision.id } });
     return { revisionId: created.id };

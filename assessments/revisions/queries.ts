@@ -38,3 +38,14 @@ export async function countRevisionsByStatus(actor: Actor | null) {
     .groupBy(revisions.status);
   return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<(typeof rows)[number]["status"], number>>;
 }
+
+/** How many revisions wait for this approver's countersignature (overview). */
+export async function countAwaitingReview(actor: Actor | null): Promise<number> {
+  authorize(actor, "reviews:read");
+  const db = await getDb();
+  const [{ n }] = await db
+    .select({ n: count() })
+    .from(revisions)
+    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)));
+  return Number(n);
+}

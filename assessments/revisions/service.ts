@@ -4,13 +4,14 @@
  * the organisation first; another organisation's record is "not found".
  */
 import { createHash } from "node:crypto";
-import { and, asc, desc, eq, ilike, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, ilike, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, components, jobs, revisions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
-import { page, pageQuerySchema } from "@/lib/pagination";
+import { afterCursor, keysetPage, orderOf, pageQuerySchema, keysetColumns, type Keyset } from "@/lib/pagination";
+import { isUuid } from "@/lib/ids";
 import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
@@ -21,13 +22,27 @@ export function contentHash(content: unknown): string {
   return createHash("sha256").update(JSON.stringify(content)).digest("hex");
 }
 
-async function register(organisationId: string): Promise<RegisterEntry[]> {
+const registerColumns = { id: components.id, name: components.name, massKg: components.massKg, grip: components.grip, massSource: components.massSource };
+
+/**
+ * The register entries a content's tasks name: scoring needs those and no others, so a register of
+ * fifty thousand components costs a draft nothing.
+ */
+export async function registerFor(organisationId: string, content: Pick<Content, "tasks">): Promise<RegisterEntry[]> {
+  const ids = [...new Set(content.tasks.map((t) => t.componentId).filter(isUuid))];
+  if (ids.length === 0) return [];
+  const db = await getDb();
+  return db.select(registerColumns).from(components).where(and(eq(components.organisationId, organisationId), inArray(components.id, ids)));
+}
+
+/** Register entries by name (any case), for a template's components. */
+async function registerNamed(organisationId: string, names: string[]): Promise<RegisterEntry[]> {
+  if (names.length === 0) return [];
   const db = await getDb();
   return db
-    .select({ id: components.id, name: components.name, massKg: components.massKg, grip: components.grip, massSource: components.massSource })
+    .select(registerColumns)
     .from(components)
-    .where(eq(components.organisationId, organisationId))
-    .orderBy(asc(components.name));
+    .where(and(eq(components.organisationId, organisationId), inArray(sql`lower(${components.name})`, names.map((n) => n.toLowerCase()))));
 }
 
 export const assessmentListQuerySchema = pageQuerySchema.extend({
@@ -41,18 +56,24 @@ export const assessmentListQuerySchema = pageQuerySchema.extend({
   sort: z.enum(["updatedAt", "-updatedAt", "title", "-title"]).default("-updatedAt"),
 });
 
-/** The latest revision of each assessment, filtered, sorted and paged. */
+/** The list's orders; each walks an index (db/schema.ts) from the cursor on. */
+const ASSESSMENT_ORDERS = {
+  updatedAt: { column: revisions.updatedAt, id: revisions.id, type: "timestamptz" },
+  title: { column: assessments.title, id: assessments.id, type: "text" },
+} as const;
+
+function assessmentKeyset(sort: z.infer<typeof assessmentListQuerySchema>["sort"]): Keyset {
+  const descending = sort.startsWith("-");
+  return { name: sort, descending, ...ASSESSMENT_ORDERS[descending ? (sort.slice(1) as "updatedAt" | "title") : (sort as "updatedAt" | "title")] };
+}
+
+/** The latest revision of each assessment, filtered, sorted and paged by keyset; the total counted in SQL. */
 export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "assessments:read");
   const q = parseOrThrow(assessmentListQuerySchema, query, "Invalid query");
+  const keyset = assessmentKeyset(q.sort);
   const db = await getDb();
-  const latest = db
-    .select({ assessmentId: revisions.assessmentId, number: sql<number>`max(${revisions.number})`.as("latest_number") })
-    .from(revisions)
-    .where(eq(revisions.organisationId, actor.organisationId))
-    .groupBy(revisions.assessmentId)
-    .as("latest");
-  const where: SQL[] = [eq(assessments.organisationId, actor.organisationId)];
+  const where: SQL[] = [eq(revisions.organisationId, actor.organisationId), eq(revisions.isLatest, true)];
   if (q.q) where.push(ilike(assessments.title, `%${q.q.replace(/[%_\\]/g, "\\$&")}%`));
   if (q.status) where.push(eq(revisions.status, q.status));
   if (q.jobId) where.push(eq(assessments.jobId, q.jobId));
@@ -62,8 +83,8 @@ export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
     const limit = new Date(Date.now() + Number(q.reviewDue) * 86_400_000).toISOString().slice(0, 10);
     where.push(eq(revisions.status, "approved"), lte(revisions.reviewDate, limit));
   }
-  const column = q.sort.endsWith("title") ? assessments.title : revisions.updatedAt;
-  const base = () =>
+  const after = afterCursor(keyset, q.cursor);
+  const [rows, [{ total }]] = await Promise.all([
     db
       .select({
         assessmentId: assessments.id,
@@ -78,19 +99,22 @@ export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
         updatedAt: revisions.updatedAt,
         authorId: revisions.authorId,
         authorName: users.name,
+        ...keysetColumns(keyset),
       })
-      .from(assessments)
+      .from(revisions)
+      .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
       .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-      .innerJoin(latest, eq(latest.assessmentId, assessments.id))
-      .innerJoin(revisions, and(eq(revisions.assessmentId, assessments.id), eq(revisions.number, latest.number)))
       .leftJoin(users, eq(users.id, revisions.authorId))
-      .where(and(...where));
-  const total = (await base()).length;
-  const items = await base()
-    .orderBy(q.sort.startsWith("-") ? desc(column) : asc(column), asc(assessments.id))
-    .limit(q.limit)
-    .offset(q.cursor);
-  return page(items, q.cursor, q.limit, total);
+      .where(and(...where, after))
+      .orderBy(...orderOf(keyset))
+      .limit(q.limit + 1),
+    db
+      .select({ total: count() })
+      .from(revisions)
+      .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+      .where(and(...where)),
+  ]);
+  return keysetPage(rows, keyset, q.limit, Number(total));
 }
 
 /** Every assessment's latest revision (first page of 100), newest first. */
@@ -109,27 +133,30 @@ export async function createAssessment(actor: Actor | null, input: unknown): Pro
   if (data.templateId) {
     const template = findTemplate(data.templateId);
     if (!template) throw new AppError("validation", "Some fields need attention", [{ path: "templateId", message: "Unknown template" }]);
-    const entries = await register(actor.organisationId);
-    content = template.build((name) => entries.find((e) => e.name === name)?.id ?? null);
+    // The template names its components; build once to learn which, then with their ids.
+    const named: string[] = [];
+    template.build((name) => (named.push(name), null));
+    const entries = await registerNamed(actor.organisationId, named);
+    content = template.build((name) => entries.find((e) => e.name.toLowerCase() === name.toLowerCase())?.id ?? null);
   }
   content.emergency.nearestHospital ||= job.nearestHospital ?? "";
   content.emergency.arrangements ||= job.emergencyArrangements ?? "";
   content.lineside.accessPoint ||= job.accessPoint ?? "";
   // A job on the railway starts as near the line: saying it is not is a choice, never a default.
   if (job.lineReference?.trim() && !data.templateId) content.lineside.nearLine = "near";
-  const review = reviewContent(content, await register(actor.organisationId));
+  const review = reviewContent(content, await registerFor(actor.organisationId, content));
   return db.transaction(async (tx) => {
     const [assessment] = await tx.insert(assessments).values({ organisationId: actor.organisationId, jobId: job.id, title: data.title, createdBy: actor.id }).returning();
     const [revision] = await tx
       .insert(revisions)
-      .values({ organisationId: actor.organisationId, assessmentId: assessment.id, number: 1, content, authorId: actor.id, results: review.scores, worstBand: review.worstBand })
+      .values({ organisationId: actor.organisationId, assessmentId: assessment.id, number: 1, isLatest: true, content, authorId: actor.id, results: review.scores, worstBand: review.worstBand })
       .returning();
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "assessment.created", entityType: "revision", entityId: revision.id, contentHash: contentHash(content), details: { templateId: data.templateId ?? null } });
     return { assessmentId: assessment.id, revisionId: revision.id };
   });
 }
 
-/** A revision with its assessment, job and the organisation's load register; no permission check (callers check). */
+/** A revision with its assessment, job and the register entries its tasks name; no permission check (callers check). */
 export async function loadRevision(organisationId: string, revisionId: string) {
   if (!z.uuid().safeParse(revisionId).success) throw AppError.notFound("Revision");
   const db = await getDb();
@@ -141,7 +168,7 @@ export async function loadRevision(organisationId: string, revisionId: string) {
     .where(eq(revisions.id, revisionId));
   if (!row || row.revision.organisationId !== organisationId) throw AppError.notFound("Revision");
   const content = contentSchema.parse(row.revision.content);
-  return { ...row, content, register: await register(organisationId) };
+  return { ...row, content, register: await registerFor(organisationId, content) };
 }
 
 export async function getRevision(actor: Actor | null, revisionId: string) {
@@ -156,7 +183,7 @@ export async function saveRevision(actor: Actor | null, revisionId: string, inpu
   const current = await getRevision(actor, revisionId);
   const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
   if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
-  const review = reviewContent(data.content, current.register);
+  const review = reviewContent(data.content, await registerFor(actor.organisationId, data.content));
   const db = await getDb();
   const [saved] = await db
     .update(revisions)

@@ -4,7 +4,7 @@
  * token dies with its session.
  */
 import { and, eq, gt } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Queryable } from "@/db/client";
 import { userSessions } from "@/db/schema";
 
 export const SESSION_MAX_AGE_S = 12 * 60 * 60;
@@ -29,6 +29,6 @@ export async function closeSession(sessionId: string | undefined): Promise<void>
 }
 
 /** Every session of a user, on every device. */
-export async function closeAllSessions(userId: string, tx?: Pick<Awaited<ReturnType<typeof getDb>>, "delete">): Promise<void> {
+export async function closeAllSessions(userId: string, tx?: Queryable): Promise<void> {
   await (tx ?? (await getDb())).delete(userSessions).where(eq(userSessions.userId, userId));
 }

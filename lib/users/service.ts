@@ -5,7 +5,7 @@
  */
 import { createHash, randomBytes } from "node:crypto";
 import { and, asc, eq, gt, isNull } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import { invites, users, type Role } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { setPasswordSchema } from "@/lib/auth/schemas";
@@ -50,7 +50,6 @@ async function organisationUser(actor: Actor, userId: string) {
   return user;
 }
 
-type Tx = Parameters<Parameters<Awaited<ReturnType<typeof getDb>>["transaction"]>[0]>[0];
 
 /** Records a new invitation link for the user inside the caller's transaction; returns the token to e-mail. */
 async function recordInvite(tx: Tx, actor: Actor, user: { id: string; email: string; role: Role }): Promise<string> {

@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type Locator, type Page } from "@playwright/test";
 import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import { INBOX_URL } from "../../playwright.config";
 
@@ -31,3 +31,10 @@ export async function waitForMail(to: string, timeoutMs = 15_000): Promise<Inbox
 
 /** The wizard's step navigation. */
 export const steps = (page: Page) => page.getByRole("navigation", { name: "Steps" });
+
+/** Chooses a task's component by searching the load register, as an adviser does. */
+export async function chooseComponent(task: Locator, label: string) {
+  await task.getByLabel("Component").fill(label.split(" — ")[0]);
+  await task.getByRole("button", { name: label, exact: true }).click();
+  await expect(task.getByTestId("chosen-component")).toContainText(label);
+}

@@ -36,7 +36,9 @@ beforeAll(async () => {
   const jobs = await (await import("@/assessments/jobs/queries")).listJobs(adviser);
   const created = await createAssessment(adviser, { jobId: jobs[0].id, title: "Edge cases in every channel" });
   revisionId = created.revisionId;
-  const { content, register, revision } = await getRevision(adviser, revisionId);
+  const { content, revision } = await getRevision(adviser, revisionId);
+  const { listComponentsPage } = await import("@/assessments/load-register/service");
+  const register = (await listComponentsPage(adviser, { limit: 100 })).items;
   const id = (name: string) => register.find((c) => c.name.startsWith(name))!.id;
   tasks = [
     {

@@ -1,14 +1,18 @@
 "use client";
 
 import { useState } from "react";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 export function EmailSheetButton({ revisionId }: { revisionId: string }) {
   const [state, setState] = useState<string | null>(null);
   const send = async () => {
     setState("Sending…");
-    const res = await fetch(`/api/v1/revisions/${revisionId}/briefing-sheet/email`, { method: "POST" });
-    const body = await res.json().catch(() => ({}));
-    setState(res.ok && body.mail?.status === "sent" ? "Sent to your e-mail." : (body.error?.message ?? "Could not send: try again when the signal is better."));
+    try {
+      const body = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/briefing-sheet/email`, { method: "POST" });
+      setState(body.mail?.status === "sent" ? "Sent to your e-mail." : "Could not send: try again when the signal is better.");
+    } catch (err) {
+      setState(messageOf(err));
+    }
   };
   return (
     <span className="flex items-center gap-2">

@@ -7,6 +7,7 @@ import { SignatureField, type SignatureFieldHandle } from "@/app/_components/sig
 import type { BriefingScript } from "@/assessments/briefing/instructions";
 import { LINE_CAUTION } from "@/assessments/method-statement/lineside";
 import { flush, loadQueue, newKey, saveQueue, type PendingSignOn } from "./sign-on-queue";
+import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
 
 interface Props {
   revisionId: string;
@@ -70,10 +71,11 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
 
   const start = async () => {
     setProblem(null);
-    const res = await fetch("/api/v1/briefings", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ revisionId, place }) }).catch(() => null);
-    const body = await res?.json().catch(() => ({}));
-    if (!res || !res.ok) {
-      setProblem(res ? (body.error?.issues?.[0]?.message ?? body.error?.message ?? "Could not start") : "No connection: the briefing needs signal to start. Sign-ons later can wait for signal.");
+    let body: { briefingId: string };
+    try {
+      body = await apiRequest("/api/v1/briefings", { json: { revisionId, place } });
+    } catch (err) {
+      setProblem(err instanceof ApiError && err.offline ? "No connection: the briefing needs signal to start. Sign-ons later can wait for signal." : problemOf(err));
       return;
     }
     setBriefingId(body.briefingId);
@@ -382,10 +384,12 @@ function SignOff({ briefingId, foremanName, waiting, sent, onDone }: { briefingI
   const finish = async () => {
     const image = signature.current?.toDataUrl();
     if (!image) return setProblem("Sign in the box");
-    const res = await fetch(`/api/v1/briefings/${briefingId}/complete`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ signature: image }) }).catch(() => null);
-    const body = await res?.json().catch(() => ({}));
-    if (res?.ok) onDone();
-    else setProblem(res ? (body.error?.message ?? "Could not sign off") : "No signal: try again when you have signal.");
+    try {
+      await apiRequest(`/api/v1/briefings/${briefingId}/complete`, { json: { signature: image } });
+      onDone();
+    } catch (err) {
+      setProblem(err instanceof ApiError && err.offline ? "No signal: try again when you have signal." : problemOf(err));
+    }
   };
   return (
     <div className="space-y-4">

@@ -2,6 +2,8 @@
  * Sign-ons wait on the device until the server has them. Each has a key made on the device, so
  * sending it again after a lost connection cannot record it twice.
  */
+import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
+
 export interface PendingSignOn {
   key: string;
   name: string;
@@ -39,21 +41,16 @@ export async function flush(briefingId: string, queue: PendingSignOn[]): Promise
   for (let i = 0; i < next.length; i++) {
     const item = next[i];
     if (item.state !== "waiting") continue;
-    let res: Response;
     try {
-      res = await fetch(`/api/v1/briefings/${briefingId}/attendees`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ key: item.key, name: item.name, employer: item.employer, cardNumber: item.cardNumber, signature: item.signature, signedAt: item.signedAt }),
+      await apiRequest(`/api/v1/briefings/${briefingId}/attendees`, {
+        json: { key: item.key, name: item.name, employer: item.employer, cardNumber: item.cardNumber, signature: item.signature, signedAt: item.signedAt },
       });
-    } catch {
-      break;
+      next[i] = { ...item, state: "sent" };
+    } catch (err) {
+      // Still offline, or the server could not take it now: keep it waiting, in order.
+      if (!(err instanceof ApiError) || err.retryable) break;
+      next[i] = { ...item, state: "refused", problem: problemOf(err) };
     }
-    if (res.ok) next[i] = { ...item, state: "sent" };
-    else if (res.status >= 400 && res.status < 500 && res.status !== 408 && res.status !== 429) {
-      const body = await res.json().catch(() => ({}));
-      next[i] = { ...item, state: "refused", problem: body.error?.issues?.[0]?.message ?? body.error?.message ?? "Refused" };
-    } else break;
     saveQueue(briefingId, next);
   }
   return next;

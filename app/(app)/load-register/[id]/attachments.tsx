@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 interface Attachment {
   id: string;
@@ -30,20 +31,25 @@ export function Attachments({ componentId, attachments, editable }: { componentI
     setOutcome(null);
     const form = new FormData();
     form.set("file", file);
-    const res = await fetch(`/api/v1/components/${componentId}/attachments`, { method: "POST", body: form });
-    const body = await res.json().catch(() => ({}));
-    setBusy(false);
-    if (res.ok) {
+    try {
+      await apiRequest(`/api/v1/components/${componentId}/attachments`, { body: form });
       setOutcome({ tone: "success", text: `${file.name} attached.` });
       if (input.current) input.current.value = "";
       router.refresh();
-    } else setOutcome({ tone: "error", text: body.error?.message ?? "The file could not be attached." });
+    } catch (err) {
+      setOutcome({ tone: "error", text: messageOf(err) });
+    } finally {
+      setBusy(false);
+    }
   };
 
   const remove = async (id: string) => {
-    const res = await fetch(`/api/v1/attachments/${id}`, { method: "DELETE" });
-    if (res.ok) router.refresh();
-    else setOutcome({ tone: "error", text: "The attachment could not be removed." });
+    try {
+      await apiRequest(`/api/v1/attachments/${id}`, { method: "DELETE" });
+      router.refresh();
+    } catch (err) {
+      setOutcome({ tone: "error", text: `The attachment could not be removed: ${messageOf(err)}` });
+    }
   };
 
   return (

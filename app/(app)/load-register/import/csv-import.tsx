@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import { FormMessage, PrimaryButton } from "@/app/_components/form";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 interface Row {
   line: number;
@@ -11,10 +12,15 @@ interface Row {
   notes: { path: string; message: string }[];
 }
 
+interface Preview {
+  rows: Row[];
+  problems: string[];
+}
+
 export function CsvImport() {
   const [csv, setCsv] = useState<string | null>(null);
   const [fileName, setFileName] = useState("");
-  const [preview, setPreview] = useState<{ rows: Row[]; problems: string[] } | null>(null);
+  const [preview, setPreview] = useState<Preview | null>(null);
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
 
@@ -26,11 +32,13 @@ export function CsvImport() {
     setCsv(text);
     setFileName(file.name);
     setBusy(true);
-    const res = await fetch("/api/v1/components/import?dryRun=1", { method: "POST", headers: { "content-type": "text/csv" }, body: text });
-    const body = await res.json();
-    setBusy(false);
-    if (res.ok) setPreview(body);
-    else setOutcome({ tone: "error", text: body.error?.message ?? "The file could not be read." });
+    try {
+      setPreview(await apiRequest<Preview>("/api/v1/components/import?dryRun=1", { body: text, contentType: "text/csv" }));
+    } catch (err) {
+      setOutcome({ tone: "error", text: messageOf(err) });
+    } finally {
+      setBusy(false);
+    }
   };
 
   const errorCount = preview ? preview.problems.length + preview.rows.filter((r) => r.errors.length).length : 0;
@@ -38,14 +46,16 @@ export function CsvImport() {
   const runImport = async () => {
     if (!csv) return;
     setBusy(true);
-    const res = await fetch("/api/v1/components/import", { method: "POST", headers: { "content-type": "text/csv" }, body: csv });
-    const body = await res.json();
-    setBusy(false);
-    if (res.ok) {
+    try {
+      const body = await apiRequest<{ imported: number }>("/api/v1/components/import", { body: csv, contentType: "text/csv" });
       setOutcome({ tone: "success", text: `${body.imported} component${body.imported === 1 ? "" : "s"} imported.` });
       setPreview(null);
       setCsv(null);
-    } else setOutcome({ tone: "error", text: body.error?.message ?? "Nothing was imported." });
+    } catch (err) {
+      setOutcome({ tone: "error", text: `Nothing was imported: ${messageOf(err)}` });
+    } finally {
+      setBusy(false);
+    }
   };
 
   return (

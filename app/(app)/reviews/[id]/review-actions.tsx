@@ -6,6 +6,7 @@ import { useRef, useState } from "react";
 import { FormMessage, PrimaryButton, SecondaryButton, TextField } from "@/app/_components/form";
 import { SignatureField, type SignatureFieldHandle } from "@/app/_components/signature-field";
 import { STEP_KEYS } from "@/assessments/revisions/schemas";
+import { ApiError, apiRequest, messageOf } from "@/lib/api-client";
 
 const SECTION_LABELS: Record<(typeof STEP_KEYS)[number], string> = {
   scope: "Scope",
@@ -30,13 +31,20 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
 
-  const post = async (path: string, body: unknown) => {
+  /** The answer, or the refusal shown beside the form (with its field issues on their fields). */
+  const post = async (path: string, body: unknown): Promise<{ mail?: { status: string } } | null> => {
     setBusy(true);
     setOutcome(null);
-    const res = await fetch(`/api/v1/revisions/${revisionId}/${path}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    const json = await res.json().catch(() => ({}));
-    setBusy(false);
-    return { ok: res.ok, json };
+    try {
+      return await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/${path}`, { json: body });
+    } catch (err) {
+      const issues = err instanceof ApiError ? err.issues : [];
+      setIssues(Object.fromEntries(issues.map((i) => [i.path, i.message])));
+      setOutcome({ tone: "error", text: issues.find((i) => i.path.startsWith("comments"))?.message ?? messageOf(err) });
+      return null;
+    } finally {
+      setBusy(false);
+    }
   };
 
   const askToSign = () => {
@@ -53,22 +61,19 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
 
   const countersign = async () => {
     setConfirmOpen(false);
-    const { ok, json } = await post("approve", { version, name, role, signature: drawn });
-    if (ok) {
-      router.replace(`/reviews/${revisionId}?notice=${json.mail?.status === "failed" ? "mail-failed" : "approved"}`);
+    const answer = await post("approve", { version, name, role, signature: drawn });
+    if (answer) {
+      router.replace(`/reviews/${revisionId}?notice=${answer.mail?.status === "failed" ? "mail-failed" : "approved"}`);
       router.refresh();
-    } else {
-      setIssues(Object.fromEntries((json.error?.issues ?? []).map((i: { path: string; message: string }) => [i.path, i.message])));
-      setOutcome({ tone: "error", text: json.error?.message ?? "Could not approve." });
     }
   };
 
   const sendBack = async () => {
-    const { ok, json } = await post("return", { version, comments });
-    if (ok) {
-      router.replace(`/reviews/${revisionId}?notice=${json.mail?.status === "failed" ? "mail-failed" : "returned"}`);
+    const answer = await post("return", { version, comments });
+    if (answer) {
+      router.replace(`/reviews/${revisionId}?notice=${answer.mail?.status === "failed" ? "mail-failed" : "returned"}`);
       router.refresh();
-    } else setOutcome({ tone: "error", text: json.error?.issues?.[0]?.message ?? json.error?.message ?? "Could not return it." });
+    }
   };
 
   return (

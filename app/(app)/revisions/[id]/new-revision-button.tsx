@@ -2,15 +2,18 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 export function NewRevisionButton({ revisionId }: { revisionId: string }) {
   const router = useRouter();
   const [problem, setProblem] = useState<string | null>(null);
   const start = async () => {
-    const res = await fetch(`/api/v1/revisions/${revisionId}/new-revision`, { method: "POST" });
-    const body = await res.json();
-    if (res.ok) router.push(`/revisions/${body.revisionId}`);
-    else setProblem(body.error?.message ?? "Could not start a new revision.");
+    try {
+      const body = await apiRequest<{ revisionId: string }>(`/api/v1/revisions/${revisionId}/new-revision`, { method: "POST" });
+      router.push(`/revisions/${body.revisionId}`);
+    } catch (err) {
+      setProblem(messageOf(err));
+    }
   };
   return (
     <span>

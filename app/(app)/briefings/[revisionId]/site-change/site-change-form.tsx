@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { FormMessage } from "@/app/_components/form";
+import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
 
 export function SiteChangeForm({ revisionId }: { revisionId: string }) {
   const router = useRouter();
@@ -19,11 +20,14 @@ export function SiteChangeForm({ revisionId }: { revisionId: string }) {
     form.set("revisionId", revisionId);
     form.set("text", text);
     if (photo) form.set("photo", photo);
-    const res = await fetch("/api/v1/site-changes", { method: "POST", body: form }).catch(() => null);
-    const body = await res?.json().catch(() => ({}));
-    setBusy(false);
-    if (!res) return setOutcome({ tone: "error", text: "No signal: nothing was sent. Try again when you have signal." });
-    if (!res.ok) return setOutcome({ tone: "error", text: body.error?.issues?.[0]?.message ?? body.error?.message ?? "Could not send." });
+    let body: { mail?: { status: string } };
+    try {
+      body = await apiRequest("/api/v1/site-changes", { body: form });
+    } catch (err) {
+      return setOutcome({ tone: "error", text: err instanceof ApiError && err.offline ? "No signal: nothing was sent. Try again when you have signal." : problemOf(err) });
+    } finally {
+      setBusy(false);
+    }
     setOutcome({ tone: "success", text: body.mail?.status === "sent" ? "Recorded, and the safety adviser has been e-mailed." : "Recorded. The e-mail to the safety adviser failed: tell them by phone." });
     setText("");
     router.refresh();

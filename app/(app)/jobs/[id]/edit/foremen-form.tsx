@@ -2,14 +2,18 @@
 
 import { useState } from "react";
 import { FormMessage, PrimaryButton } from "@/app/_components/form";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 export function ForemenForm({ jobId, foremen }: { jobId: string; foremen: { id: string; name: string; assigned: boolean }[] }) {
   const [chosen, setChosen] = useState(new Set(foremen.filter((f) => f.assigned).map((f) => f.id)));
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const save = async () => {
-    const res = await fetch(`/api/v1/jobs/${jobId}/foremen`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ foremanIds: [...chosen] }) });
-    const body = await res.json().catch(() => ({}));
-    setOutcome(res.ok ? { tone: "success", text: "Foremen saved." } : { tone: "error", text: body.error?.message ?? "Could not save." });
+    try {
+      await apiRequest(`/api/v1/jobs/${jobId}/foremen`, { method: "PUT", json: { foremanIds: [...chosen] } });
+      setOutcome({ tone: "success", text: "Foremen saved." });
+    } catch (err) {
+      setOutcome({ tone: "error", text: messageOf(err) });
+    }
   };
   return (
     <section aria-labelledby="foremen-heading" className="space-y-3 rounded-lg border border-rule bg-white p-4">

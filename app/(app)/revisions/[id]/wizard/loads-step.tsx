@@ -11,6 +11,7 @@ import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/sc
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
 import { SURFACES } from "@/assessments/rules/push";
 import { CONDITION_TEXT, CONDITIONS } from "@/assessments/rules/conditions";
+import { ComponentPicker } from "./component-picker";
 import { Check, Choice, GradientField, Num, Text } from "./fields";
 import { WhatIfChart } from "./what-if-chart";
 
@@ -59,7 +60,13 @@ function ConditionsField({ name }: { name: `tasks.${number}.conditions` }) {
   );
 }
 
-function TaskEditor({ index, register, revisionId, onRemove }: { index: number; register: RegisterEntry[]; revisionId: string; onRemove: () => void }) {
+interface RegisterProps {
+  /** The register entries known on this page: those the tasks use, and any chosen since. */
+  register: RegisterEntry[];
+  onChosen: (entry: RegisterEntry) => void;
+}
+
+function TaskEditor({ index, register, onChosen, revisionId, onRemove }: RegisterProps & { index: number; revisionId: string; onRemove: () => void }) {
   const { setValue, getValues, register: reg } = useFormContext<Content>();
   const task = useWatch<Content, `tasks.${number}`>({ name: `tasks.${index}` }) as Task;
   const component = register.find((c) => c.id === task.componentId);
@@ -97,23 +104,15 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
         <div className="space-y-3">
           <Text name={`${p}.description`} label="What is done" />
           <div className="grid gap-3 sm:grid-cols-[1fr_6rem]">
-            <div>
-              <label htmlFor={`f-${p}.componentId`} className="block text-sm font-bold">
-                Component
-              </label>
-              <select
-                id={`f-${p}.componentId`}
-                className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
-                {...reg(`${p}.componentId`, { setValueAs: (v: string) => (v === "" ? null : v) })}
-              >
-                <option value="">Choose from the load register…</option>
-                {register.map((c) => (
-                  <option key={c.id} value={c.id}>
-                    {c.name} — {c.massKg} kg{c.massSource === "estimated" ? " (estimated)" : ""}
-                  </option>
-                ))}
-              </select>
-            </div>
+            <ComponentPicker
+              id={`f-${p}.componentId`}
+              chosen={component}
+              missing={!!task.componentId && !component}
+              onChoose={(entry) => {
+                if (entry) onChosen(entry);
+                setValue(`${p}.componentId`, entry?.id ?? null, { shouldValidate: true, shouldDirty: true });
+              }}
+            />
             <Num name={`${p}.quantity`} label="How many" step="1" />
           </div>
           <div>
@@ -216,14 +215,14 @@ function TaskEditor({ index, register, revisionId, onRemove }: { index: number; 
   );
 }
 
-export function LoadsStep({ register, revisionId }: { register: RegisterEntry[]; revisionId: string }) {
+export function LoadsStep({ register, onChosen, revisionId }: RegisterProps & { revisionId: string }) {
   const { control } = useFormContext<Content>();
   const { fields, append, remove } = useFieldArray({ control, name: "tasks" });
   return (
     <div className="space-y-4">
       <p className="text-sm text-muted">Each handling task is scored as you type, by the same rules that score it when the draft is saved.</p>
       {fields.map((field, i) => (
-        <TaskEditor key={field.id} index={i} register={register} revisionId={revisionId} onRemove={() => remove(i)} />
+        <TaskEditor key={field.id} index={i} register={register} onChosen={onChosen} revisionId={revisionId} onRemove={() => remove(i)} />
       ))}
       <SecondaryButton
         type="button"

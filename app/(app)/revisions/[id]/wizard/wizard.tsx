@@ -15,6 +15,7 @@ import { LoadsStep } from "./loads-step";
 import { GroundStep, LineStep } from "./lineside-steps";
 import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
 import { STEPS, type StepKey } from "./steps-list";
+import { ApiError, apiRequest, applyFieldIssues, messageOf } from "@/lib/api-client";
 
 
 type SaveState = { kind: "saved"; at: Date | null } | { kind: "dirty" } | { kind: "saving" } | { kind: "invalid" } | { kind: "conflict"; message: string } | { kind: "error"; message: string };
@@ -41,6 +42,9 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
   const [step, setStep] = useState<StepKey>(initialStep);
   const [save, setSave] = useState<SaveState>({ kind: "saved", at: null });
   const version = useRef(initialVersion);
+  // The register entries known here grow as components are chosen: scoring on screen needs them.
+  const [known, setKnown] = useState(register);
+  const remember = useCallback((entry: RegisterEntry) => setKnown((list) => (list.some((e) => e.id === entry.id) ? list : [...list, entry])), []);
   const values = useWatch({ control });
 
   const saveNow = useCallback(async (): Promise<boolean> => {
@@ -52,25 +56,14 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
     }
     setSave({ kind: "saving" });
     try {
-      const res = await fetch(`/api/v1/revisions/${revisionId}`, {
-        method: "PUT",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ version: version.current, content: parsed.data }),
-      });
-      const body = await res.json();
-      if (res.status === 409) {
-        setSave({ kind: "conflict", message: body.error?.message ?? "This draft was changed elsewhere." });
-        return false;
-      }
-      if (!res.ok) {
-        setSave({ kind: "error", message: body.error?.message ?? "The draft could not be saved." });
-        return false;
-      }
+      const body = await apiRequest<{ version: number }>(`/api/v1/revisions/${revisionId}`, { method: "PUT", json: { version: version.current, content: parsed.data } });
       version.current = body.version;
       setSave({ kind: "saved", at: new Date() });
       return true;
-    } catch {
-      setSave({ kind: "error", message: "No connection: your changes are kept here and saved when you continue." });
+    } catch (err) {
+      if (err instanceof ApiError && err.status === 409) setSave({ kind: "conflict", message: err.message });
+      else if (err instanceof ApiError && err.offline) setSave({ kind: "error", message: "No connection: your changes are kept here and saved when you continue." });
+      else setSave({ kind: "error", message: messageOf(err) });
       return false;
     }
   }, [getValues, revisionId, trigger]);
@@ -93,8 +86,8 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
 
   const review = useMemo(() => {
     const parsed = contentSchema.safeParse(values);
-    return reviewContent(parsed.success ? parsed.data : getValues(), register);
-  }, [values, register, getValues]);
+    return reviewContent(parsed.success ? parsed.data : getValues(), known);
+  }, [values, known, getValues]);
 
   const go = (key: StepKey) => {
     setStep(key);
@@ -128,7 +121,7 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
             {step === "line" && <LineStep />}
             {step === "ground" && <GroundStep />}
             {step === "sequence" && <SequenceStep />}
-            {step === "loads" && <LoadsStep register={register} revisionId={revisionId} />}
+            {step === "loads" && <LoadsStep register={known} onChosen={remember} revisionId={revisionId} />}
             {step === "hazards" && <HazardsStep library={library} />}
             {step === "people" && <PeopleStep />}
             {step === "emergency" && <EmergencyStep />}
@@ -206,24 +199,16 @@ function ReviewStep({
       setOutcome({ tone: "error", text: "Save the draft first: see the message above." });
       return;
     }
-    const res = await fetch(`/api/v1/revisions/${revisionId}/submit`, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ ...values, version: version.current }),
-    });
-    const body = await res.json();
-    if (res.ok) {
+    try {
+      const body = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/submit`, { json: { ...values, version: version.current } });
       // The page re-renders read-only; the notice says whether the approver was e-mailed.
       router.replace(`/revisions/${revisionId}?notice=${body.mail?.status === "failed" ? "mail-failed" : "submitted"}`);
       router.refresh();
-      return;
+    } catch (err) {
+      // Field problems go beside their field; anything else (what the draft still lacks) is listed.
+      const rest = applyFieldIssues(err, setError, ["approverId", "reviewDate"]).map((i) => i.message);
+      setOutcome({ tone: "error", text: messageOf(err), items: rest.length ? rest : undefined });
     }
-    // Field problems go beside their field; anything else (what the draft still lacks) is listed.
-    const issues: { path: string; message: string }[] = body.error?.issues ?? [];
-    const fieldIssues = issues.filter((i) => i.path === "approverId" || i.path === "reviewDate");
-    for (const issue of fieldIssues) setError(issue.path as keyof SubmitFormInput, { message: issue.message });
-    const rest = issues.filter((i) => !fieldIssues.includes(i)).map((i) => i.message);
-    setOutcome({ tone: "error", text: body.error?.message ?? "Could not submit.", items: rest.length ? rest : undefined });
   });
 
   return (

@@ -14,6 +14,7 @@ import { scoreTask } from "@/assessments/method-statement/score-task";
 import { ACCESSORY_KINDS, COMPLEX_FACTORS, type ComplexFactor } from "@/assessments/lift-plan/lift";
 import { GROUND_TYPE_KEYS, GROUND_TYPES } from "@/assessments/lift-plan/ground";
 import { HITCH_LABELS, HITCHES } from "@/assessments/lift-plan/sling";
+import { apiRequest, messageOf } from "@/lib/api-client";
 
 type Plan = z.infer<typeof liftPlanInputsSchema>;
 
@@ -82,13 +83,13 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
   const onSave = handleSubmit(async (values) => {
     setOutcome(null);
     const next: Content = { ...content, tasks: content.tasks.map((t) => (t.id === taskId ? { ...t, lift: values } : t)) };
-    const res = await fetch(`/api/v1/revisions/${revisionId}`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify({ version, content: next }) });
-    const body = await res.json();
-    if (res.ok) {
+    try {
+      await apiRequest(`/api/v1/revisions/${revisionId}`, { method: "PUT", json: { version, content: next } });
       setOutcome({ tone: "success", text: "Lift plan saved." });
       router.refresh();
-    } else if (res.status === 409) setOutcome({ tone: "error", text: `Not saved: ${body.error.message}` });
-    else setOutcome({ tone: "error", text: body.error?.message ?? "Could not save." });
+    } catch (err) {
+      setOutcome({ tone: "error", text: `Not saved: ${messageOf(err)}` });
+    }
   });
 
   return (
