@@ -107,8 +107,10 @@ async function open(): Promise<Handle> {
     // Both drivers expose the same query builder; the PGlite type stands for both.
     return { db: db as unknown as Db, close: () => pool.end() };
   }
-  const [{ PGlite }, { drizzle }, { migrate }] = await Promise.all([
+  const [{ PGlite }, { pg_trgm }, { drizzle }, { migrate }] = await Promise.all([
     import("@electric-sql/pglite"),
+    // Trigram indexes for searching titles and names (migration 0009).
+    import("@electric-sql/pglite/contrib/pg_trgm"),
     import("drizzle-orm/pglite"),
     import("drizzle-orm/pglite/migrator"),
   ]);
@@ -116,7 +118,10 @@ async function open(): Promise<Handle> {
   const release = inMemory ? () => {} : await acquireLock(path.resolve(pgliteDir));
   try {
     if (!inMemory) mkdirSync(path.resolve(pgliteDir), { recursive: true });
-    const client = inMemory ? new PGlite() : new PGlite(path.resolve(pgliteDir));
+    const extensions = { pg_trgm };
+    const client = inMemory ? new PGlite({ extensions }) : new PGlite(path.resolve(pgliteDir), { extensions });
+    countWrites(client);
+    writes.local = true;
     const db = drizzle(client, { schema });
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
     return {
@@ -132,6 +137,34 @@ async function open(): Promise<Handle> {
   }
 }
 
+const writes = ((globalThis as unknown as { __heftwiseWrites?: { version: number; local: boolean } }).__heftwiseWrites ??= { version: 0, local: false });
+
+/**
+ * The embedded database's data version: it moves on each time a write statement or a transaction
+ * completes (successfully or not). A result read while it stayed the same is still true; this
+ * process is the database's only user (the lock), so nothing else can change the data. See
+ * lib/read-cache.ts.
+ */
+export const dataVersion = () => writes.version;
+
+/** Whether every write passes through this process (the embedded database is open), so reads may be kept. */
+export const writesAreLocal = () => writes.local;
+
+function countWrites(client: { query: (...args: never[]) => Promise<unknown>; exec: (...args: never[]) => Promise<unknown>; transaction: (...args: never[]) => Promise<unknown> }) {
+  const wrap = <A extends never[], R>(method: (...args: A) => Promise<R>, isWrite: (...args: A) => boolean) =>
+    async (...args: A): Promise<R> => {
+      try {
+        return await method(...args);
+      } finally {
+        if (isWrite(...args)) writes.version++;
+      }
+    };
+  const reads = (sql: unknown) => typeof sql === "string" && /^\s*(select|show|explain)\b/i.test(sql);
+  client.query = wrap(client.query.bind(client), (sql) => !reads(sql));
+  client.exec = wrap(client.exec.bind(client), (sql) => !reads(sql));
+  client.transaction = wrap(client.transaction.bind(client), () => true);
+}
+
 /** The process's database, opened and migrated on first use. */
 export function getDb(): Promise<Db> {
   globalForDb.__heftwiseDb ??= open().catch((err) => {
@@ -145,5 +178,7 @@ export function getDb(): Promise<Db> {
 export async function closeDb(): Promise<void> {
   const handle = globalForDb.__heftwiseDb;
   globalForDb.__heftwiseDb = undefined;
+  writes.local = false;
+  writes.version++;
   if (handle) await (await handle).close();
 }

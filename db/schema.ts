@@ -117,7 +117,14 @@ export const components = pgTable(
     updatedAt: updatedAt(),
   },
   // One name per organisation, whatever the case: enforced here so that parallel creates cannot race.
-  (t) => [index("components_organisation_idx").on(t.organisationId), uniqueIndex("components_organisation_name_idx").on(t.organisationId, sql`lower(${t.name})`)],
+  (t) => [
+    index("components_organisation_idx").on(t.organisationId),
+    uniqueIndex("components_organisation_name_idx").on(t.organisationId, sql`lower(${t.name})`),
+    // The register's orders (keyset pagination) and its name search by trigrams.
+    index("components_organisation_sort_name_idx").on(t.organisationId, t.name, t.id),
+    index("components_organisation_mass_idx").on(t.organisationId, t.massKg, t.id),
+    index("components_name_trgm_idx").using("gin", t.name.op("gin_trgm_ops")),
+  ],
 );
 
 /**
@@ -218,7 +225,13 @@ export const assessments = pgTable(
     createdAt: createdAt(),
   },
   // The list sorted by title, page after page: a walk along this index (keyset pagination).
-  (t) => [index("assessments_organisation_idx").on(t.organisationId), index("assessments_organisation_title_idx").on(t.organisationId, t.title, t.id)],
+  (t) => [
+    index("assessments_organisation_idx").on(t.organisationId),
+    index("assessments_organisation_title_idx").on(t.organisationId, t.title, t.id),
+    index("assessments_job_idx").on(t.jobId),
+    // "Search titles" (ILIKE '%…%') by trigrams (the pg_trgm extension, migration 0009).
+    index("assessments_title_trgm_idx").using("gin", t.title.op("gin_trgm_ops")),
+  ],
 );
 
 export const revisions = pgTable(

@@ -6,6 +6,7 @@ import type { Role } from "@/db/schema";
 import { AppError } from "./errors";
 
 export const ACTIONS = [
+  "profile:read",
   "users:manage",
   "mail-log:read",
   "jobs:read",
@@ -27,6 +28,7 @@ export const ACTIONS = [
 export type Action = (typeof ACTIONS)[number];
 
 const ADVISER: readonly Action[] = [
+  "profile:read",
   "jobs:read",
   "jobs:write",
   "components:read",
@@ -41,8 +43,8 @@ const ADVISER: readonly Action[] = [
 export const PERMISSIONS: Record<Role, readonly Action[]> = {
   admin: ["users:manage", "mail-log:read", "hazard-library:manage", ...ADVISER],
   adviser: ADVISER,
-  approver: ["reviews:read", "reviews:decide", "score:use"],
-  foreman: ["briefings:run", "site-notes:create", "score:use"],
+  approver: ["profile:read", "reviews:read", "reviews:decide", "score:use"],
+  foreman: ["profile:read", "briefings:run", "site-notes:create", "score:use"],
 };
 
 export interface Actor {

@@ -57,7 +57,7 @@ const DAY = 86_400_000;
 async function main() {
   const { getDb, closeDb } = await import("@/db/client");
   const schema = await import("@/db/schema");
-  const { eq, count } = await import("drizzle-orm");
+  const { eq, count, sql } = await import("drizzle-orm");
   const { seedDemo } = await import("@/assessments/demo/seed");
   const { DEMO_PASSWORD } = await import("@/assessments/demo/scenario");
   const { TEMPLATES } = await import("@/assessments/method-statement/templates");
@@ -181,6 +181,8 @@ async function main() {
     process.stdout.write(`\r${written} of ${total} assessments`);
   }
   process.stdout.write("\n");
+  // Fresh statistics for the planner, as a database that grew over years would have.
+  await db.execute(sql`vacuum analyze`);
   console.log(`Scale dataset written in ${((Date.now() - started) / 1000).toFixed(0)} s. Sign in as any demo user (password ${DEMO_PASSWORD}).`);
   await closeDb();
 }

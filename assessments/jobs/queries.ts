@@ -4,11 +4,14 @@ import { jobs } from "@/db/schema";
 import { parseOrThrow } from "@/lib/errors";
 import { afterCursor, keysetColumns, keysetPage, orderOf, pageQuerySchema, type Keyset } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
+import { cachedRead, readKey } from "@/lib/read-cache";
 
 export async function listJobs(actor: Actor | null) {
   authorize(actor, "jobs:read");
-  const db = await getDb();
-  return db.select().from(jobs).where(eq(jobs.organisationId, actor.organisationId)).orderBy(asc(jobs.name));
+  return cachedRead(readKey("jobs", actor.organisationId), async () => {
+    const db = await getDb();
+    return db.select().from(jobs).where(eq(jobs.organisationId, actor.organisationId)).orderBy(asc(jobs.name));
+  });
 }
 
 const JOB_ORDER: Keyset = { name: "name", column: jobs.name, id: jobs.id, descending: false, type: "text" };
@@ -16,24 +19,28 @@ const JOB_ORDER: Keyset = { name: "name", column: jobs.name, id: jobs.id, descen
 export async function listJobsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "jobs:read");
   const q = parseOrThrow(pageQuerySchema, query, "Invalid query");
-  const db = await getDb();
-  const mine = eq(jobs.organisationId, actor.organisationId);
-  const [rows, [{ total }]] = await Promise.all([
-    db
-      .select({ ...getTableColumns(jobs), ...keysetColumns(JOB_ORDER) })
-      .from(jobs)
-      .where(and(mine, afterCursor(JOB_ORDER, q.cursor)))
-      .orderBy(...orderOf(JOB_ORDER))
-      .limit(q.limit + 1),
-    db.select({ total: count() }).from(jobs).where(mine),
-  ]);
-  return keysetPage(rows, JOB_ORDER, q.limit, Number(total));
+  return cachedRead(readKey("jobs-page", actor.organisationId, q), async () => {
+    const db = await getDb();
+    const mine = eq(jobs.organisationId, actor.organisationId);
+    const [rows, [{ total }]] = await Promise.all([
+      db
+        .select({ ...getTableColumns(jobs), ...keysetColumns(JOB_ORDER) })
+        .from(jobs)
+        .where(and(mine, afterCursor(JOB_ORDER, q.cursor)))
+        .orderBy(...orderOf(JOB_ORDER))
+        .limit(q.limit + 1),
+      db.select({ total: count() }).from(jobs).where(mine),
+    ]);
+    return keysetPage(rows, JOB_ORDER, q.limit, Number(total));
+  });
 }
 
 /** How many jobs the organisation has, for the overview. */
 export async function countJobs(actor: Actor | null): Promise<number> {
   authorize(actor, "jobs:read");
-  const db = await getDb();
-  const [{ total }] = await db.select({ total: count() }).from(jobs).where(eq(jobs.organisationId, actor.organisationId));
-  return Number(total);
+  return cachedRead(readKey("job-count", actor.organisationId), async () => {
+    const db = await getDb();
+    const [{ total }] = await db.select({ total: count() }).from(jobs).where(eq(jobs.organisationId, actor.organisationId));
+    return Number(total);
+  });
 }

@@ -9,6 +9,8 @@ import { getDb } from "@/db/client";
 import { componentAttachments, components } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, isUniqueViolation, parseOrThrow, type FieldIssue } from "@/lib/errors";
+import { escapeLike } from "@/lib/sql";
+import { cachedRead, readKey } from "@/lib/read-cache";
 import { formulaNote, parseCsvNumber } from "./csv-cells";
 import { afterCursor, keysetColumns, keysetPage, orderOf, pageQuerySchema, type Keyset } from "@/lib/pagination";
 import { authorize, type Actor } from "@/lib/permissions";
@@ -33,23 +35,25 @@ const COMPONENT_ORDERS = {
 export async function listComponentsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "components:read");
   const q = parseOrThrow(componentListQuerySchema, query, "Invalid query");
-  const descending = q.sort.startsWith("-");
-  const keyset: Keyset = { name: q.sort, descending, ...COMPONENT_ORDERS[q.sort.replace("-", "") as "name" | "massKg"] };
-  const db = await getDb();
-  const where: SQL[] = [eq(components.organisationId, actor.organisationId)];
-  if (q.q) where.push(ilike(components.name, `%${q.q.replace(/[%_\\]/g, "\\$&")}%`));
-  if (q.massSource) where.push(eq(components.massSource, q.massSource));
-  if (q.grip) where.push(eq(components.grip, q.grip));
-  const [rows, [{ total }]] = await Promise.all([
-    db
-      .select({ ...getTableColumns(components), ...keysetColumns(keyset) })
-      .from(components)
-      .where(and(...where, afterCursor(keyset, q.cursor)))
-      .orderBy(...orderOf(keyset))
-      .limit(q.limit + 1),
-    db.select({ total: count() }).from(components).where(and(...where)),
-  ]);
-  return keysetPage(rows, keyset, q.limit, Number(total));
+  return cachedRead(readKey("components", actor.organisationId, q), async () => {
+    const descending = q.sort.startsWith("-");
+    const keyset: Keyset = { name: q.sort, descending, ...COMPONENT_ORDERS[q.sort.replace("-", "") as "name" | "massKg"] };
+    const db = await getDb();
+    const where: SQL[] = [eq(components.organisationId, actor.organisationId)];
+    if (q.q) where.push(ilike(components.name, `%${escapeLike(q.q)}%`));
+    if (q.massSource) where.push(eq(components.massSource, q.massSource));
+    if (q.grip) where.push(eq(components.grip, q.grip));
+    const [rows, [{ total }]] = await Promise.all([
+      db
+        .select({ ...getTableColumns(components), ...keysetColumns(keyset) })
+        .from(components)
+        .where(and(...where, afterCursor(keyset, q.cursor)))
+        .orderBy(...orderOf(keyset))
+        .limit(q.limit + 1),
+      db.select({ total: count() }).from(components).where(and(...where)),
+    ]);
+    return keysetPage(rows, keyset, q.limit, Number(total));
+  });
 }
 
 export async function getComponent(actor: Actor | null, componentId: string) {
@@ -70,7 +74,7 @@ const nameTaken = () => new AppError("conflict", "A component with this name is 
 /** The register's unique index decides (parallel creates cannot both pass); this check only answers early. */
 async function assertNameFree(organisationId: string, name: string, exceptId?: string) {
   const db = await getDb();
-  const existing = await db.select({ id: components.id }).from(components).where(and(eq(components.organisationId, organisationId), ilike(components.name, name.replace(/[%_\\]/g, "\\$&"))));
+  const existing = await db.select({ id: components.id }).from(components).where(and(eq(components.organisationId, organisationId), ilike(components.name, escapeLike(name))));
   if (existing.some((e) => e.id !== exceptId)) throw nameTaken();
 }
 

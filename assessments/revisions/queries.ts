@@ -2,6 +2,7 @@ import { and, count, desc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { assessments, jobs, revisions } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/permissions";
+import { cachedRead, readKey } from "@/lib/read-cache";
 
 const summaryColumns = {
   revisionId: revisions.id,
@@ -30,22 +31,26 @@ export async function listAwaitingReview(actor: Actor | null) {
 /** Revision counts by status, for the overview. */
 export async function countRevisionsByStatus(actor: Actor | null) {
   authorize(actor, "assessments:read");
-  const db = await getDb();
-  const rows = await db
-    .select({ status: revisions.status, n: count() })
-    .from(revisions)
-    .where(eq(revisions.organisationId, actor.organisationId))
-    .groupBy(revisions.status);
-  return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<(typeof rows)[number]["status"], number>>;
+  return cachedRead(readKey("revision-status-counts", actor.organisationId), async () => {
+    const db = await getDb();
+    const rows = await db
+      .select({ status: revisions.status, n: count() })
+      .from(revisions)
+      .where(eq(revisions.organisationId, actor.organisationId))
+      .groupBy(revisions.status);
+    return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<(typeof rows)[number]["status"], number>>;
+  });
 }
 
 /** How many revisions wait for this approver's countersignature (overview). */
 export async function countAwaitingReview(actor: Actor | null): Promise<number> {
   authorize(actor, "reviews:read");
-  const db = await getDb();
-  const [{ n }] = await db
-    .select({ n: count() })
-    .from(revisions)
-    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)));
-  return Number(n);
+  return cachedRead(readKey("awaiting-review-count", actor.organisationId, actor.id), async () => {
+    const db = await getDb();
+    const [{ n }] = await db
+      .select({ n: count() })
+      .from(revisions)
+      .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)));
+    return Number(n);
+  });
 }

@@ -6,6 +6,7 @@
 import { and, eq, gt } from "drizzle-orm";
 import { getDb, type Queryable } from "@/db/client";
 import { userSessions } from "@/db/schema";
+import { forgetSessions } from "./session-cache";
 
 export const SESSION_MAX_AGE_S = 12 * 60 * 60;
 
@@ -26,9 +27,14 @@ export async function closeSession(sessionId: string | undefined): Promise<void>
   if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return;
   const db = await getDb();
   await db.delete(userSessions).where(eq(userSessions.id, sessionId));
+  forgetSessions();
 }
 
-/** Every session of a user, on every device. */
+/**
+ * Every session of a user, on every device. Inside a caller's transaction, the caller runs
+ * `forgetSessions()` once it commits (until then, another request could still read the old rows).
+ */
 export async function closeAllSessions(userId: string, tx?: Queryable): Promise<void> {
   await (tx ?? (await getDb())).delete(userSessions).where(eq(userSessions.userId, userId));
+  forgetSessions();
 }

@@ -17,6 +17,7 @@ import { sendMail, type SendOutcome } from "@/lib/mail/send";
 import { authorize, type Actor } from "@/lib/permissions";
 import { changeRoleSchema, inviteSchema, resendInviteSchema, ROLE_LABELS, setActiveSchema } from "./schemas";
 import { closeAllSessions } from "@/lib/auth/sessions";
+import { forgetSessions } from "@/lib/auth/session-cache";
 
 export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
@@ -144,6 +145,7 @@ export async function changeRole(actor: Actor | null, input: unknown): Promise<v
     await tx.update(users).set({ role, updatedAt: new Date() }).where(eq(users.id, user.id));
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.role-changed", entityType: "user", entityId: user.id, details: { from: user.role, to: role } });
   });
+  forgetSessions();
 }
 
 export async function setActive(actor: Actor | null, input: unknown): Promise<void> {
@@ -159,6 +161,7 @@ export async function setActive(actor: Actor | null, input: unknown): Promise<vo
     if (!active) await closeAllSessions(user.id, tx);
     await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: active ? "user.reactivated" : "user.deactivated", entityType: "user", entityId: user.id });
   });
+  forgetSessions();
 }
 
 export type InviteState =
@@ -185,7 +188,7 @@ export async function acceptInvite(token: string, input: unknown): Promise<{ ema
   if (state.state !== "valid") throw new AppError("conflict", inviteStateMessage(state.state));
   const passwordHash = await hashPassword(password);
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const accepted = await db.transaction(async (tx) => {
     // Claim the invite first: of two racing submissions only one updates a row.
     const [invite] = await tx
       .update(invites)
@@ -197,6 +200,8 @@ export async function acceptInvite(token: string, input: unknown): Promise<{ ema
     await recordAudit(tx, { organisationId: invite.organisationId, actorId: user.id, action: "user.password-set", entityType: "user", entityId: user.id });
     return { email: user.email };
   });
+  forgetSessions();
+  return accepted;
 }
 
 export function inviteStateMessage(state: "expired" | "used" | "unknown"): string {

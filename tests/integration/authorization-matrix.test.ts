@@ -23,6 +23,7 @@ const SELF_CHECKED: Record<string, string> = {
   "app/api/auth/[...nextauth]/route.ts": "next-auth's own sign-in, sign-out and CSRF endpoints",
   "app/api/verify/route.ts": "public: anyone holding a pack may check it; names only revisions Heftwise issued a pack of",
   "app/api/v1/openapi.json/route.ts": "public: the API's description",
+  "app/api/health/route.ts": "public: liveness only, reads nothing and names nothing",
   "app/api/v1/revisions/[id]/pack/route.ts": "signed-in callers; getPackFile applies the per-revision rule (author's organisation, named approver, assigned foreman)",
 };
 

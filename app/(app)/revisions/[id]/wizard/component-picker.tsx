@@ -68,7 +68,6 @@ export function ComponentPicker({ id, chosen, missing, onChoose }: { id: string;
         onFocus={() => setOpen(true)}
         onKeyDown={(e) => e.key === "Escape" && setOpen(false)}
         aria-controls={`${id}-results`}
-        aria-expanded={open}
         className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
       />
       {open && (

@@ -1,0 +1,54 @@
+/**
+ * Keeps the answers of list and count queries until the data changes. On the embedded database
+ * this process makes every write (db/client.ts counts them), so an answer read while the data
+ * version stayed the same is exactly what the database would answer again — and the database
+ * (single-threaded, in this process) is spared. Identical reads in flight at once share one query.
+ * With a PostgreSQL server other instances write too, and every read goes to the server.
+ *
+ * Callers key by organisation and by everything the answer depends on, and never change an answer
+ * they are given (it is shared). Kept on globalThis: Next.js may load this module once per route.
+ */
+import { dataVersion, writesAreLocal } from "@/db/client";
+
+const MAX_ENTRIES = 500;
+
+interface State {
+  version: number;
+  entries: Map<string, Promise<unknown>>;
+}
+
+const state = ((globalThis as unknown as { __heftwiseReadCache?: State }).__heftwiseReadCache ??= { version: -1, entries: new Map() });
+
+export async function cachedRead<T>(key: string, load: () => Promise<T>): Promise<T> {
+  if (!writesAreLocal()) return load();
+  const version = dataVersion();
+  if (state.version !== version) {
+    state.version = version;
+    state.entries.clear();
+  }
+  const kept = state.entries.get(key) as Promise<T> | undefined;
+  if (kept) {
+    // Most recently used last: the first entry is the one to drop when full.
+    state.entries.delete(key);
+    state.entries.set(key, kept);
+    return kept;
+  }
+  const pending = load();
+  state.entries.set(key, pending);
+  if (state.entries.size > MAX_ENTRIES) state.entries.delete(state.entries.keys().next().value!);
+  const drop = () => {
+    if (state.entries.get(key) === pending) state.entries.delete(key);
+  };
+  try {
+    const value = await pending;
+    // A write finished while this was read: the answer may predate it.
+    if (dataVersion() !== version) drop();
+    return value;
+  } catch (err) {
+    drop();
+    throw err;
+  }
+}
+
+/** A cache key from a function's name, the organisation and its (plain, JSON-able) arguments. */
+export const readKey = (name: string, organisationId: string, ...args: unknown[]) => JSON.stringify([name, organisationId, ...args]);

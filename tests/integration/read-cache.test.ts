@@ -1,0 +1,69 @@
+/**
+ * Lists and counts kept between writes (lib/read-cache.ts) never outlive a write: each change made
+ * through the application, or straight to a table, is in the very next answer.
+ */
+import { sql } from "drizzle-orm";
+import { beforeAll, describe, expect, it } from "vitest";
+import { dataVersion, getDb, writesAreLocal } from "@/db/client";
+import { components } from "@/db/schema";
+import { countJobs, listJobs } from "@/assessments/jobs/queries";
+import { createJob } from "@/assessments/jobs/service";
+import { countComponents } from "@/assessments/load-register/queries";
+import { listComponentsPage } from "@/assessments/load-register/service";
+import { countRevisionsByStatus } from "@/assessments/revisions/queries";
+import { createAssessment, listAssessmentsPage } from "@/assessments/revisions/service";
+import { cachedRead } from "@/lib/read-cache";
+import type { Actor } from "@/lib/permissions";
+import { actorFor, demoOrganisation } from "./helpers";
+
+let adviser: Actor;
+
+beforeAll(async () => {
+  const { organisationId } = await demoOrganisation();
+  adviser = await actorFor("adviser", organisationId);
+});
+
+describe("kept answers", () => {
+  it("a new assessment is in the next list and the next count", async () => {
+    const before = await listAssessmentsPage(adviser, {});
+    const drafts = (await countRevisionsByStatus(adviser)).draft ?? 0;
+    // On the embedded database the answer is kept (the same object); on a server it is read again.
+    const again = await listAssessmentsPage(adviser, {});
+    if (writesAreLocal()) expect(again).toBe(before);
+    else expect(again).toEqual(before);
+    const jobs = await listJobs(adviser);
+    const created = await createAssessment(adviser, { jobId: jobs[0].id, title: "Kept answers are dropped on write" });
+    const after = await listAssessmentsPage(adviser, {});
+    expect(after.total).toBe(before.total + 1);
+    expect(after.items[0].revisionId).toBe(created.revisionId);
+    expect((await countRevisionsByStatus(adviser)).draft).toBe(drafts + 1);
+  });
+
+  it("a row written straight to a table, and a raw statement, are seen at once", async () => {
+    const count = (await countComponents(adviser)).total;
+    const db = await getDb();
+    await db.insert(components).values({ organisationId: adviser.organisationId, name: "Written straight in", massKg: 3, grip: "good", massSource: "weighed" });
+    expect((await countComponents(adviser)).total).toBe(count + 1);
+    expect((await listComponentsPage(adviser, { q: "Written straight" })).total).toBe(1);
+    await db.execute(sql`delete from components where name = 'Written straight in'`);
+    expect((await countComponents(adviser)).total).toBe(count);
+  });
+
+  it("a write that finishes while a list is being read keeps that answer from being kept", async () => {
+    const jobsBefore = await countJobs(adviser);
+    let release!: () => void;
+    const gate = new Promise<void>((resolve) => (release = resolve));
+    const slow = cachedRead("a slow read", async () => {
+      const value = await countJobs(adviser);
+      await gate;
+      return value;
+    });
+    await createJob(adviser, { name: "Written during a read", client: "Invented Client Ltd", location: "Nowhere", siteContactPhone: "07700 900111" });
+    release();
+    expect(await slow).toBe(jobsBefore);
+    const version = dataVersion();
+    // Asked again, the read runs afresh.
+    expect(await cachedRead("a slow read", () => countJobs(adviser))).toBe(jobsBefore + 1);
+    expect(dataVersion()).toBe(version);
+  });
+});
