@@ -5,11 +5,12 @@
  * Options (also used by the browser tests): --port N, --smtp-port N, --inbox-port N,
  * --data-dir DIR, --fresh (delete DIR first), --no-build-check.
  */
-import { spawn, spawnSync } from "node:child_process";
+import { spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { parseArgs } from "node:util";
+import { buildIfNeeded } from "./build";
 
 const root = process.cwd();
 const { values: args } = parseArgs({
@@ -26,34 +27,6 @@ const { values: args } = parseArgs({
 const port = Number(args.port);
 const dataDir = path.resolve(args["data-dir"]!);
 const origin = `http://localhost:${port}`;
-const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
-
-const SOURCE_DIRS = ["app", "assessments", "db", "lib", "fonts", "public"];
-const SOURCE_FILES = ["next.config.ts", "package.json", "postcss.config.mjs", "instrumentation.ts", "proxy.ts", "tsconfig.json"];
-
-function newestSourceTime(): number {
-  let newest = 0;
-  const visit = (p: string) => {
-    const s = statSync(p);
-    if (s.isDirectory()) for (const entry of readdirSync(p)) visit(path.join(p, entry));
-    else newest = Math.max(newest, s.mtimeMs);
-  };
-  for (const d of SOURCE_DIRS) if (existsSync(d)) visit(d);
-  for (const f of SOURCE_FILES) if (existsSync(f)) visit(f);
-  return newest;
-}
-
-function buildIfNeeded(env: NodeJS.ProcessEnv) {
-  const buildId = path.join(root, ".next", "BUILD_ID");
-  if (args["no-build-check"] && existsSync(buildId)) return;
-  if (existsSync(buildId) && statSync(buildId).mtimeMs >= newestSourceTime()) return;
-  console.log("Building Heftwise (first run, or the sources changed)…");
-  const result = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
-  if (result.status !== 0) {
-    console.error("The build failed; see above.");
-    process.exit(result.status ?? 1);
-  }
-}
 
 function demoSecret(): string {
   // Kept beside the data so that sessions survive a restart of the demo.
@@ -82,7 +55,7 @@ async function main() {
   // passphrase is derived from NEXTAUTH_SECRET).
   Object.assign(process.env, { HEFTWISE_DATA_DIR: dataDir, NEXTAUTH_URL: origin, NEXTAUTH_SECRET: env.NEXTAUTH_SECRET, SMTP_URL: env.SMTP_URL });
 
-  buildIfNeeded(env);
+  buildIfNeeded(env, { force: !args["no-build-check"] });
 
   // Migrate and seed in this process, then close: the server opens the data directory next,
   // and two processes must never hold it at once.
