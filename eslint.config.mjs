@@ -28,7 +28,17 @@ const config = [
   ...next,
   ...nextTypescript,
   ...layerRules,
-  { ignores: [".next/**", "node_modules/**", "data/**", "test-results/**", "playwright-report/**", "db/migrations/**", "next-env.d.ts"] },
+  {
+    ignores: [
+      ".next/**",
+      "node_modules/**",
+      "data/**",
+      "test-results/**",
+      "playwright-report/**",
+      "db/migrations/**",
+      "next-env.d.ts",
+    ],
+  },
 ];
 
 export default config;

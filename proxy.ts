@@ -41,7 +41,15 @@ export function proxy(request: NextRequest) {
       throw err;
     }
     if (Number(request.headers.get("content-length") ?? "0") > SERVER_ACTION_BODY_LIMIT)
-      return NextResponse.json({ error: { code: "payload_too_large", message: "The form sent more than 1 MB: shorten the text or send files separately." } }, { status: 413 });
+      return NextResponse.json(
+        {
+          error: {
+            code: "payload_too_large",
+            message: "The form sent more than 1 MB: shorten the text or send files separately.",
+          },
+        },
+        { status: 413 },
+      );
   }
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const policy = contentSecurityPolicy(nonce);

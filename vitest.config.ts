@@ -11,7 +11,15 @@ const projects: TestProjectInlineConfiguration[] = [
     resolve: { alias },
     test: {
       name: "pglite",
-      include: ["tests/rules/**/*.test.ts", "tests/lift-plan/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/pack/**/*.test.ts", "tests/integration/**/*.test.ts", "tests/cli/**/*.test.ts", "tests/lint/**/*.test.ts"],
+      include: [
+        "tests/rules/**/*.test.ts",
+        "tests/lift-plan/**/*.test.ts",
+        "tests/lib/**/*.test.ts",
+        "tests/pack/**/*.test.ts",
+        "tests/integration/**/*.test.ts",
+        "tests/cli/**/*.test.ts",
+        "tests/lint/**/*.test.ts",
+      ],
       env: { HEFTWISE_DATA_DIR: "memory://", NODE_ENV: "test" },
       ...common,
     },

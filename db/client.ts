@@ -64,7 +64,9 @@ function listen(server: Server, socketPath: string): Promise<void> {
 /** Beside the folder; a path too long for a socket (about 100 bytes) gets a hashed name in the temp folder. */
 export function lockPath(dataDir: string): string {
   const beside = `${dataDir}.lock`;
-  return Buffer.byteLength(beside) < 100 ? beside : path.join(tmpdir(), `heftwise-${createHash("sha256").update(dataDir).digest("hex").slice(0, 16)}.lock`);
+  return Buffer.byteLength(beside) < 100
+    ? beside
+    : path.join(tmpdir(), `heftwise-${createHash("sha256").update(dataDir).digest("hex").slice(0, 16)}.lock`);
 }
 
 async function acquireLock(dataDir: string): Promise<() => void> {
@@ -81,7 +83,9 @@ async function acquireLock(dataDir: string): Promise<() => void> {
     // Left by a holder that died: take it over.
     rmSync(socketPath, { force: true });
     await listen(server, socketPath).catch((again) => {
-      throw (again as NodeJS.ErrnoException).code === "EADDRINUSE" ? new DatabaseLockedError(lockedMessage(dataDir)) : again;
+      throw (again as NodeJS.ErrnoException).code === "EADDRINUSE"
+        ? new DatabaseLockedError(lockedMessage(dataDir))
+        : again;
     });
   }
   return () => {
@@ -101,7 +105,11 @@ async function open(): Promise<Handle> {
     const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
     // An idle connection the server ends (a restart, a failover, an administrator) must not take the
     // process down: the pool drops it and opens another on the next query.
-    pool.on("error", (err) => console.error(`Database connection lost (${(err as { code?: string }).code ?? "no code"}): ${err.message}; it will be reopened.`));
+    pool.on("error", (err) =>
+      console.error(
+        `Database connection lost (${(err as { code?: string }).code ?? "no code"}): ${err.message}; it will be reopened.`,
+      ),
+    );
     const db = drizzle(pool, { schema });
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
     // Both drivers expose the same query builder; the PGlite type stands for both.
@@ -137,7 +145,9 @@ async function open(): Promise<Handle> {
   }
 }
 
-const writes = ((globalThis as unknown as { __heftwiseWrites?: { version: number; local: boolean } }).__heftwiseWrites ??= { version: 0, local: false });
+const writes = ((
+  globalThis as unknown as { __heftwiseWrites?: { version: number; local: boolean } }
+).__heftwiseWrites ??= { version: 0, local: false });
 
 /**
  * The embedded database's data version: it moves on each time a write statement or a transaction
@@ -150,8 +160,13 @@ export const dataVersion = () => writes.version;
 /** Whether every write passes through this process (the embedded database is open), so reads may be kept. */
 export const writesAreLocal = () => writes.local;
 
-function countWrites(client: { query: (...args: never[]) => Promise<unknown>; exec: (...args: never[]) => Promise<unknown>; transaction: (...args: never[]) => Promise<unknown> }) {
-  const wrap = <A extends never[], R>(method: (...args: A) => Promise<R>, isWrite: (...args: A) => boolean) =>
+function countWrites(client: {
+  query: (...args: never[]) => Promise<unknown>;
+  exec: (...args: never[]) => Promise<unknown>;
+  transaction: (...args: never[]) => Promise<unknown>;
+}) {
+  const wrap =
+    <A extends never[], R>(method: (...args: A) => Promise<R>, isWrite: (...args: A) => boolean) =>
     async (...args: A): Promise<R> => {
       try {
         return await method(...args);

@@ -27,7 +27,10 @@ export const massSourceEnum = pgEnum("mass_source", ["weighed", "datasheet", "es
 export const revisionStatusEnum = pgEnum("revision_status", ["draft", "submitted", "approved", "superseded"]);
 export const emailStatusEnum = pgEnum("email_status", ["pending", "sent", "failed"]);
 
-const id = () => uuid("id").primaryKey().default(sql`gen_random_uuid()`);
+const id = () =>
+  uuid("id")
+    .primaryKey()
+    .default(sql`gen_random_uuid()`);
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
 const organisationId = () =>
@@ -97,7 +100,10 @@ export const jobs = pgTable(
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("jobs_organisation_idx").on(t.organisationId), index("jobs_organisation_name_idx").on(t.organisationId, t.name, t.id)],
+  (t) => [
+    index("jobs_organisation_idx").on(t.organisationId),
+    index("jobs_organisation_name_idx").on(t.organisationId, t.name, t.id),
+  ],
 );
 
 export const components = pgTable(
@@ -274,8 +280,12 @@ export const revisions = pgTable(
     uniqueIndex("revisions_assessment_number_unique").on(t.assessmentId, t.number),
     index("revisions_organisation_idx").on(t.organisationId),
     // At most one latest revision an assessment; the list's default order (last saved first).
-    uniqueIndex("revisions_latest_unique").on(t.assessmentId).where(sql`${t.isLatest}`),
-    index("revisions_latest_updated_idx").on(t.organisationId, t.updatedAt, t.id).where(sql`${t.isLatest}`),
+    uniqueIndex("revisions_latest_unique")
+      .on(t.assessmentId)
+      .where(sql`${t.isLatest}`),
+    index("revisions_latest_updated_idx")
+      .on(t.organisationId, t.updatedAt, t.id)
+      .where(sql`${t.isLatest}`),
     // Counts by status for the overview; an approver's queue.
     index("revisions_organisation_status_idx").on(t.organisationId, t.status),
     index("revisions_approver_status_idx").on(t.approverId, t.status),
@@ -295,7 +305,10 @@ export const auditEvents = pgTable(
     details: jsonb("details"),
     createdAt: createdAt(),
   },
-  (t) => [index("audit_events_entity_idx").on(t.entityType, t.entityId, t.createdAt), index("audit_events_organisation_idx").on(t.organisationId, t.createdAt)],
+  (t) => [
+    index("audit_events_entity_idx").on(t.entityType, t.entityId, t.createdAt),
+    index("audit_events_organisation_idx").on(t.organisationId, t.createdAt),
+  ],
 );
 
 export const outboundEmails = pgTable(
@@ -424,7 +437,10 @@ export const briefingAttendees = pgTable(
     signedAt: timestamp("signed_at", { withTimezone: true }).notNull(),
     receivedAt: createdAt(),
   },
-  (t) => [uniqueIndex("briefing_attendees_key_unique").on(t.idempotencyKey), index("briefing_attendees_briefing_idx").on(t.briefingId)],
+  (t) => [
+    uniqueIndex("briefing_attendees_key_unique").on(t.idempotencyKey),
+    index("briefing_attendees_briefing_idx").on(t.briefingId),
+  ],
 );
 
 /** A foreman's record that site conditions differ from the assessment. */

@@ -5,8 +5,7 @@
 import { toAppError, type ErrorCode, type FieldIssue } from "./errors";
 
 export type ActionResult<T = unknown> =
-  | { ok: true; message?: string; data?: T }
-  | { ok: false; code: ErrorCode; message: string; issues?: FieldIssue[] };
+  { ok: true; message?: string; data?: T } | { ok: false; code: ErrorCode; message: string; issues?: FieldIssue[] };
 
 export async function runAction<T>(fn: () => Promise<{ message?: string; data?: T } | void>): Promise<ActionResult<T>> {
   try {
@@ -16,6 +15,10 @@ export async function runAction<T>(fn: () => Promise<{ message?: string; data?: 
     const known = toAppError(err);
     if (known) return { ok: false, code: known.code, message: known.message, issues: known.issues };
     console.error(err);
-    return { ok: false, code: "internal", message: "Something went wrong on the server. Nothing was changed; try again." };
+    return {
+      ok: false,
+      code: "internal",
+      message: "Something went wrong on the server. Nothing was changed; try again.",
+    };
   }
 }

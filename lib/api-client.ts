@@ -25,7 +25,9 @@ export class ApiError extends Error {
 
   /** Worth sending again later (no answer, a timeout, throttled, the server or a proxy failing); a refusal is not. */
   get retryable(): boolean {
-    return this.status === 0 || this.status === 408 || this.status === 429 || this.status >= 500 || this.code === "bad_reply";
+    return (
+      this.status === 0 || this.status === 408 || this.status === 429 || this.status >= 500 || this.code === "bad_reply"
+    );
   }
 }
 
@@ -65,11 +67,20 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
   try {
     body = text === "" ? undefined : JSON.parse(text);
   } catch {
-    throw new ApiError(`Heftwise answered unexpectedly (HTTP ${response.status}). Nothing on this page was lost: try again in a moment.`, response.status, "bad_reply");
+    throw new ApiError(
+      `Heftwise answered unexpectedly (HTTP ${response.status}). Nothing on this page was lost: try again in a moment.`,
+      response.status,
+      "bad_reply",
+    );
   }
   if (!response.ok) {
     const error = (body as { error?: { code?: string; message?: string; issues?: FieldIssue[] } } | undefined)?.error;
-    throw new ApiError(error?.message ?? `The request was refused (HTTP ${response.status}).`, response.status, error?.code ?? "http_error", Array.isArray(error?.issues) ? error.issues : []);
+    throw new ApiError(
+      error?.message ?? `The request was refused (HTTP ${response.status}).`,
+      response.status,
+      error?.code ?? "http_error",
+      Array.isArray(error?.issues) ? error.issues : [],
+    );
   }
   return body as T;
 }
@@ -78,13 +89,18 @@ export async function apiRequest<T = unknown>(path: string, options: RequestOpti
 export const messageOf = (err: unknown): string => (err instanceof Error ? err.message : String(err));
 
 /** Where no form field can show it: the first field issue's message, or else the error's own. */
-export const problemOf = (err: unknown): string => (err instanceof ApiError && err.issues[0] ? err.issues[0].message : messageOf(err));
+export const problemOf = (err: unknown): string =>
+  err instanceof ApiError && err.issues[0] ? err.issues[0].message : messageOf(err);
 
 /**
  * Puts each field issue of a refused request on its form field (react-hook-form's `setError`), and
  * returns the issues no field of the form takes, for a message beside the form.
  */
-export function applyFieldIssues(err: unknown, setError: (name: never, error: { type: string; message: string }) => void, fields: readonly string[]): FieldIssue[] {
+export function applyFieldIssues(
+  err: unknown,
+  setError: (name: never, error: { type: string; message: string }) => void,
+  fields: readonly string[],
+): FieldIssue[] {
   if (!(err instanceof ApiError)) return [];
   const unplaced: FieldIssue[] = [];
   for (const issue of err.issues) {

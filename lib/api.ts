@@ -9,8 +9,10 @@ import { AppError, toAppError } from "./errors";
 
 export const MAX_JSON_BYTES = 1_000_000;
 
-const tooLarge = (maxBytes: number) => new AppError("payload_too_large", `The body is larger than ${formatBytes(maxBytes)}`);
-const formatBytes = (n: number) => (n >= 1024 * 1024 ? `${Math.round(n / 1024 / 1024)} MB` : `${Math.round(n / 1000)} kB`);
+const tooLarge = (maxBytes: number) =>
+  new AppError("payload_too_large", `The body is larger than ${formatBytes(maxBytes)}`);
+const formatBytes = (n: number) =>
+  n >= 1024 * 1024 ? `${Math.round(n / 1024 / 1024)} MB` : `${Math.round(n / 1000)} kB`;
 
 /**
  * The body's bytes, read as a stream and abandoned as soon as it passes `maxBytes` (413): a body
@@ -52,7 +54,12 @@ export async function readJson(request: Request, maxBytes = MAX_JSON_BYTES): Pro
 }
 
 /** A text body (CSV) of one of the accepted types, within the byte limit. */
-export async function readText(request: Request, accepted: string[], maxBytes: number, message: string): Promise<string> {
+export async function readText(
+  request: Request,
+  accepted: string[],
+  maxBytes: number,
+  message: string,
+): Promise<string> {
   requireType(request, accepted, message);
   return new TextDecoder().decode(await readBodyBytes(request, maxBytes));
 }
@@ -61,16 +68,23 @@ export async function readText(request: Request, accepted: string[], maxBytes: n
 export async function readForm(request: Request, maxBytes: number, message: string): Promise<FormData> {
   requireType(request, ["multipart/form-data"], message);
   const bytes = await readBodyBytes(request, maxBytes);
-  return new Response(new Blob([bytes as Uint8Array<ArrayBuffer>]), { headers: { "content-type": request.headers.get("content-type")! } }).formData().catch(() => {
-    throw new AppError("bad_request", "The upload could not be read");
-  });
+  return new Response(new Blob([bytes as Uint8Array<ArrayBuffer>]), {
+    headers: { "content-type": request.headers.get("content-type")! },
+  })
+    .formData()
+    .catch(() => {
+      throw new AppError("bad_request", "The upload could not be read");
+    });
 }
 
 export function errorResponse(err: unknown): NextResponse {
   const known = toAppError(err);
   if (known) return NextResponse.json(known.toJSON(), { status: known.status });
   console.error(err);
-  return NextResponse.json({ error: { code: "internal", message: "Something went wrong on the server" } }, { status: 500 });
+  return NextResponse.json(
+    { error: { code: "internal", message: "Something went wrong on the server" } },
+    { status: 500 },
+  );
 }
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
@@ -83,9 +97,11 @@ const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 export function refuseCrossSite(request: Request, publicOrigin: string): void {
   if (SAFE_METHODS.has(request.method)) return;
   const site = request.headers.get("sec-fetch-site");
-  if (site === "cross-site" || site === "same-site") throw new AppError("forbidden", "Requests from another site are refused");
+  if (site === "cross-site" || site === "same-site")
+    throw new AppError("forbidden", "Requests from another site are refused");
   const origin = request.headers.get("origin");
-  if (origin && origin !== "null" && origin !== publicOrigin) throw new AppError("forbidden", "Requests from another site are refused");
+  if (origin && origin !== "null" && origin !== publicOrigin)
+    throw new AppError("forbidden", "Requests from another site are refused");
   if (origin === "null") throw new AppError("forbidden", "Requests from another site are refused");
 }
 

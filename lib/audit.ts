@@ -11,8 +11,9 @@ export interface AuditEntry {
   details?: Record<string, unknown>;
 }
 
-
 /** Records who did what, when — inside the caller's transaction, so the event and the change land together. */
 export async function recordAudit(tx: Queryable, entry: AuditEntry): Promise<void> {
-  await tx.insert(auditEvents).values({ ...entry, contentHash: entry.contentHash ?? null, details: entry.details ?? null });
+  await tx
+    .insert(auditEvents)
+    .values({ ...entry, contentHash: entry.contentHash ?? null, details: entry.details ?? null });
 }

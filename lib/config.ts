@@ -12,16 +12,28 @@ const schema = z
   .object({
     ...databaseEnvSchema.shape,
     NEXTAUTH_SECRET: z.string().min(32, "must be at least 32 characters (e.g. `openssl rand -base64 32`)").optional(),
-    NEXTAUTH_URL: z.url("must be the full origin the browser uses, e.g. http://localhost:3000").default("http://localhost:3000"),
+    NEXTAUTH_URL: z
+      .url("must be the full origin the browser uses, e.g. http://localhost:3000")
+      .default("http://localhost:3000"),
     SMTP_URL: urlWithScheme(["smtp", "smtps"], "smtp://127.0.0.1:2525").optional(),
     MAIL_FROM: z.string().trim().min(3).default("Heftwise <no-reply@heftwise.localhost>"),
-    INVITE_TTL_HOURS: z.coerce.number().int().min(1).max(24 * 30).default(72),
+    INVITE_TTL_HOURS: z.coerce
+      .number()
+      .int()
+      .min(1)
+      .max(24 * 30)
+      .default(72),
     /** Addresses of reverse proxies whose X-Forwarded-For is believed; none by default. */
     HEFTWISE_TRUSTED_PROXIES: z
       .string()
       .trim()
       .default("")
-      .transform((v) => v.split(",").map((a) => a.trim()).filter(Boolean))
+      .transform((v) =>
+        v
+          .split(",")
+          .map((a) => a.trim())
+          .filter(Boolean),
+      )
       .refine((list) => list.every((a) => isIP(a) !== 0), "must be a comma-separated list of IP addresses"),
   })
   .superRefine((env, ctx) => {
@@ -45,8 +57,7 @@ export class ConfigError extends Error {
 export function parseConfig(env: Record<string, string | undefined>): Config {
   const cleaned = Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined && v !== ""));
   const parsed = schema.safeParse(cleaned);
-  if (!parsed.success)
-    throw new ConfigError(parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`));
+  if (!parsed.success) throw new ConfigError(parsed.error.issues.map((i) => `${i.path.join(".")} ${i.message}`));
   const c = parsed.data;
   return {
     ...c,

@@ -108,7 +108,11 @@ export async function parseOrThrowAsync<T>(schema: z.ZodType<T>, input: unknown,
 export function toAppError(err: unknown): AppError | null {
   if (err instanceof AppError) return err;
   const code = databaseCode(err);
-  if (code?.startsWith("22")) return new AppError("validation", "Some of the data could not be stored: check for unusual characters or numbers out of range");
+  if (code?.startsWith("22"))
+    return new AppError(
+      "validation",
+      "Some of the data could not be stored: check for unusual characters or numbers out of range",
+    );
   if (code === "23505") return new AppError("conflict", "That already exists");
   return null;
 }

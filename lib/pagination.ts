@@ -55,14 +55,20 @@ export interface Keyset {
 }
 
 /** The row's sort value (as text) and id, selected beside the row to make the next cursor from. */
-export const keysetColumns = (keyset: Keyset) => ({ sortKey: sql<string>`(${keyset.column})::text`, sortId: sql<string>`${keyset.id}` });
+export const keysetColumns = (keyset: Keyset) => ({
+  sortKey: sql<string>`(${keyset.column})::text`,
+  sortId: sql<string>`${keyset.id}`,
+});
 
 /** ORDER BY for the keyset: both columns one way, so one index serves it (forwards or backwards). */
-export const orderOf = (keyset: Keyset) => (keyset.descending ? [desc(keyset.column), desc(keyset.id)] : [asc(keyset.column), asc(keyset.id)]);
+export const orderOf = (keyset: Keyset) =>
+  keyset.descending ? [desc(keyset.column), desc(keyset.id)] : [asc(keyset.column), asc(keyset.id)];
 
 /** Whether a cursor's value reads back as its sort's type (a forged one is refused before the query). */
 const VALUE_READS: Record<Keyset["type"], (value: string) => boolean> = {
-  timestamptz: (v) => /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?([+-]\d{2}(:\d{2})?)?$/.test(v) && !Number.isNaN(Date.parse(v.replace(" ", "T").replace(/([+-]\d{2})$/, "$1:00"))),
+  timestamptz: (v) =>
+    /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?([+-]\d{2}(:\d{2})?)?$/.test(v) &&
+    !Number.isNaN(Date.parse(v.replace(" ", "T").replace(/([+-]\d{2})$/, "$1:00"))),
   text: () => true,
   float8: (v) => v.trim() !== "" && Number.isFinite(Number(v)),
 };
@@ -71,8 +77,10 @@ const VALUE_READS: Record<Keyset["type"], (value: string) => boolean> = {
 export function afterCursor(keyset: Keyset, cursor: Cursor | undefined): SQL | undefined {
   if (!cursor) return undefined;
   const [name, value, id] = cursor;
-  if (name !== keyset.name) throw new AppError("validation", "Invalid query", [{ path: "cursor", message: `${NOT_OURS} for this sort` }]);
-  if (!VALUE_READS[keyset.type](value)) throw new AppError("validation", "Invalid query", [{ path: "cursor", message: NOT_OURS }]);
+  if (name !== keyset.name)
+    throw new AppError("validation", "Invalid query", [{ path: "cursor", message: `${NOT_OURS} for this sort` }]);
+  if (!VALUE_READS[keyset.type](value))
+    throw new AppError("validation", "Invalid query", [{ path: "cursor", message: NOT_OURS }]);
   // A row comparison: the index on (column, id) starts the walk right there.
   return sql`(${keyset.column}, ${keyset.id}) ${sql.raw(keyset.descending ? "<" : ">")} (${value}::${sql.raw(keyset.type)}, ${id}::uuid)`;
 }
@@ -81,7 +89,12 @@ export function afterCursor(keyset: Keyset, cursor: Cursor | undefined): SQL | u
  * Builds the page from up to `limit + 1` rows read in the keyset's order (the extra row says whether
  * another page follows) and drops the sort key from the items.
  */
-export function keysetPage<T extends { sortKey: string; sortId: string }>(rows: T[], keyset: Keyset, limit: number, total: number): Page<Omit<T, "sortKey" | "sortId">> {
+export function keysetPage<T extends { sortKey: string; sortId: string }>(
+  rows: T[],
+  keyset: Keyset,
+  limit: number,
+  total: number,
+): Page<Omit<T, "sortKey" | "sortId">> {
   const items = rows.slice(0, limit);
   const last = items[items.length - 1];
   const nextCursor = rows.length > limit && last ? encodeCursor([keyset.name, last.sortKey, last.sortId]) : null;

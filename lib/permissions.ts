@@ -70,9 +70,12 @@ export function can(actor: Actor | null, action: Action, resource?: OwnedResourc
  * Throws unless allowed: 401 without an actor, 404 for another organisation's record (never a
  * hint that it exists), 403 when the role lacks the action.
  */
-export function authorize(actor: Actor | null, action: Action, resource?: OwnedResource | null): asserts actor is Actor {
+export function authorize(
+  actor: Actor | null,
+  action: Action,
+  resource?: OwnedResource | null,
+): asserts actor is Actor {
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   if (resource && resource.organisationId !== actor.organisationId) throw AppError.notFound();
-  if (!PERMISSIONS[actor.role].includes(action))
-    throw new AppError("forbidden", "Your role does not allow this");
+  if (!PERMISSIONS[actor.role].includes(action)) throw new AppError("forbidden", "Your role does not allow this");
 }

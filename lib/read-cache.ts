@@ -17,7 +17,10 @@ interface State {
   entries: Map<string, Promise<unknown>>;
 }
 
-const state = ((globalThis as unknown as { __heftwiseReadCache?: State }).__heftwiseReadCache ??= { version: -1, entries: new Map() });
+const state = ((globalThis as unknown as { __heftwiseReadCache?: State }).__heftwiseReadCache ??= {
+  version: -1,
+  entries: new Map(),
+});
 
 export async function cachedRead<T>(key: string, load: () => Promise<T>): Promise<T> {
   if (!writesAreLocal()) return load();
@@ -51,4 +54,5 @@ export async function cachedRead<T>(key: string, load: () => Promise<T>): Promis
 }
 
 /** A cache key from a function's name, the organisation and its (plain, JSON-able) arguments. */
-export const readKey = (name: string, organisationId: string, ...args: unknown[]) => JSON.stringify([name, organisationId, ...args]);
+export const readKey = (name: string, organisationId: string, ...args: unknown[]) =>
+  JSON.stringify([name, organisationId, ...args]);

@@ -8,7 +8,6 @@ import { and, eq } from "drizzle-orm";
 import { getDb, type Tx } from "@/db/client";
 import { storedFiles } from "@/db/schema";
 
-
 export interface StoredFile {
   id: string;
   contentType: string;
@@ -16,18 +15,34 @@ export interface StoredFile {
   sha256: string;
 }
 
-export async function putFile(tx: Tx, organisationId: string, data: Uint8Array, contentType: string): Promise<StoredFile> {
+export async function putFile(
+  tx: Tx,
+  organisationId: string,
+  data: Uint8Array,
+  contentType: string,
+): Promise<StoredFile> {
   const sha256 = createHash("sha256").update(data).digest("hex");
   const [row] = await tx
     .insert(storedFiles)
     .values({ organisationId, contentType, size: data.byteLength, sha256, data })
-    .returning({ id: storedFiles.id, contentType: storedFiles.contentType, size: storedFiles.size, sha256: storedFiles.sha256 });
+    .returning({
+      id: storedFiles.id,
+      contentType: storedFiles.contentType,
+      size: storedFiles.size,
+      sha256: storedFiles.sha256,
+    });
   return row;
 }
 
-export async function getFile(organisationId: string, fileId: string): Promise<(StoredFile & { data: Uint8Array }) | null> {
+export async function getFile(
+  organisationId: string,
+  fileId: string,
+): Promise<(StoredFile & { data: Uint8Array }) | null> {
   const db = await getDb();
-  const [row] = await db.select().from(storedFiles).where(and(eq(storedFiles.id, fileId), eq(storedFiles.organisationId, organisationId)));
+  const [row] = await db
+    .select()
+    .from(storedFiles)
+    .where(and(eq(storedFiles.id, fileId), eq(storedFiles.organisationId, organisationId)));
   return row ? { id: row.id, contentType: row.contentType, size: row.size, sha256: row.sha256, data: row.data } : null;
 }
 

@@ -16,7 +16,11 @@ export function woffToTtf(woff: Uint8Array): Uint8Array {
     const compLength = src.readUInt32BE(at + 8);
     const origLength = src.readUInt32BE(at + 12);
     const raw = src.subarray(offset, offset + compLength);
-    return { tag: src.subarray(at, at + 4), checksum: src.readUInt32BE(at + 16), data: compLength < origLength ? inflateSync(raw) : raw };
+    return {
+      tag: src.subarray(at, at + 4),
+      checksum: src.readUInt32BE(at + 16),
+      data: compLength < origLength ? inflateSync(raw) : raw,
+    };
   });
   let power = 1;
   while (power * 2 <= numTables) power *= 2;

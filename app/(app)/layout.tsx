@@ -10,7 +10,10 @@ import { Providers } from "./providers";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const actor = await requireActor();
-  const items = NAVIGATION.filter((item) => item.action === null || can(actor, item.action)).map(({ href, label }) => ({ href, label }));
+  const items = NAVIGATION.filter((item) => item.action === null || can(actor, item.action)).map(({ href, label }) => ({
+    href,
+    label,
+  }));
   return (
     <div className="flex min-h-screen flex-col">
       <header className="bg-frame text-frame-ink">

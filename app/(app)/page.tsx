@@ -6,7 +6,17 @@ import { countAwaitingReview, countRevisionsByStatus } from "@/assessments/revis
 import { requireActor } from "@/lib/auth/session";
 import { can, type Actor } from "@/lib/permissions";
 
-function Card({ title, value, href, children }: { title: string; value?: number | string; href?: string; children?: React.ReactNode }) {
+function Card({
+  title,
+  value,
+  href,
+  children,
+}: {
+  title: string;
+  value?: number | string;
+  href?: string;
+  children?: React.ReactNode;
+}) {
   const body = (
     <>
       <h2 className="text-sm font-bold uppercase tracking-wide text-muted">{title}</h2>
@@ -24,12 +34,18 @@ function Card({ title, value, href, children }: { title: string; value?: number 
 }
 
 async function AdviserOverview({ actor }: { actor: Actor }) {
-  const [jobCount, register, byStatus] = await Promise.all([countJobs(actor), countComponents(actor), countRevisionsByStatus(actor)]);
+  const [jobCount, register, byStatus] = await Promise.all([
+    countJobs(actor),
+    countComponents(actor),
+    countRevisionsByStatus(actor),
+  ]);
   return (
     <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
       <Card title="Jobs" value={jobCount} href="/jobs" />
       <Card title="Load register" value={register.total} href="/load-register">
-        {register.estimated > 0 && <p className="mt-1 text-sm font-bold text-band-watch">{register.estimated} with estimated mass</p>}
+        {register.estimated > 0 && (
+          <p className="mt-1 text-sm font-bold text-band-watch">{register.estimated} with estimated mass</p>
+        )}
       </Card>
       <Card title="Drafts" value={byStatus.draft ?? 0} />
       <Card title="Awaiting approval" value={byStatus.submitted ?? 0} />
@@ -47,11 +63,19 @@ export default async function OverviewPage() {
         <Card title="Waiting for your countersignature" value={await countAwaitingReview(actor)} href="/reviews" />
       )}
       {can(actor, "briefings:run") && (
-        <Card title="Approved assessments ready to brief" value={(await listForemanJobs(actor)).reduce((n, j) => n + j.revisions.length, 0)} href="/briefings" />
+        <Card
+          title="Approved assessments ready to brief"
+          value={(await listForemanJobs(actor)).reduce((n, j) => n + j.revisions.length, 0)}
+          href="/briefings"
+        />
       )}
       {can(actor, "users:manage") && (
         <p className="text-sm text-muted">
-          As an administrator you also manage <Link href="/admin/users" className="font-bold text-accent underline">the people in your organisation</Link>.
+          As an administrator you also manage{" "}
+          <Link href="/admin/users" className="font-bold text-accent underline">
+            the people in your organisation
+          </Link>
+          .
         </p>
       )}
     </div>

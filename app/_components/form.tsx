@@ -18,7 +18,21 @@ export const controlProps = (id: string, error?: string) => ({
 });
 
 /** A field's frame: label, optional hint, the control, and its error below. */
-export function FieldFrame({ id, label, hint, error, compact = false, children }: { id: string; label: React.ReactNode; hint?: string; error?: string; compact?: boolean; children: React.ReactNode }) {
+export function FieldFrame({
+  id,
+  label,
+  hint,
+  error,
+  compact = false,
+  children,
+}: {
+  id: string;
+  label: React.ReactNode;
+  hint?: string;
+  error?: string;
+  compact?: boolean;
+  children: React.ReactNode;
+}) {
   return (
     <div>
       <label htmlFor={id} className="block text-sm font-bold">
@@ -47,7 +61,10 @@ export function withUnit(label: string, unit?: string) {
 
 type InputProps = React.InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string; hint?: string };
 
-export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField({ label, error, hint, id, name, ...rest }, ref) {
+export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextField(
+  { label, error, hint, id, name, ...rest },
+  ref,
+) {
   const fieldId = id ?? `field-${name}`;
   return (
     <FieldFrame id={fieldId} label={label} hint={hint} error={error}>
@@ -58,7 +75,10 @@ export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextF
 
 type SelectProps = React.SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string };
 
-export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField({ label, error, id, name, children, ...rest }, ref) {
+export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function SelectField(
+  { label, error, id, name, children, ...rest },
+  ref,
+) {
   const fieldId = id ?? `field-${name}`;
   return (
     <FieldFrame id={fieldId} label={label} error={error}>
@@ -79,7 +99,12 @@ export function PrimaryButton({ className = "", ...rest }: React.ButtonHTMLAttri
 }
 
 export function SecondaryButton({ className = "", ...rest }: React.ButtonHTMLAttributes<HTMLButtonElement>) {
-  return <button className={`rounded border border-rule bg-white px-3 py-1.5 font-bold hover:bg-paper disabled:opacity-60 ${className}`} {...rest} />;
+  return (
+    <button
+      className={`rounded border border-rule bg-white px-3 py-1.5 font-bold hover:bg-paper disabled:opacity-60 ${className}`}
+      {...rest}
+    />
+  );
 }
 
 export function FormMessage({ tone, children }: { tone: "error" | "success"; children: React.ReactNode }) {

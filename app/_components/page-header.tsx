@@ -10,9 +10,24 @@ export function PageHeader({ title, children }: { title: string; children?: Reac
   );
 }
 
-export function ActionLink({ href, secondary = false, children }: { href: string; secondary?: boolean; children: React.ReactNode }) {
+export function ActionLink({
+  href,
+  secondary = false,
+  children,
+}: {
+  href: string;
+  secondary?: boolean;
+  children: React.ReactNode;
+}) {
   return (
-    <Link href={href} className={secondary ? "rounded border border-accent bg-white px-4 py-2 font-bold text-accent" : "rounded bg-accent px-4 py-2 font-bold text-white"}>
+    <Link
+      href={href}
+      className={
+        secondary
+          ? "rounded border border-accent bg-white px-4 py-2 font-bold text-accent"
+          : "rounded bg-accent px-4 py-2 font-bold text-white"
+      }
+    >
       {children}
     </Link>
   );

@@ -34,7 +34,17 @@ interface PageResponse<T> {
   total: number;
 }
 
-export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {}, defaultSort, searchLabel = "Search", pageSize = 20, emptyText, caption }: Props<T>) {
+export function ServerTable<T>({
+  endpoint,
+  columns,
+  filters = [],
+  sortKeys = {},
+  defaultSort,
+  searchLabel = "Search",
+  pageSize = 20,
+  emptyText,
+  caption,
+}: Props<T>) {
   const [search, setSearch] = useState("");
   const [values, setValues] = useState<Record<string, string>>({});
   const [sort, setSort] = useState(defaultSort);
@@ -53,7 +63,13 @@ export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {},
     queryFn: ({ signal }) => apiRequest<PageResponse<T>>(`${endpoint}?${params}`, { signal }),
   });
 
-  const table = useReactTable({ data: query.data?.items ?? [], columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true });
+  const table = useReactTable({
+    data: query.data?.items ?? [],
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    manualPagination: true,
+    manualSorting: true,
+  });
   const restart = () => setCursors([undefined]);
 
   return (
@@ -108,7 +124,13 @@ export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {},
                 <tr key={group.id}>
                   {group.headers.map((header) => {
                     const keys = sortKeys[header.column.id];
-                    const state = keys ? (sort === keys[0] ? "ascending" : sort === keys[1] ? "descending" : "none") : undefined;
+                    const state = keys
+                      ? sort === keys[0]
+                        ? "ascending"
+                        : sort === keys[1]
+                          ? "descending"
+                          : "none"
+                      : undefined;
                     return (
                       <th key={header.id} scope="col" className="px-3 py-2" aria-sort={state}>
                         {keys ? (
@@ -154,7 +176,12 @@ export function ServerTable<T>({ endpoint, columns, filters = [], sortKeys = {},
         </div>
       )}
       <div className="flex items-center gap-3">
-        <button type="button" className="rounded border border-rule bg-white px-3 py-1.5 font-bold disabled:opacity-40" disabled={cursors.length === 1} onClick={() => setCursors(cursors.slice(0, -1))}>
+        <button
+          type="button"
+          className="rounded border border-rule bg-white px-3 py-1.5 font-bold disabled:opacity-40"
+          disabled={cursors.length === 1}
+          onClick={() => setCursors(cursors.slice(0, -1))}
+        >
           ← Previous
         </button>
         <span className="text-sm text-muted">Page {cursors.length}</span>

@@ -1,5 +1,13 @@
 /** A plain, readable table frame shared by list pages. */
-export function DataTable({ head, children, caption }: { head: string[]; children: React.ReactNode; caption?: string }) {
+export function DataTable({
+  head,
+  children,
+  caption,
+}: {
+  head: string[];
+  children: React.ReactNode;
+  caption?: string;
+}) {
   return (
     <div className="overflow-x-auto rounded-lg border border-rule bg-white">
       <table className="w-full text-left text-sm">

@@ -7,7 +7,11 @@ import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string; welcome?: string }> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ callbackUrl?: string; welcome?: string }>;
+}) {
   if (await getActor()) redirect("/");
   const { callbackUrl, welcome } = await searchParams;
   // Only paths on this site: an open redirect would let a link send people elsewhere after sign-in.

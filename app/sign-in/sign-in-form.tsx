@@ -17,7 +17,9 @@ export function SignInForm({ callbackUrl, welcome }: { callbackUrl: string; welc
     setFailure(null);
     const result = await signIn("credentials", { ...values, redirect: false });
     if (!result || result.error) {
-      setFailure(result?.error && result.error !== "CredentialsSignin" ? result.error : "E-mail or password not recognised.");
+      setFailure(
+        result?.error && result.error !== "CredentialsSignin" ? result.error : "E-mail or password not recognised.",
+      );
       return;
     }
     router.replace(callbackUrl);
@@ -28,8 +30,20 @@ export function SignInForm({ callbackUrl, welcome }: { callbackUrl: string; welc
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {welcome && <FormMessage tone="success">Your password is set. Sign in to continue.</FormMessage>}
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
-      <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register("email")} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register("password")} />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        error={formState.errors.email?.message}
+        {...register("email")}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={formState.errors.password?.message}
+        {...register("password")}
+      />
       <PrimaryButton type="submit" disabled={formState.isSubmitting} className="w-full py-3 text-lg">
         {formState.isSubmitting ? "Signing in…" : "Sign in"}
       </PrimaryButton>

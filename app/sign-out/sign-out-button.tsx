@@ -24,7 +24,10 @@ export function SignOutButton() {
       <SecondaryButton type="button" className="w-full py-3" onClick={everywhere}>
         Sign out everywhere
       </SecondaryButton>
-      <p className="text-sm text-muted">&ldquo;Everywhere&rdquo; also ends your sessions on other phones and computers, such as a site office PC left signed in.</p>
+      <p className="text-sm text-muted">
+        &ldquo;Everywhere&rdquo; also ends your sessions on other phones and computers, such as a site office PC left
+        signed in.
+      </p>
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
     </div>
   );

@@ -8,7 +8,10 @@ export const metadata: Metadata = { title: "Check a pack" };
 export default function VerifyPage() {
   return (
     <AuthFrame title="Check a Heftwise pack">
-      <p className="mb-4 text-sm text-muted">Upload the PDF. You will see whether it is a pack Heftwise issued, unaltered, and whether that revision is approved or has been superseded.</p>
+      <p className="mb-4 text-sm text-muted">
+        Upload the PDF. You will see whether it is a pack Heftwise issued, unaltered, and whether that revision is
+        approved or has been superseded.
+      </p>
       <VerifyForm />
     </AuthFrame>
   );

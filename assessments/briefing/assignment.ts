@@ -9,6 +9,12 @@ export async function isAssignedToJob(actor: Actor, jobId: string): Promise<bool
   const [assigned] = await db
     .select({ jobId: jobAssignments.jobId })
     .from(jobAssignments)
-    .where(and(eq(jobAssignments.jobId, jobId), eq(jobAssignments.userId, actor.id), eq(jobAssignments.organisationId, actor.organisationId)));
+    .where(
+      and(
+        eq(jobAssignments.jobId, jobId),
+        eq(jobAssignments.userId, actor.id),
+        eq(jobAssignments.organisationId, actor.organisationId),
+      ),
+    );
   return !!assigned;
 }

@@ -6,7 +6,18 @@
 import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
-import { assessments, briefingAttendees, briefings, components, jobAssignments, jobs, organisations, revisions, siteChangeNotes, users } from "@/db/schema";
+import {
+  assessments,
+  briefingAttendees,
+  briefings,
+  components,
+  jobAssignments,
+  jobs,
+  organisations,
+  revisions,
+  siteChangeNotes,
+  users,
+} from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
 import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
@@ -43,7 +54,15 @@ export async function listForemanJobs(actor: Actor | null) {
   const jobIds = assigned.map((a) => a.job.id);
   const approved = jobIds.length
     ? await db
-        .select({ revisionId: revisions.id, number: revisions.number, reviewDate: revisions.reviewDate, needsReview: revisions.needsReview, worstBand: revisions.worstBand, title: assessments.title, jobId: assessments.jobId })
+        .select({
+          revisionId: revisions.id,
+          number: revisions.number,
+          reviewDate: revisions.reviewDate,
+          needsReview: revisions.needsReview,
+          worstBand: revisions.worstBand,
+          title: assessments.title,
+          jobId: assessments.jobId,
+        })
         .from(revisions)
         .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
         .where(and(inArray(assessments.jobId, jobIds), eq(revisions.status, "approved")))
@@ -51,14 +70,30 @@ export async function listForemanJobs(actor: Actor | null) {
     : [];
   const today = approved.length
     ? await db
-        .select({ id: briefings.id, revisionId: briefings.revisionId, startedAt: briefings.startedAt, completedAt: briefings.completedAt, place: briefings.place })
+        .select({
+          id: briefings.id,
+          revisionId: briefings.revisionId,
+          startedAt: briefings.startedAt,
+          completedAt: briefings.completedAt,
+          place: briefings.place,
+        })
         .from(briefings)
-        .where(and(inArray(briefings.revisionId, approved.map((a) => a.revisionId)), gte(briefings.startedAt, startOfToday())))
+        .where(
+          and(
+            inArray(
+              briefings.revisionId,
+              approved.map((a) => a.revisionId),
+            ),
+            gte(briefings.startedAt, startOfToday()),
+          ),
+        )
         .orderBy(desc(briefings.startedAt))
     : [];
   return assigned.map(({ job }) => ({
     job,
-    revisions: approved.filter((r) => r.jobId === job.id).map((r) => ({ ...r, briefingsToday: today.filter((b) => b.revisionId === r.revisionId) })),
+    revisions: approved
+      .filter((r) => r.jobId === job.id)
+      .map((r) => ({ ...r, briefingsToday: today.filter((b) => b.revisionId === r.revisionId) })),
   }));
 }
 
@@ -66,9 +101,15 @@ export async function listForemanJobs(actor: Actor | null) {
 async function briefableRevision(actor: Actor, revisionId: string) {
   const db = await getDb();
   const [row] = isUuid(revisionId)
-    ? await db.select({ revision: revisions, assessment: assessments, job: jobs }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).innerJoin(jobs, eq(jobs.id, assessments.jobId)).where(eq(revisions.id, revisionId))
+    ? await db
+        .select({ revision: revisions, assessment: assessments, job: jobs })
+        .from(revisions)
+        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+        .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+        .where(eq(revisions.id, revisionId))
     : [];
-  if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved") throw AppError.notFound("Approved revision");
+  if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved")
+    throw AppError.notFound("Approved revision");
   if (!(await isAssignedToJob(actor, row.job.id))) throw AppError.notFound("Approved revision");
   return row;
 }
@@ -78,13 +119,34 @@ export async function getBriefingScript(actor: Actor | null, revisionId: string)
   authorize(actor, "briefings:run");
   const { revision, assessment, job } = await briefableRevision(actor, revisionId);
   const db = await getDb();
-  const names = Object.fromEntries((await db.select({ id: components.id, name: components.name }).from(components).where(eq(components.organisationId, actor.organisationId))).map((c) => [c.id, c.name]));
-  const notes = await db.select().from(siteChangeNotes).where(eq(siteChangeNotes.revisionId, revisionId)).orderBy(desc(siteChangeNotes.createdAt));
+  const names = Object.fromEntries(
+    (
+      await db
+        .select({ id: components.id, name: components.name })
+        .from(components)
+        .where(eq(components.organisationId, actor.organisationId))
+    ).map((c) => [c.id, c.name]),
+  );
+  const notes = await db
+    .select()
+    .from(siteChangeNotes)
+    .where(eq(siteChangeNotes.revisionId, revisionId))
+    .orderBy(desc(siteChangeNotes.createdAt));
   const content = contentSchema.parse(revision.content);
   return {
-    revision: { id: revision.id, number: revision.number, needsReview: revision.needsReview, reviewDate: revision.reviewDate },
+    revision: {
+      id: revision.id,
+      number: revision.number,
+      needsReview: revision.needsReview,
+      reviewDate: revision.reviewDate,
+    },
     title: assessment.title,
-    job: { name: job.name, accessPoint: job.accessPoint, siteContactName: job.siteContactName, siteContactPhone: job.siteContactPhone },
+    job: {
+      name: job.name,
+      accessPoint: job.accessPoint,
+      siteContactName: job.siteContactName,
+      siteContactPhone: job.siteContactPhone,
+    },
     script: briefingScript(content, (revision.results ?? []) as TaskScore[], names),
     siteChanges: notes.map((n) => ({ text: n.text, by: n.authorName, at: n.createdAt.toISOString() })),
   };
@@ -96,27 +158,52 @@ export async function startBriefing(actor: Actor | null, input: unknown): Promis
   await briefableRevision(actor, data.revisionId);
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [row] = await tx.insert(briefings).values({ organisationId: actor.organisationId, revisionId: data.revisionId, foremanId: actor.id, foremanName: actor.name, place: data.place }).returning({ id: briefings.id });
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.started", entityType: "revision", entityId: data.revisionId, details: { briefingId: row.id, place: data.place } });
+    const [row] = await tx
+      .insert(briefings)
+      .values({
+        organisationId: actor.organisationId,
+        revisionId: data.revisionId,
+        foremanId: actor.id,
+        foremanName: actor.name,
+        place: data.place,
+      })
+      .returning({ id: briefings.id });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "briefing.started",
+      entityType: "revision",
+      entityId: data.revisionId,
+      details: { briefingId: row.id, place: data.place },
+    });
     return { briefingId: row.id };
   });
 }
 
 async function ownBriefing(actor: Actor, briefingId: string) {
   const db = await getDb();
-  const row = isUuid(briefingId) ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) }) : undefined;
-  if (!row || row.organisationId !== actor.organisationId || row.foremanId !== actor.id) throw AppError.notFound("Briefing");
+  const row = isUuid(briefingId)
+    ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) })
+    : undefined;
+  if (!row || row.organisationId !== actor.organisationId || row.foremanId !== actor.id)
+    throw AppError.notFound("Briefing");
   return row;
 }
 
 /** Records one sign-on. Sending the same key again returns the first record: nothing is duplicated. */
-export async function recordAttendee(actor: Actor | null, briefingId: string, input: unknown): Promise<{ id: string; duplicate: boolean }> {
+export async function recordAttendee(
+  actor: Actor | null,
+  briefingId: string,
+  input: unknown,
+): Promise<{ id: string; duplicate: boolean }> {
   authorize(actor, "briefings:run");
   const briefing = await ownBriefing(actor, briefingId);
   const data = await parseOrThrowAsync(attendeeSchema, input);
   if (briefing.completedAt) {
     const db = await getDb();
-    const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
+    const existing = await db.query.briefingAttendees.findFirst({
+      where: eq(briefingAttendees.idempotencyKey, data.key),
+    });
     if (existing?.briefingId === briefingId) return { id: existing.id, duplicate: true };
     throw new AppError("conflict", "This briefing is closed: the foreman has signed it off.");
   }
@@ -124,23 +211,41 @@ export async function recordAttendee(actor: Actor | null, briefingId: string, in
   // The briefing row is the lock: a sign-on waits for a sign-off in progress, then sees it closed,
   // so nobody signs on after the record was put into the re-issued pack.
   const inserted = await db.transaction(async (tx) => {
-    const [open] = await tx.select({ completedAt: briefings.completedAt }).from(briefings).where(eq(briefings.id, briefingId)).for("update");
+    const [open] = await tx
+      .select({ completedAt: briefings.completedAt })
+      .from(briefings)
+      .where(eq(briefings.id, briefingId))
+      .for("update");
     if (open?.completedAt) return "closed" as const;
     const [row] = await tx
       .insert(briefingAttendees)
-      .values({ organisationId: actor.organisationId, briefingId, idempotencyKey: data.key, name: data.name, employer: data.employer, cardNumber: data.cardNumber, signature: data.signature, signedAt: new Date(data.signedAt) })
+      .values({
+        organisationId: actor.organisationId,
+        briefingId,
+        idempotencyKey: data.key,
+        name: data.name,
+        employer: data.employer,
+        cardNumber: data.cardNumber,
+        signature: data.signature,
+        signedAt: new Date(data.signedAt),
+      })
       .onConflictDoNothing({ target: briefingAttendees.idempotencyKey })
       .returning({ id: briefingAttendees.id });
     return row;
   });
   if (inserted === "closed") {
-    const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
+    const existing = await db.query.briefingAttendees.findFirst({
+      where: eq(briefingAttendees.idempotencyKey, data.key),
+    });
     if (existing?.briefingId === briefingId) return { id: existing.id, duplicate: true };
     throw new AppError("conflict", "This briefing is closed: the foreman has signed it off.");
   }
   if (inserted) return { id: inserted.id, duplicate: false };
-  const existing = await db.query.briefingAttendees.findFirst({ where: eq(briefingAttendees.idempotencyKey, data.key) });
-  if (!existing || existing.briefingId !== briefingId) throw new AppError("conflict", "This sign-on key belongs to another briefing.");
+  const existing = await db.query.briefingAttendees.findFirst({
+    where: eq(briefingAttendees.idempotencyKey, data.key),
+  });
+  if (!existing || existing.briefingId !== briefingId)
+    throw new AppError("conflict", "This sign-on key belongs to another briefing.");
   return { id: existing.id, duplicate: true };
 }
 
@@ -151,8 +256,14 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   const data = await parseOrThrowAsync(completeBriefingSchema, input);
   if (briefing.completedAt) throw new AppError("conflict", "This briefing is already signed off.");
   const db = await getDb();
-  const attendees = await db.select({ id: briefingAttendees.id }).from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId));
-  if (attendees.length === 0) throw new AppError("validation", "At least one operative must sign on first", [{ path: "attendees", message: "At least one operative must sign on first" }]);
+  const attendees = await db
+    .select({ id: briefingAttendees.id })
+    .from(briefingAttendees)
+    .where(eq(briefingAttendees.briefingId, briefingId));
+  if (attendees.length === 0)
+    throw new AppError("validation", "At least one operative must sign on first", [
+      { path: "attendees", message: "At least one operative must sign on first" },
+    ]);
   // The briefing record joins the pack: the organisation re-issues the approved pack with it, newly
   // signed and recorded for /verify (earlier issues stay verifiable). Key fetched before the transaction.
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
@@ -167,7 +278,14 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
     if (!claimed) throw new AppError("conflict", "This briefing is already signed off.");
     const pdf = await renderPack(tx, briefing.revisionId, key);
     await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "briefing.completed", entityType: "revision", entityId: briefing.revisionId, details: { briefingId, attendees: attendees.length } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "briefing.completed",
+      entityType: "revision",
+      entityId: briefing.revisionId,
+      details: { briefingId, attendees: attendees.length },
+    });
   });
 }
 
@@ -175,41 +293,91 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
 export async function getBriefingRecord(actor: Actor | null, briefingId: string) {
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   const db = await getDb();
-  const briefing = isUuid(briefingId) ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) }) : undefined;
+  const briefing = isUuid(briefingId)
+    ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) })
+    : undefined;
   if (!briefing || briefing.organisationId !== actor.organisationId) throw AppError.notFound("Briefing");
-  if (!(briefing.foremanId === actor.id || ["admin", "adviser"].includes(actor.role))) throw AppError.notFound("Briefing");
-  const [context] = await db.select({ title: assessments.title, number: revisions.number, job: jobs.name }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).innerJoin(jobs, eq(jobs.id, assessments.jobId)).where(eq(revisions.id, briefing.revisionId));
-  const attendees = await db.select().from(briefingAttendees).where(eq(briefingAttendees.briefingId, briefingId)).orderBy(asc(briefingAttendees.signedAt));
+  if (!(briefing.foremanId === actor.id || ["admin", "adviser"].includes(actor.role)))
+    throw AppError.notFound("Briefing");
+  const [context] = await db
+    .select({ title: assessments.title, number: revisions.number, job: jobs.name })
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+    .where(eq(revisions.id, briefing.revisionId));
+  const attendees = await db
+    .select()
+    .from(briefingAttendees)
+    .where(eq(briefingAttendees.briefingId, briefingId))
+    .orderBy(asc(briefingAttendees.signedAt));
   return { briefing, context, attendees };
 }
 
 /** Conditions differ from the assessment: recorded with an optional photo, the revision marked, the adviser e-mailed. */
-export async function createSiteChangeNote(actor: Actor | null, input: unknown, photo?: { name: string; data: Uint8Array }): Promise<{ mail: SendOutcome }> {
+export async function createSiteChangeNote(
+  actor: Actor | null,
+  input: unknown,
+  photo?: { name: string; data: Uint8Array },
+): Promise<{ mail: SendOutcome }> {
   authorize(actor, "site-notes:create");
   const data = parseOrThrow(siteChangeSchema, input);
   const { revision, assessment, job } = await briefableRevision(actor, data.revisionId);
   let photoType: string | undefined;
   if (photo) {
-    if (photo.data.byteLength > 10 * 1024 * 1024) throw new AppError("payload_too_large", "Photos can be at most 10 MB");
+    if (photo.data.byteLength > 10 * 1024 * 1024)
+      throw new AppError("payload_too_large", "Photos can be at most 10 MB");
     const { fileTypeFromBuffer } = await import("file-type");
     photoType = (await fileTypeFromBuffer(photo.data))?.mime;
-    if (!photoType || !["image/jpeg", "image/png", "image/webp"].includes(photoType)) throw new AppError("unsupported_media_type", "Attach a photograph (JPEG, PNG or WebP)");
+    if (!photoType || !["image/jpeg", "image/png", "image/webp"].includes(photoType))
+      throw new AppError("unsupported_media_type", "Attach a photograph (JPEG, PNG or WebP)");
   }
   const db = await getDb();
   await db.transaction(async (tx) => {
     const file = photo && photoType ? await putFile(tx, actor.organisationId, photo.data, photoType) : null;
-    await tx.insert(siteChangeNotes).values({ organisationId: actor.organisationId, revisionId: revision.id, authorId: actor.id, authorName: actor.name, text: data.text, photoFileId: file?.id ?? null });
+    await tx.insert(siteChangeNotes).values({
+      organisationId: actor.organisationId,
+      revisionId: revision.id,
+      authorId: actor.id,
+      authorName: actor.name,
+      text: data.text,
+      photoFileId: file?.id ?? null,
+    });
     await tx.update(revisions).set({ needsReview: true }).where(eq(revisions.id, revision.id));
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.site-change", entityType: "revision", entityId: revision.id, details: { text: data.text, photo: !!file } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.site-change",
+      entityType: "revision",
+      entityId: revision.id,
+      details: { text: data.text, photo: !!file },
+    });
   });
-  const author = revision.authorId ? await db.query.users.findFirst({ where: eq(users.id, revision.authorId) }) : undefined;
+  const author = revision.authorId
+    ? await db.query.users.findFirst({ where: eq(users.id, revision.authorId) })
+    : undefined;
   if (!author) return { mail: { id: "", status: "failed", error: "The assessment has no author to tell" } };
   const body = renderMail({
     heading: `Site change: ${assessment.title}`,
-    paragraphs: [`Hello ${author.name},`, `${actor.name} reports that conditions at ${job.name} differ from revision ${revision.number}:`, data.text, "The revision is marked as needing review, and the next briefing shows this warning."],
-    action: { label: "Open the assessment", url: `${config().NEXTAUTH_URL.replace(/\/$/, "")}/revisions/${revision.id}` },
+    paragraphs: [
+      `Hello ${author.name},`,
+      `${actor.name} reports that conditions at ${job.name} differ from revision ${revision.number}:`,
+      data.text,
+      "The revision is marked as needing review, and the next briefing shows this warning.",
+    ],
+    action: {
+      label: "Open the assessment",
+      url: `${config().NEXTAUTH_URL.replace(/\/$/, "")}/revisions/${revision.id}`,
+    },
   });
-  return { mail: await sendMail({ organisationId: actor.organisationId, kind: "site-change", to: author.email, subject: `Site change reported: ${assessment.title}`, ...body }) };
+  return {
+    mail: await sendMail({
+      organisationId: actor.organisationId,
+      kind: "site-change",
+      to: author.email,
+      subject: `Site change reported: ${assessment.title}`,
+      ...body,
+    }),
+  };
 }
 
 /** Foremen of the organisation and the jobs each is assigned to (for the job form). */
@@ -218,8 +386,14 @@ export async function listForemen(actor: Actor | null, jobId: string) {
   const db = await getDb();
   const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
   if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
-  const foremen = await db.select({ id: users.id, name: users.name }).from(users).where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "foreman"), eq(users.active, true))).orderBy(asc(users.name));
-  const assigned = isUuid(jobId) ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId)) : [];
+  const foremen = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "foreman"), eq(users.active, true)))
+    .orderBy(asc(users.name));
+  const assigned = isUuid(jobId)
+    ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId))
+    : [];
   return foremen.map((f) => ({ ...f, assigned: assigned.some((a) => a.userId === f.id) }));
 }
 
@@ -232,18 +406,40 @@ export async function setJobForemen(actor: Actor | null, jobId: string, input: u
   if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
   const { foremanIds } = parseOrThrow(assignmentSchema, input);
   const valid = foremanIds.length
-    ? await db.select({ id: users.id }).from(users).where(and(inArray(users.id, foremanIds), eq(users.organisationId, actor.organisationId), eq(users.role, "foreman")))
+    ? await db
+        .select({ id: users.id })
+        .from(users)
+        .where(
+          and(inArray(users.id, foremanIds), eq(users.organisationId, actor.organisationId), eq(users.role, "foreman")),
+        )
     : [];
-  if (valid.length !== new Set(foremanIds).size) throw new AppError("validation", "Some fields need attention", [{ path: "foremanIds", message: "Choose foremen of your organisation" }]);
+  if (valid.length !== new Set(foremanIds).size)
+    throw new AppError("validation", "Some fields need attention", [
+      { path: "foremanIds", message: "Choose foremen of your organisation" },
+    ]);
   await db.transaction(async (tx) => {
     await tx.delete(jobAssignments).where(eq(jobAssignments.jobId, jobId));
-    if (valid.length) await tx.insert(jobAssignments).values(valid.map((v) => ({ organisationId: actor.organisationId, jobId, userId: v.id })));
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "job.foremen-assigned", entityType: "job", entityId: jobId, details: { foremanIds: valid.map((v) => v.id) } });
+    if (valid.length)
+      await tx
+        .insert(jobAssignments)
+        .values(valid.map((v) => ({ organisationId: actor.organisationId, jobId, userId: v.id })));
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "job.foremen-assigned",
+      entityType: "job",
+      entityId: jobId,
+      details: { foremanIds: valid.map((v) => v.id) },
+    });
   });
 }
 
 /** The briefing sheet PDF of a revision; with a briefing's record when one is named. */
-export async function briefingSheetPdf(actor: Actor | null, revisionId: string, briefingId?: string): Promise<{ filename: string; data: Uint8Array }> {
+export async function briefingSheetPdf(
+  actor: Actor | null,
+  revisionId: string,
+  briefingId?: string,
+): Promise<{ filename: string; data: Uint8Array }> {
   const { script, title, job, revision, siteChanges } = await getBriefingScript(actor, revisionId);
   const { buildBriefingSheet } = await import("../pack/briefing-sheet");
   const { packFonts } = await import("../pack/render");
@@ -251,9 +447,17 @@ export async function briefingSheetPdf(actor: Actor | null, revisionId: string, 
   if (briefingId) {
     const r = await getBriefingRecord(actor, briefingId);
     if (r.briefing.revisionId !== revisionId) throw AppError.notFound("Briefing");
-    record = { place: r.briefing.place, startedAt: r.briefing.startedAt, foremanName: r.briefing.foremanName, attendees: r.attendees };
+    record = {
+      place: r.briefing.place,
+      startedAt: r.briefing.startedAt,
+      foremanName: r.briefing.foremanName,
+      attendees: r.attendees,
+    };
   }
-  const data = await buildBriefingSheet({ title, jobName: job.name, revisionNumber: revision.number, script, siteChanges, record }, await packFonts());
+  const data = await buildBriefingSheet(
+    { title, jobName: job.name, revisionNumber: revision.number, script, siteChanges, record },
+    await packFonts(),
+  );
   return { filename: `briefing-${title.replace(/[^A-Za-z0-9]+/g, "-").slice(0, 50)}-rev${revision.number}.pdf`, data };
 }
 
@@ -263,8 +467,19 @@ export async function emailBriefingSheet(actor: Actor | null, revisionId: string
   const { title, job } = await getBriefingScript(actor, revisionId);
   const body = renderMail({
     heading: `Briefing sheet: ${title}`,
-    paragraphs: [`Hello ${actor!.name},`, `The briefing sheet for ${job.name} is attached, for when the signal is poor at the access point.`],
-    footnote: "Brief from the approved revision only. If conditions differ on site, record a site change note in Heftwise.",
+    paragraphs: [
+      `Hello ${actor!.name},`,
+      `The briefing sheet for ${job.name} is attached, for when the signal is poor at the access point.`,
+    ],
+    footnote:
+      "Brief from the approved revision only. If conditions differ on site, record a site change note in Heftwise.",
   });
-  return sendMail({ organisationId: actor!.organisationId, kind: "briefing-sheet", to: actor!.email, subject: `Briefing sheet: ${title}`, attachments: [{ filename: sheet.filename, content: Buffer.from(sheet.data), contentType: "application/pdf" }], ...body });
+  return sendMail({
+    organisationId: actor!.organisationId,
+    kind: "briefing-sheet",
+    to: actor!.email,
+    subject: `Briefing sheet: ${title}`,
+    attachments: [{ filename: sheet.filename, content: Buffer.from(sheet.data), contentType: "application/pdf" }],
+    ...body,
+  });
 }

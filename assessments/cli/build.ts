@@ -4,7 +4,14 @@ import { existsSync, readdirSync, statSync } from "node:fs";
 import path from "node:path";
 
 const SOURCE_DIRS = ["app", "assessments", "db", "lib", "fonts", "public"];
-const SOURCE_FILES = ["next.config.ts", "package.json", "postcss.config.mjs", "instrumentation.ts", "proxy.ts", "tsconfig.json"];
+const SOURCE_FILES = [
+  "next.config.ts",
+  "package.json",
+  "postcss.config.mjs",
+  "instrumentation.ts",
+  "proxy.ts",
+  "tsconfig.json",
+];
 
 function newestSourceTime(root: string): number {
   let newest = 0;
@@ -23,7 +30,11 @@ export function buildIfNeeded(env: NodeJS.ProcessEnv, { force = true, root = pro
   const buildId = path.join(root, ".next", "BUILD_ID");
   if (existsSync(buildId) && (!force || statSync(buildId).mtimeMs >= newestSourceTime(root))) return;
   console.log("Building Heftwise (first run, or the sources changed)…");
-  const result = spawnSync(process.execPath, [path.join(root, "node_modules", "next", "dist", "bin", "next"), "build"], { stdio: "inherit", env });
+  const result = spawnSync(
+    process.execPath,
+    [path.join(root, "node_modules", "next", "dist", "bin", "next"), "build"],
+    { stdio: "inherit", env },
+  );
   if (result.status !== 0) {
     console.error("The build failed; see above.");
     process.exit(result.status ?? 1);

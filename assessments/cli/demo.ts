@@ -53,7 +53,12 @@ async function main() {
   };
   // The seed below runs in this process: it must see the server's configuration (the signing key's
   // passphrase is derived from NEXTAUTH_SECRET).
-  Object.assign(process.env, { HEFTWISE_DATA_DIR: dataDir, NEXTAUTH_URL: origin, NEXTAUTH_SECRET: env.NEXTAUTH_SECRET, SMTP_URL: env.SMTP_URL });
+  Object.assign(process.env, {
+    HEFTWISE_DATA_DIR: dataDir,
+    NEXTAUTH_URL: origin,
+    NEXTAUTH_SECRET: env.NEXTAUTH_SECRET,
+    SMTP_URL: env.SMTP_URL,
+  });
 
   buildIfNeeded(env, { force: !args["no-build-check"] });
 
@@ -68,7 +73,10 @@ async function main() {
   const fake = await startMailFake({ smtpPort: Number(args["smtp-port"]), httpPort: Number(args["inbox-port"]) });
 
   // The production server (server.ts): Next.js behind a server that cleans forwarded addresses.
-  const server = spawn(process.execPath, ["--import", "tsx", path.join(root, "server.ts")], { stdio: ["ignore", "pipe", "inherit"], env: { ...env, PORT: String(port), HOSTNAME: "127.0.0.1" } });
+  const server = spawn(process.execPath, ["--import", "tsx", path.join(root, "server.ts")], {
+    stdio: ["ignore", "pipe", "inherit"],
+    env: { ...env, PORT: String(port), HOSTNAME: "127.0.0.1" },
+  });
   server.stdout.on("data", (chunk: Buffer) => {
     process.stdout.write(chunk);
     if (chunk.toString().includes("Ready")) printWelcome(seeded.created);

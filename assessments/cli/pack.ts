@@ -40,7 +40,11 @@ async function main(out: string) {
     const approver = await actor("approver");
     const revisionId = (await listAssessments(adviser)).find((a) => a.title.includes("lorry-loader"))!.revisionId;
     const draft = await getRevision(adviser, revisionId);
-    await submitRevision(adviser, revisionId, { version: draft.revision.version, approverId: approver.id, reviewDate: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10) });
+    await submitRevision(adviser, revisionId, {
+      version: draft.revision.version,
+      approverId: approver.id,
+      reviewDate: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10),
+    });
     const submitted = await getRevision(adviser, revisionId);
     await approveRevision(approver, revisionId, {
       version: submitted.revision.version,

@@ -23,7 +23,8 @@ export const DEMO_JOBS = [
     mileage: "14m 22ch",
     accessPoint: "Gorsey Lane access gate, 14m 30ch, up side; van parking on the hardstanding",
     nearestHospital: "Hollin Vale General Hospital, emergency department, Marsh Road (8 km)",
-    emergencyArrangements: "Person in charge calls 999 and the signaller; first-aider and kit in the welfare van at the access gate.",
+    emergencyArrangements:
+      "Person in charge calls 999 and the signaller; first-aider and kit in the welfare van at the access gate.",
     siteContactName: "Tamsin Greyholt",
     siteContactPhone: "07700 900418",
   },
@@ -44,21 +45,147 @@ export const DEMO_JOBS = [
 type Grip = "good" | "fair" | "poor";
 type Source = "weighed" | "datasheet" | "estimated";
 
-export const DEMO_COMPONENTS: { name: string; massKg: number; lengthMm: number; widthMm: number; heightMm: number; grip: Grip; massSource: Source; notes?: string }[] = [
-  { name: "Modular equipment base: leg section", massKg: 18, lengthMm: 600, widthMm: 150, heightMm: 150, grip: "fair", massSource: "datasheet" },
-  { name: "Modular equipment base: top frame", massKg: 24, lengthMm: 900, widthMm: 600, heightMm: 80, grip: "poor", massSource: "datasheet", notes: "Sharp edges at the cleats: gloves" },
-  { name: "Modular equipment base: ground screw", massKg: 22, lengthMm: 1500, widthMm: 110, heightMm: 110, grip: "fair", massSource: "datasheet" },
-  { name: "Concrete cable trough, 1 m", massKg: 42, lengthMm: 1000, widthMm: 250, heightMm: 200, grip: "poor", massSource: "datasheet", notes: "Two-person lift or lifting tongs" },
-  { name: "Concrete trough lid, 1 m", massKg: 14, lengthMm: 1000, widthMm: 250, heightMm: 50, grip: "poor", massSource: "weighed" },
-  { name: "GRP cable trough, 1 m", massKg: 9, lengthMm: 1000, widthMm: 250, heightMm: 200, grip: "fair", massSource: "datasheet" },
-  { name: "Location cabinet, two-door, pre-assembled", massKg: 380, lengthMm: 1200, widthMm: 650, heightMm: 1600, grip: "poor", massSource: "datasheet", notes: "Lift with equipment only; four lifting eyes on the roof" },
-  { name: "Precast chamber ring, 900 mm", massKg: 640, lengthMm: 1100, widthMm: 1100, heightMm: 500, grip: "poor", massSource: "datasheet", notes: "Three-leg chain sling on cast-in anchors" },
-  { name: "Armoured cable drum, 100 m", massKg: 160, lengthMm: 800, widthMm: 500, heightMm: 800, grip: "poor", massSource: "estimated", notes: "Roll on a drum trailer; do not carry" },
-  { name: "Signal post base plate", massKg: 28, lengthMm: 500, widthMm: 500, heightMm: 25, grip: "poor", massSource: "weighed" },
-  { name: "Galvanised walkway panel", massKg: 19, lengthMm: 1200, widthMm: 600, heightMm: 40, grip: "fair", massSource: "datasheet" },
-  { name: "Sealed battery set with carry handles", massKg: 31, lengthMm: 520, widthMm: 240, heightMm: 220, grip: "good", massSource: "datasheet" },
-  { name: "Axle counter head kit", massKg: 6, lengthMm: 400, widthMm: 300, heightMm: 200, grip: "good", massSource: "datasheet" },
-  { name: "Route marker post", massKg: 12, lengthMm: 1200, widthMm: 100, heightMm: 100, grip: "fair", massSource: "estimated" },
+export const DEMO_COMPONENTS: {
+  name: string;
+  massKg: number;
+  lengthMm: number;
+  widthMm: number;
+  heightMm: number;
+  grip: Grip;
+  massSource: Source;
+  notes?: string;
+}[] = [
+  {
+    name: "Modular equipment base: leg section",
+    massKg: 18,
+    lengthMm: 600,
+    widthMm: 150,
+    heightMm: 150,
+    grip: "fair",
+    massSource: "datasheet",
+  },
+  {
+    name: "Modular equipment base: top frame",
+    massKg: 24,
+    lengthMm: 900,
+    widthMm: 600,
+    heightMm: 80,
+    grip: "poor",
+    massSource: "datasheet",
+    notes: "Sharp edges at the cleats: gloves",
+  },
+  {
+    name: "Modular equipment base: ground screw",
+    massKg: 22,
+    lengthMm: 1500,
+    widthMm: 110,
+    heightMm: 110,
+    grip: "fair",
+    massSource: "datasheet",
+  },
+  {
+    name: "Concrete cable trough, 1 m",
+    massKg: 42,
+    lengthMm: 1000,
+    widthMm: 250,
+    heightMm: 200,
+    grip: "poor",
+    massSource: "datasheet",
+    notes: "Two-person lift or lifting tongs",
+  },
+  {
+    name: "Concrete trough lid, 1 m",
+    massKg: 14,
+    lengthMm: 1000,
+    widthMm: 250,
+    heightMm: 50,
+    grip: "poor",
+    massSource: "weighed",
+  },
+  {
+    name: "GRP cable trough, 1 m",
+    massKg: 9,
+    lengthMm: 1000,
+    widthMm: 250,
+    heightMm: 200,
+    grip: "fair",
+    massSource: "datasheet",
+  },
+  {
+    name: "Location cabinet, two-door, pre-assembled",
+    massKg: 380,
+    lengthMm: 1200,
+    widthMm: 650,
+    heightMm: 1600,
+    grip: "poor",
+    massSource: "datasheet",
+    notes: "Lift with equipment only; four lifting eyes on the roof",
+  },
+  {
+    name: "Precast chamber ring, 900 mm",
+    massKg: 640,
+    lengthMm: 1100,
+    widthMm: 1100,
+    heightMm: 500,
+    grip: "poor",
+    massSource: "datasheet",
+    notes: "Three-leg chain sling on cast-in anchors",
+  },
+  {
+    name: "Armoured cable drum, 100 m",
+    massKg: 160,
+    lengthMm: 800,
+    widthMm: 500,
+    heightMm: 800,
+    grip: "poor",
+    massSource: "estimated",
+    notes: "Roll on a drum trailer; do not carry",
+  },
+  {
+    name: "Signal post base plate",
+    massKg: 28,
+    lengthMm: 500,
+    widthMm: 500,
+    heightMm: 25,
+    grip: "poor",
+    massSource: "weighed",
+  },
+  {
+    name: "Galvanised walkway panel",
+    massKg: 19,
+    lengthMm: 1200,
+    widthMm: 600,
+    heightMm: 40,
+    grip: "fair",
+    massSource: "datasheet",
+  },
+  {
+    name: "Sealed battery set with carry handles",
+    massKg: 31,
+    lengthMm: 520,
+    widthMm: 240,
+    heightMm: 220,
+    grip: "good",
+    massSource: "datasheet",
+  },
+  {
+    name: "Axle counter head kit",
+    massKg: 6,
+    lengthMm: 400,
+    widthMm: 300,
+    heightMm: 200,
+    grip: "good",
+    massSource: "datasheet",
+  },
+  {
+    name: "Route marker post",
+    massKg: 12,
+    lengthMm: 1200,
+    widthMm: 100,
+    heightMm: 100,
+    grip: "fair",
+    massSource: "estimated",
+  },
 ];
 
 /** The demo lift team (invented people; competence references in an invented scheme). */
@@ -90,5 +217,6 @@ export const DEMO_LINESIDE = {
   responsibleCompetence: "SSOW-PL 3318",
   planningRef: "WHV-SSOW-2026-0417",
   accessPoint: "Gorsey Lane access gate, 14m 30ch, up side",
-  positionsOfSafety: "Behind the temporary fence at any point along the base position; the cess walkway beyond the fence line is the position of safety on the walk in.",
+  positionsOfSafety:
+    "Behind the temporary fence at any point along the base position; the cess walkway beyond the fence line is the position of safety on the walk in.",
 };

@@ -10,7 +10,16 @@ import { drawnSignaturePng } from "@/lib/png";
 import { addStarterHazards } from "../hazard-library/service";
 import { approveRevision, submitRevision } from "../revisions/approval";
 import { createAssessment, getRevision, saveRevision } from "../revisions/service";
-import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_JOBS, DEMO_LIFT_TEAM, DEMO_LINESIDE, DEMO_ORGANISATION, DEMO_PASSWORD, DEMO_USERS } from "./scenario";
+import {
+  demoLiftSchedule,
+  DEMO_COMPONENTS,
+  DEMO_JOBS,
+  DEMO_LIFT_TEAM,
+  DEMO_LINESIDE,
+  DEMO_ORGANISATION,
+  DEMO_PASSWORD,
+  DEMO_USERS,
+} from "./scenario";
 
 const DEMO_ADVISER_EMAIL = "adviser@brackenfold.example";
 const DEMO_APPROVER_EMAIL = "approver@brackenfold.example";
@@ -30,9 +39,14 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
       .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash })))
       .returning();
     const adviser = people.find((p) => p.role === "adviser")!;
-    const jobRows = await tx.insert(jobs).values(DEMO_JOBS.map((j) => ({ ...j, organisationId: org.id, createdBy: adviser.id }))).returning({ id: jobs.id });
+    const jobRows = await tx
+      .insert(jobs)
+      .values(DEMO_JOBS.map((j) => ({ ...j, organisationId: org.id, createdBy: adviser.id })))
+      .returning({ id: jobs.id });
     const foreman = people.find((p) => p.role === "foreman")!;
-    await tx.insert(jobAssignments).values(jobRows.map((j) => ({ organisationId: org.id, jobId: j.id, userId: foreman.id })));
+    await tx
+      .insert(jobAssignments)
+      .values(jobRows.map((j) => ({ organisationId: org.id, jobId: j.id, userId: foreman.id })));
     await tx.insert(components).values(DEMO_COMPONENTS.map((c) => ({ ...c, organisationId: org.id })));
     return { created: true, organisationId: org.id };
   });
@@ -47,11 +61,21 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
 async function seedDemoAssessments(organisationId: string) {
   const db = await getDb();
   const [adviserRow] = await db.select().from(users).where(eq(users.email, DEMO_ADVISER_EMAIL));
-  const adviser = { id: adviserRow.id, organisationId, role: adviserRow.role, name: adviserRow.name, email: adviserRow.email };
+  const adviser = {
+    id: adviserRow.id,
+    organisationId,
+    role: adviserRow.role,
+    name: adviserRow.name,
+    email: adviserRow.email,
+  };
   const jobRows = await db.select().from(jobs).where(eq(jobs.organisationId, organisationId));
   const hollinVale = jobRows.find((j) => j.name === DEMO_JOBS[0].name)!;
   const carrowby = jobRows.find((j) => j.name === DEMO_JOBS[1].name)!;
-  const crane = await createAssessment(adviser, { jobId: hollinVale.id, title: "Cabinet and chamber ring by lorry-loader crane", templateId: "cabinet-crane" });
+  const crane = await createAssessment(adviser, {
+    jobId: hollinVale.id,
+    title: "Cabinet and chamber ring by lorry-loader crane",
+    templateId: "cabinet-crane",
+  });
   const current = await getRevision(adviser, crane.revisionId);
   const content = structuredClone(current.content);
   const team = DEMO_LIFT_TEAM;
@@ -70,14 +94,32 @@ async function seedDemoAssessments(organisationId: string) {
   ];
   Object.assign(content.lineside, DEMO_LINESIDE);
   await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
-  await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base by hand at Carrowby", templateId: "equipment-base" });
+  await createAssessment(adviser, {
+    jobId: carrowby.id,
+    title: "Equipment base by hand at Carrowby",
+    templateId: "equipment-base",
+  });
   // The lineside methods at work: a braked trolley on the down gradient, parts passed into an excavation, ground bearing.
-  await createAssessment(adviser, { jobId: carrowby.id, title: "Equipment base and cable chamber at Carrowby", templateId: "lineside-base" });
+  await createAssessment(adviser, {
+    jobId: carrowby.id,
+    title: "Equipment base and cable chamber at Carrowby",
+    templateId: "lineside-base",
+  });
 
   // An approved revision for the foreman to brief from, at Hollin Vale (approved without e-mails).
   const [approverRow] = await db.select().from(users).where(eq(users.email, DEMO_APPROVER_EMAIL));
-  const approver = { id: approverRow.id, organisationId, role: approverRow.role, name: approverRow.name, email: approverRow.email };
-  const base = await createAssessment(adviser, { jobId: hollinVale.id, title: "Equipment base by hand at Hollin Vale", templateId: "equipment-base" });
+  const approver = {
+    id: approverRow.id,
+    organisationId,
+    role: approverRow.role,
+    name: approverRow.name,
+    email: approverRow.email,
+  };
+  const base = await createAssessment(adviser, {
+    jobId: hollinVale.id,
+    title: "Equipment base by hand at Hollin Vale",
+    templateId: "equipment-base",
+  });
   const baseDraft = await getRevision(adviser, base.revisionId);
   const baseContent = structuredClone(baseDraft.content);
   // The ground screws go in with the powered driver's own lifting frame at this site: no hand lift.
@@ -88,10 +130,45 @@ async function seedDemoAssessments(organisationId: string) {
   ];
   // Working beside the line at Hollin Vale: the arrangement, its owner, the permit and the checks.
   Object.assign(baseContent.lineside, DEMO_LINESIDE);
-  baseContent.permits = [{ kind: "dig", description: "", reference: "PTD-HV-0142", issuedBy: "Wendmoor Railway site permit office", validFrom: demoDay(0), validTo: demoDay(60) }];
-  Object.assign(baseContent.buriedServices, { recordsObtained: true, recordsRef: "SR-WHV-2291", scanned: true, scannedBy: "Kieran Lusk", scanDate: demoDay(-7), trialHoles: "One hand-dug trial hole at the cable route marker: signalling cable at 450 mm, 0.8 m west of the base." });
-  const saved = await saveRevision(adviser, base.revisionId, { version: baseDraft.revision.version, content: baseContent });
-  await submitRevision(adviser, base.revisionId, { version: saved.version, approverId: approver.id, reviewDate: demoReviewDate() }, { notify: false });
+  baseContent.permits = [
+    {
+      kind: "dig",
+      description: "",
+      reference: "PTD-HV-0142",
+      issuedBy: "Wendmoor Railway site permit office",
+      validFrom: demoDay(0),
+      validTo: demoDay(60),
+    },
+  ];
+  Object.assign(baseContent.buriedServices, {
+    recordsObtained: true,
+    recordsRef: "SR-WHV-2291",
+    scanned: true,
+    scannedBy: "Kieran Lusk",
+    scanDate: demoDay(-7),
+    trialHoles:
+      "One hand-dug trial hole at the cable route marker: signalling cable at 450 mm, 0.8 m west of the base.",
+  });
+  const saved = await saveRevision(adviser, base.revisionId, {
+    version: baseDraft.revision.version,
+    content: baseContent,
+  });
+  await submitRevision(
+    adviser,
+    base.revisionId,
+    { version: saved.version, approverId: approver.id, reviewDate: demoReviewDate() },
+    { notify: false },
+  );
   const submitted = await getRevision(adviser, base.revisionId);
-  await approveRevision(approver, base.revisionId, { version: submitted.revision.version, name: approver.name, role: "Contracts manager", signature: `data:image/png;base64,${drawnSignaturePng(5).toString("base64")}` }, { notify: false });
+  await approveRevision(
+    approver,
+    base.revisionId,
+    {
+      version: submitted.revision.version,
+      name: approver.name,
+      role: "Contracts manager",
+      signature: `data:image/png;base64,${drawnSignaturePng(5).toString("base64")}`,
+    },
+    { notify: false },
+  );
 }

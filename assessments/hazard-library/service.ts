@@ -14,8 +14,6 @@ import type { Hazard } from "../method-statement/content";
 import { libraryEntrySchema, type LibraryEntry, type LibraryEntryInput } from "./schemas";
 import { STARTER_HAZARDS } from "./starter";
 
-
-
 const toEntry = (row: typeof hazardLibrary.$inferSelect): LibraryEntry => ({
   id: row.id,
   hazard: row.hazard,
@@ -40,7 +38,11 @@ export async function addStarterHazards(tx: Queryable, organisationId: string): 
 export async function listLibrary(actor: Actor | null): Promise<LibraryEntry[]> {
   authorize(actor, "hazard-library:read");
   const db = await getDb();
-  const rows = await db.select().from(hazardLibrary).where(eq(hazardLibrary.organisationId, actor.organisationId)).orderBy(asc(hazardLibrary.hazard));
+  const rows = await db
+    .select()
+    .from(hazardLibrary)
+    .where(eq(hazardLibrary.organisationId, actor.organisationId))
+    .orderBy(asc(hazardLibrary.hazard));
   return rows.map(toEntry);
 }
 
@@ -59,11 +61,22 @@ export async function getEntry(actor: Actor | null, id: string): Promise<{ id: s
   authorize(actor, "hazard-library:manage");
   const row = await ownEntry(actor, id);
   const { hazard, whoIsAtRisk, likelihoodBefore, severityBefore, likelihoodAfter, severityAfter } = row;
-  const input = { hazard, whoIsAtRisk, likelihoodBefore, severityBefore, controls: row.controls as Hazard["controls"], likelihoodAfter, severityAfter };
+  const input = {
+    hazard,
+    whoIsAtRisk,
+    likelihoodBefore,
+    severityBefore,
+    controls: row.controls as Hazard["controls"],
+    likelihoodAfter,
+    severityAfter,
+  };
   return { id, input };
 }
 
-const duplicate = () => new AppError("conflict", "The library already has a hazard of that name", [{ path: "hazard", message: "Already in the library: change the name, or edit that entry" }]);
+const duplicate = () =>
+  new AppError("conflict", "The library already has a hazard of that name", [
+    { path: "hazard", message: "Already in the library: change the name, or edit that entry" },
+  ]);
 
 export async function createEntry(actor: Actor | null, input: unknown): Promise<LibraryEntry> {
   authorize(actor, "hazard-library:manage");
@@ -71,8 +84,17 @@ export async function createEntry(actor: Actor | null, input: unknown): Promise<
   const db = await getDb();
   try {
     return await db.transaction(async (tx) => {
-      const [row] = await tx.insert(hazardLibrary).values({ ...data, organisationId: actor.organisationId }).returning();
-      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "hazard-library.added", entityType: "hazard", entityId: row.id });
+      const [row] = await tx
+        .insert(hazardLibrary)
+        .values({ ...data, organisationId: actor.organisationId })
+        .returning();
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "hazard-library.added",
+        entityType: "hazard",
+        entityId: row.id,
+      });
       return toEntry(row);
     });
   } catch (e) {
@@ -93,7 +115,13 @@ export async function updateEntry(actor: Actor | null, id: string, input: unknow
         .set({ ...data, updatedAt: new Date() })
         .where(and(eq(hazardLibrary.id, id), eq(hazardLibrary.organisationId, actor.organisationId)))
         .returning();
-      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "hazard-library.changed", entityType: "hazard", entityId: id });
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "hazard-library.changed",
+        entityType: "hazard",
+        entityId: id,
+      });
       return toEntry(row);
     });
   } catch (e) {
@@ -107,8 +135,16 @@ export async function deleteEntry(actor: Actor | null, id: string): Promise<void
   await ownEntry(actor, id);
   const db = await getDb();
   await db.transaction(async (tx) => {
-    await tx.delete(hazardLibrary).where(and(eq(hazardLibrary.id, id), eq(hazardLibrary.organisationId, actor.organisationId)));
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "hazard-library.removed", entityType: "hazard", entityId: id });
+    await tx
+      .delete(hazardLibrary)
+      .where(and(eq(hazardLibrary.id, id), eq(hazardLibrary.organisationId, actor.organisationId)));
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "hazard-library.removed",
+      entityType: "hazard",
+      entityId: id,
+    });
   });
 }
 
@@ -118,7 +154,14 @@ export async function restoreStarter(actor: Actor | null): Promise<number> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const added = await addStarterHazards(tx, actor.organisationId);
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "hazard-library.starter-added", entityType: "organisation", entityId: actor.organisationId, details: { added } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "hazard-library.starter-added",
+      entityType: "organisation",
+      entityId: actor.organisationId,
+      details: { added },
+    });
     return added;
   });
 }

@@ -40,7 +40,10 @@ export async function countJobs(actor: Actor | null): Promise<number> {
   authorize(actor, "jobs:read");
   return cachedRead(readKey("job-count", actor.organisationId), async () => {
     const db = await getDb();
-    const [{ total }] = await db.select({ total: count() }).from(jobs).where(eq(jobs.organisationId, actor.organisationId));
+    const [{ total }] = await db
+      .select({ total: count() })
+      .from(jobs)
+      .where(eq(jobs.organisationId, actor.organisationId));
     return Number(total);
   });
 }

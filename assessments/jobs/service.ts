@@ -19,8 +19,17 @@ export async function createJob(actor: Actor | null, input: unknown) {
   const data = parseOrThrow(jobSchema, input);
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [job] = await tx.insert(jobs).values({ ...data, organisationId: actor.organisationId, createdBy: actor.id }).returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "job.created", entityType: "job", entityId: job.id });
+    const [job] = await tx
+      .insert(jobs)
+      .values({ ...data, organisationId: actor.organisationId, createdBy: actor.id })
+      .returning();
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "job.created",
+      entityType: "job",
+      entityId: job.id,
+    });
     return job;
   });
 }
@@ -36,7 +45,13 @@ export async function updateJob(actor: Actor | null, jobId: string, input: unkno
       .set({ ...data, updatedAt: new Date() })
       .where(and(eq(jobs.id, jobId), eq(jobs.organisationId, actor.organisationId)))
       .returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "job.updated", entityType: "job", entityId: job.id });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "job.updated",
+      entityType: "job",
+      entityId: job.id,
+    });
     return job;
   });
 }

@@ -41,6 +41,13 @@ export function checkExamination(exam: Examination, liftDate: string): Examinati
   const daysLeft = (parse(dueDate) - parse(liftDate)) / DAY_MS;
   // An examination after the lift says nothing of the equipment on the day; the one before it is
   // what covers the lift. Due on the lift date itself is still in date that day; any later is expired.
-  const status = parse(exam.lastExamined) > parse(liftDate) ? "after-lift" : daysLeft < 0 ? "expired" : daysLeft <= DUE_SOON_DAYS ? "due-soon" : "in-date";
+  const status =
+    parse(exam.lastExamined) > parse(liftDate)
+      ? "after-lift"
+      : daysLeft < 0
+        ? "expired"
+        : daysLeft <= DUE_SOON_DAYS
+          ? "due-soon"
+          : "in-date";
   return { ...exam, dueDate, status };
 }

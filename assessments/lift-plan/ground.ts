@@ -11,7 +11,11 @@
  */
 export const GROUND_TYPES = {
   "dense-gravel": { label: "dense gravel, or dense sand and gravel", presumedKpa: 600, range: "> 600 kPa" },
-  "medium-dense-gravel": { label: "medium dense gravel, or medium dense sand and gravel", presumedKpa: 200, range: "200–600 kPa" },
+  "medium-dense-gravel": {
+    label: "medium dense gravel, or medium dense sand and gravel",
+    presumedKpa: 200,
+    range: "200–600 kPa",
+  },
   "loose-gravel": { label: "loose gravel, or loose sand and gravel", presumedKpa: null, range: "< 200 kPa" },
   "compact-sand": { label: "compact sand", presumedKpa: 300, range: "> 300 kPa" },
   "medium-dense-sand": { label: "medium dense sand", presumedKpa: 100, range: "100–300 kPa" },
@@ -25,7 +29,8 @@ export const GROUND_TYPES = {
 export type GroundType = keyof typeof GROUND_TYPES;
 export const GROUND_TYPE_KEYS = Object.keys(GROUND_TYPES) as [GroundType, ...GroundType[]];
 
-export const GROUND_SOURCE = "BS 8004:1986 Table 1, presumed allowable bearing values (withdrawn; from memory), lower end of each range";
+export const GROUND_SOURCE =
+  "BS 8004:1986 Table 1, presumed allowable bearing values (withdrawn; from memory), lower end of each range";
 export const BEARING_MARGIN = 0.8;
 
 export interface GroundBearing {
@@ -53,5 +58,11 @@ export function checkGroundBearing(g: GroundBearing): GroundBearingResult {
   const allowableKpa = g.allowableKpa ?? presumed;
   const allowableFrom = g.allowableKpa !== undefined ? "entered" : presumed !== null ? "presumed" : null;
   const smallest = allowableKpa ? Math.ceil(Math.sqrt(g.outriggerForceKn / allowableKpa) * 20) / 20 : null;
-  return { pressureKpa, allowableKpa, allowableFrom, smallestSquareMatM: smallest, ratio: allowableKpa ? pressureKpa / allowableKpa : null };
+  return {
+    pressureKpa,
+    allowableKpa,
+    allowableFrom,
+    smallestSquareMatM: smallest,
+    ratio: allowableKpa ? pressureKpa / allowableKpa : null,
+  };
 }

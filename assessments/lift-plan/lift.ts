@@ -8,14 +8,30 @@ import { fmt } from "../rules/format";
 import type { Band, Reason, ResultBase, Warning } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
 import { checkExamination, type Examination, type ExaminationResult } from "./examinations";
-import { BEARING_MARGIN, checkGroundBearing, GROUND_SOURCE, GROUND_TYPES, type GroundBearing, type GroundBearingResult } from "./ground";
-import { CHOKE_FACTOR, HITCH_LABELS, legsSharing, legTension, modeFactor, SINGLE_SLING_HITCHES, type Hitch } from "./sling";
+import {
+  BEARING_MARGIN,
+  checkGroundBearing,
+  GROUND_SOURCE,
+  GROUND_TYPES,
+  type GroundBearing,
+  type GroundBearingResult,
+} from "./ground";
+import {
+  CHOKE_FACTOR,
+  HITCH_LABELS,
+  legsSharing,
+  legTension,
+  modeFactor,
+  SINGLE_SLING_HITCHES,
+  type Hitch,
+} from "./sling";
 
 export const LIFT_SOURCES = {
   loler: "LOLER 1998 reg. 8 (planning) and reg. 9 (thorough examination; intervals from memory)",
   bs7121: "BS 7121-1:2016, Code of practice for safe use of cranes",
   sling: "EN 818-4 uniform-load method, mode factors as published in suppliers' tables",
-  hitches: "Choked, basket and endless mode factors as tabled in EN 1492-1 and EN 818-4 suppliers' tables (from memory)",
+  hitches:
+    "Choked, basket and endless mode factors as tabled in EN 1492-1 and EN 818-4 suppliers' tables (from memory)",
   policy: "Heftwise policy (see DEVELOPERS.md, Lift plan policy); no published source",
 } as const;
 
@@ -33,7 +49,13 @@ export const COMPLEX_FACTORS = {
 export type ComplexFactor = keyof typeof COMPLEX_FACTORS;
 
 /** Heftwise policy thresholds for equipment utilisation (fraction of rated capacity at the radius). */
-export const UTILISATION = { clearUpTo: 0.75, watchUpTo: 0.9, actUpTo: 1.0, standardAbove: 0.5, complexAbove: 0.9 } as const;
+export const UTILISATION = {
+  clearUpTo: 0.75,
+  watchUpTo: 0.9,
+  actUpTo: 1.0,
+  standardAbove: 0.5,
+  complexAbove: 0.9,
+} as const;
 /** Heftwise policy: a forecast above 80 % of the in-service wind limit is flagged. */
 export const WIND_MARGIN = 0.8;
 
@@ -134,19 +156,35 @@ export function scoreLift(req: LiftRequest): LiftResult {
 
   // Equipment
   const utilisationBand: Band =
-    utilisation <= UTILISATION.clearUpTo ? "clear" : utilisation <= UTILISATION.watchUpTo ? "watch" : utilisation <= UTILISATION.actUpTo ? "act" : "stop";
+    utilisation <= UTILISATION.clearUpTo
+      ? "clear"
+      : utilisation <= UTILISATION.watchUpTo
+        ? "watch"
+        : utilisation <= UTILISATION.actUpTo
+          ? "act"
+          : "stop";
   bands.push(utilisationBand);
   reasons.push({
     text: `Hook load ${fmt(hookLoad)} kg (load ${fmt(req.load)} + rigging ${fmt(req.riggingMass)} + hook block ${fmt(req.hookBlockMass)}) is ${fmt(utilisation * 100, 0)} % of the rated capacity of ${fmt(req.ratedCapacity)} kg${req.radiusM !== undefined ? ` at ${fmt(req.radiusM, 1)} m` : ""}.`,
     source: `${LIFT_SOURCES.bs7121}; bands by utilisation: ${LIFT_SOURCES.policy}`,
   });
   if (utilisation > UTILISATION.actUpTo)
-    warnings.push({ field: "ratedCapacity", message: "The hook load exceeds the rated capacity at this radius: do not lift. Use a bigger machine or a shorter radius." });
+    warnings.push({
+      field: "ratedCapacity",
+      message:
+        "The hook load exceeds the rated capacity at this radius: do not lift. Use a bigger machine or a shorter radius.",
+    });
   else if (utilisation > UTILISATION.watchUpTo)
-    warnings.push({ field: "ratedCapacity", message: `Above ${fmt(UTILISATION.watchUpTo * 100, 0)} % of rated capacity: little margin for a wrong weight or radius. Confirm both.` });
+    warnings.push({
+      field: "ratedCapacity",
+      message: `Above ${fmt(UTILISATION.watchUpTo * 100, 0)} % of rated capacity: little margin for a wrong weight or radius. Confirm both.`,
+    });
   if (req.radiusM !== undefined && req.maxRadiusM !== undefined && req.radiusM > req.maxRadiusM) {
     bands.push("stop");
-    warnings.push({ field: "radiusM", message: `The planned radius ${fmt(req.radiusM, 1)} m is beyond the machine's maximum radius of ${fmt(req.maxRadiusM, 1)} m.` });
+    warnings.push({
+      field: "radiusM",
+      message: `The planned radius ${fmt(req.radiusM, 1)} m is beyond the machine's maximum radius of ${fmt(req.maxRadiusM, 1)} m.`,
+    });
   }
 
   // Sling
@@ -156,12 +194,19 @@ export function scoreLift(req: LiftRequest): LiftResult {
     source: hitch === "straight" ? LIFT_SOURCES.sling : `${LIFT_SOURCES.sling}; ${LIFT_SOURCES.hitches}`,
   });
   if (marked === undefined)
-    warnings.push({ field: "sling.markedWll", message: "Enter the working load limit marked on the sling assembly: published tables round down, so the marked limit can be lower than the computed one." });
+    warnings.push({
+      field: "sling.markedWll",
+      message:
+        "Enter the working load limit marked on the sling assembly: published tables round down, so the marked limit can be lower than the computed one.",
+    });
   if (!slingOk) {
     bands.push("stop");
     warnings.push({
       field: "sling.legWll",
-      message: tension > legLimit ? `Leg tension ${fmt(tension)} kg exceeds the leg's working load limit of ${fmt(legLimit)} kg.` : `The load of ${fmt(slingLoad)} kg exceeds the sling assembly's rated capacity of ${fmt(slingWll)} kg.`,
+      message:
+        tension > legLimit
+          ? `Leg tension ${fmt(tension)} kg exceeds the leg's working load limit of ${fmt(legLimit)} kg.`
+          : `The load of ${fmt(slingLoad)} kg exceeds the sling assembly's rated capacity of ${fmt(slingWll)} kg.`,
     });
   }
 
@@ -170,7 +215,10 @@ export function scoreLift(req: LiftRequest): LiftResult {
   examinations.forEach((e, i) => {
     if (e.status === "expired") {
       bands.push("stop");
-      warnings.push({ field: `examinations.${i}.lastExamined`, message: `${e.item}: thorough examination due ${e.dueDate}, before the lift on ${req.liftDate}. It must be examined before use.` });
+      warnings.push({
+        field: `examinations.${i}.lastExamined`,
+        message: `${e.item}: thorough examination due ${e.dueDate}, before the lift on ${req.liftDate}. It must be examined before use.`,
+      });
     } else if (e.status === "after-lift") {
       bands.push("stop");
       warnings.push({
@@ -180,25 +228,44 @@ export function scoreLift(req: LiftRequest): LiftResult {
       });
     } else if (e.status === "due-soon") {
       bands.push("watch");
-      warnings.push({ field: `examinations.${i}.lastExamined`, message: `${e.item}: thorough examination due ${e.dueDate}, soon after the lift. Check the report is on site.` });
+      warnings.push({
+        field: `examinations.${i}.lastExamined`,
+        message: `${e.item}: thorough examination due ${e.dueDate}, soon after the lift. Check the report is on site.`,
+      });
     }
   });
   if (examinations.length)
-    reasons.push({ text: `Thorough examinations checked against the lift date ${req.liftDate}: ${examinations.filter((e) => e.status === "in-date" || e.status === "due-soon").length} of ${examinations.length} in date.`, source: LIFT_SOURCES.loler });
+    reasons.push({
+      text: `Thorough examinations checked against the lift date ${req.liftDate}: ${examinations.filter((e) => e.status === "in-date" || e.status === "due-soon").length} of ${examinations.length} in date.`,
+      source: LIFT_SOURCES.loler,
+    });
 
   // Wind
   if (req.wind) {
     const ratio = req.wind.forecastMs / req.wind.inServiceLimitMs;
     if (ratio > 1) {
       bands.push("stop");
-      warnings.push({ field: "wind.forecastMs", message: `Forecast ${fmt(req.wind.forecastMs, 1)} m/s is above the in-service limit of ${fmt(req.wind.inServiceLimitMs, 1)} m/s: do not lift.` });
+      warnings.push({
+        field: "wind.forecastMs",
+        message: `Forecast ${fmt(req.wind.forecastMs, 1)} m/s is above the in-service limit of ${fmt(req.wind.inServiceLimitMs, 1)} m/s: do not lift.`,
+      });
     } else if (ratio > WIND_MARGIN) {
       bands.push("watch");
-      warnings.push({ field: "wind.forecastMs", message: `Forecast ${fmt(req.wind.forecastMs, 1)} m/s is close to the in-service limit: measure the wind at the lift and stop above the limit.` });
+      warnings.push({
+        field: "wind.forecastMs",
+        message: `Forecast ${fmt(req.wind.forecastMs, 1)} m/s is close to the in-service limit: measure the wind at the lift and stop above the limit.`,
+      });
     }
     if (req.wind.largeSailArea)
-      warnings.push({ field: "wind.largeSailArea", message: "The load has a large sail area: the maker's limit may be down-rated for it (BS 7121-1 Annex D). Use the down-rated figure." });
-    reasons.push({ text: `Wind: forecast ${fmt(req.wind.forecastMs, 1)} m/s against the maker's in-service limit of ${fmt(req.wind.inServiceLimitMs, 1)} m/s.`, source: LIFT_SOURCES.bs7121 });
+      warnings.push({
+        field: "wind.largeSailArea",
+        message:
+          "The load has a large sail area: the maker's limit may be down-rated for it (BS 7121-1 Annex D). Use the down-rated figure.",
+      });
+    reasons.push({
+      text: `Wind: forecast ${fmt(req.wind.forecastMs, 1)} m/s against the maker's in-service limit of ${fmt(req.wind.inServiceLimitMs, 1)} m/s.`,
+      source: LIFT_SOURCES.bs7121,
+    });
   }
 
   // Ground bearing under the outrigger mat
@@ -217,11 +284,20 @@ export function scoreLift(req: LiftRequest): LiftResult {
       const ratio = ground.ratio!;
       bands.push(ratio <= BEARING_MARGIN ? "clear" : ratio <= 1 ? "watch" : "stop");
       if (ratio > 1)
-        warnings.push({ field: "groundBearing.matLengthM", message: `Ground pressure ${fmt(ground.pressureKpa, 0)} kPa exceeds the allowable ${fmt(ground.allowableKpa, 0)} kPa: use mats of at least ${fmt(ground.smallestSquareMatM!, 2)} m × ${fmt(ground.smallestSquareMatM!, 2)} m, or improve the ground.` });
+        warnings.push({
+          field: "groundBearing.matLengthM",
+          message: `Ground pressure ${fmt(ground.pressureKpa, 0)} kPa exceeds the allowable ${fmt(ground.allowableKpa, 0)} kPa: use mats of at least ${fmt(ground.smallestSquareMatM!, 2)} m × ${fmt(ground.smallestSquareMatM!, 2)} m, or improve the ground.`,
+        });
       else if (ratio > BEARING_MARGIN)
-        warnings.push({ field: "groundBearing.matLengthM", message: `Ground pressure is ${fmt(ratio * 100, 0)} % of the allowable: little margin. Set the mats level on firm ground with no voids, or use larger mats.` });
+        warnings.push({
+          field: "groundBearing.matLengthM",
+          message: `Ground pressure is ${fmt(ratio * 100, 0)} % of the allowable: little margin. Set the mats level on firm ground with no voids, or use larger mats.`,
+        });
       if (g.allowableKpa !== undefined && type && type.presumedKpa !== null && g.allowableKpa > type.presumedKpa * 2)
-        warnings.push({ field: "groundBearing.allowableKpa", message: `The allowable ${fmt(g.allowableKpa, 0)} kPa entered is well above the presumed value for ${type.label} (${type.range}): keep the ground investigation that supports it with the plan.` });
+        warnings.push({
+          field: "groundBearing.allowableKpa",
+          message: `The allowable ${fmt(g.allowableKpa, 0)} kPa entered is well above the presumed value for ${type.label} (${type.range}): keep the ground investigation that supports it with the plan.`,
+        });
     }
     reasons.push({
       text: `Outrigger force ${fmt(g.outriggerForceKn, 1)} kN on a ${fmt(g.matLengthM, 2)} m × ${fmt(g.matWidthM, 2)} m mat: ${fmt(ground.pressureKpa, 0)} kPa${
@@ -241,7 +317,10 @@ export function scoreLift(req: LiftRequest): LiftResult {
   accessoryChecks.forEach((a, i) => {
     if (!a.ok) {
       bands.push("stop");
-      warnings.push({ field: `accessories.${i}.wllKg`, message: `${a.item} carries ${fmt(a.carriesKg, 0)} kg, above its working load limit of ${fmt(a.wllKg, 0)} kg.` });
+      warnings.push({
+        field: `accessories.${i}.wllKg`,
+        message: `${a.item} carries ${fmt(a.carriesKg, 0)} kg, above its working load limit of ${fmt(a.wllKg, 0)} kg.`,
+      });
     }
   });
   if (accessoryChecks.length)
@@ -251,18 +330,29 @@ export function scoreLift(req: LiftRequest): LiftResult {
     });
 
   // Category
-  const categoryReasons: string[] = (Object.keys(COMPLEX_FACTORS) as ComplexFactor[]).filter((f) => req.factors?.[f]).map((f) => COMPLEX_FACTORS[f]);
-  if (utilisation > UTILISATION.complexAbove) categoryReasons.push(`utilisation above ${fmt(UTILISATION.complexAbove * 100, 0)} % of rated capacity`);
+  const categoryReasons: string[] = (Object.keys(COMPLEX_FACTORS) as ComplexFactor[])
+    .filter((f) => req.factors?.[f])
+    .map((f) => COMPLEX_FACTORS[f]);
+  if (utilisation > UTILISATION.complexAbove)
+    categoryReasons.push(`utilisation above ${fmt(UTILISATION.complexAbove * 100, 0)} % of rated capacity`);
   let category: LiftResult["category"] = "complex";
   if (categoryReasons.length === 0) {
     const standardReasons: string[] = [];
-    if (utilisation > UTILISATION.standardAbove) standardReasons.push(`utilisation above ${fmt(UTILISATION.standardAbove * 100, 0)} %`);
-    if (req.sling.legs > 1 && req.sling.angleFromVerticalDeg > 45) standardReasons.push("sling legs wider than 45° from vertical");
-    if (req.wind && req.wind.forecastMs > req.wind.inServiceLimitMs * 0.5) standardReasons.push("forecast wind above half the in-service limit");
+    if (utilisation > UTILISATION.standardAbove)
+      standardReasons.push(`utilisation above ${fmt(UTILISATION.standardAbove * 100, 0)} %`);
+    if (req.sling.legs > 1 && req.sling.angleFromVerticalDeg > 45)
+      standardReasons.push("sling legs wider than 45° from vertical");
+    if (req.wind && req.wind.forecastMs > req.wind.inServiceLimitMs * 0.5)
+      standardReasons.push("forecast wind above half the in-service limit");
     category = standardReasons.length ? "standard" : "basic";
-    categoryReasons.push(...(standardReasons.length ? standardReasons : ["light lift, good margins, no complicating factor"]));
+    categoryReasons.push(
+      ...(standardReasons.length ? standardReasons : ["light lift, good margins, no complicating factor"]),
+    );
   }
-  reasons.push({ text: `Lift category ${category}: ${categoryReasons.join("; ")}.`, source: `${LIFT_SOURCES.bs7121}; thresholds: ${LIFT_SOURCES.policy}` });
+  reasons.push({
+    text: `Lift category ${category}: ${categoryReasons.join("; ")}.`,
+    source: `${LIFT_SOURCES.bs7121}; thresholds: ${LIFT_SOURCES.policy}`,
+  });
 
   // People
   const missing: string[] = [];
@@ -271,7 +361,11 @@ export function scoreLift(req: LiftRequest): LiftResult {
     if (!person?.name?.trim()) missing.push(ROLE_LABELS[role]);
   }
   if (missing.includes("appointed person"))
-    warnings.push({ field: "people.appointedPerson", message: "No appointed person: the plan cannot be approved until a competent person is appointed to plan the lift." });
+    warnings.push({
+      field: "people.appointedPerson",
+      message:
+        "No appointed person: the plan cannot be approved until a competent person is appointed to plan the lift.",
+    });
   if (!req.liftDate && req.examinations?.length)
     warnings.push({ field: "liftDate", message: "No lift date: thorough examinations cannot be checked." });
   if (!req.examinations?.length) missing.push("thorough examination records");

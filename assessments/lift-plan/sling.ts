@@ -49,6 +49,11 @@ export function legsSharing(legs: number, hitch: Hitch = "straight"): number {
   return Math.min(legs, 3);
 }
 
-export function legTension(load: number, legs: number, angleFromVerticalDeg: number, hitch: Hitch = "straight"): number {
+export function legTension(
+  load: number,
+  legs: number,
+  angleFromVerticalDeg: number,
+  hitch: Hitch = "straight",
+): number {
   return load / (legsSharing(legs, hitch) * Math.cos((angleFromVerticalDeg * Math.PI) / 180));
 }

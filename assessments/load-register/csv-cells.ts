@@ -18,12 +18,15 @@ export function parseCsvNumber(raw: string | undefined): CellNumber {
   if (text === "") return { value: null };
   if (AMBIGUOUS.test(text)) {
     const [whole, part] = text.split(/[.,]/);
-    return { error: `"${text}" could mean ${whole}${part} or ${whole}.${part}: write it without a separator (${whole}${part}) or with a decimal point (${whole}.${part})` };
+    return {
+      error: `"${text}" could mean ${whole}${part} or ${whole}.${part}: write it without a separator (${whole}${part}) or with a decimal point (${whole}.${part})`,
+    };
   }
   if (PLAIN.test(text)) return { value: Number(text) };
   if (DECIMAL_COMMA.test(text)) return { value: Number(text.replace(",", ".")) };
   if (/^\d+(\.\d+)?\s*[a-zA-Z]+$/.test(text)) return { error: `"${text}": write the number only, without the unit` };
-  if (/^\d{1,3}([, .]\d{3})+([.,]\d+)?$/.test(text)) return { error: `"${text}": write the number without thousands separators` };
+  if (/^\d{1,3}([, .]\d{3})+([.,]\d+)?$/.test(text))
+    return { error: `"${text}": write the number without thousands separators` };
   return { error: `"${text}" is not a number Heftwise can read: use digits with a decimal point, such as 12.5` };
 }
 
@@ -32,7 +35,9 @@ const FORMULA_START = /^[=+\-@\t\r]/;
 
 /** A note for a text cell a spreadsheet would run as a formula; null when it would not. */
 export function formulaNote(text: string | undefined): string | null {
-  return text && FORMULA_START.test(text) ? `starts with "${text[0] === "\t" ? "tab" : text[0] === "\r" ? "return" : text[0]}": a spreadsheet may run it as a formula. It is stored as text, and written with a leading apostrophe in exports.` : null;
+  return text && FORMULA_START.test(text)
+    ? `starts with "${text[0] === "\t" ? "tab" : text[0] === "\r" ? "return" : text[0]}": a spreadsheet may run it as a formula. It is stored as text, and written with a leading apostrophe in exports.`
+    : null;
 }
 
 /** Text safe to write into a CSV that a spreadsheet will open: a formula-like cell gets a leading apostrophe. */

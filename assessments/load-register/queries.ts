@@ -7,7 +7,11 @@ import { cachedRead, readKey } from "@/lib/read-cache";
 export async function listComponents(actor: Actor | null) {
   authorize(actor, "components:read");
   const db = await getDb();
-  return db.select().from(components).where(eq(components.organisationId, actor.organisationId)).orderBy(asc(components.name));
+  return db
+    .select()
+    .from(components)
+    .where(eq(components.organisationId, actor.organisationId))
+    .orderBy(asc(components.name));
 }
 
 /** How many components the register holds, and how many of them have an estimated mass (overview). */

@@ -33,7 +33,16 @@ export const componentSchema = z.object({
 export type ComponentInput = z.input<typeof componentSchema>;
 
 /** Columns of the CSV import, in the order of the downloadable template. */
-export const CSV_COLUMNS = ["name", "mass_kg", "length_mm", "width_mm", "height_mm", "grip", "mass_source", "notes"] as const;
+export const CSV_COLUMNS = [
+  "name",
+  "mass_kg",
+  "length_mm",
+  "width_mm",
+  "height_mm",
+  "grip",
+  "mass_source",
+  "notes",
+] as const;
 
 export const CSV_TEMPLATE = `${CSV_COLUMNS.join(",")}
 Cable trough section 1 m,42,1000,250,200,poor,datasheet,Two-person lift
@@ -42,5 +51,9 @@ Trough lid 1 m,14,1000,250,50,poor,weighed,
 
 export const MAX_IMPORT_ROWS = 500;
 
-export const MASS_SOURCE_LABELS = { weighed: "Weighed", datasheet: "Maker's data sheet", estimated: "Estimated" } as const;
+export const MASS_SOURCE_LABELS = {
+  weighed: "Weighed",
+  datasheet: "Maker's data sheet",
+  estimated: "Estimated",
+} as const;
 export const GRIP_LABELS = { good: "Good", fair: "Fair", poor: "Poor" } as const;

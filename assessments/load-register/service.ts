@@ -37,7 +37,11 @@ export async function listComponentsPage(actor: Actor | null, query: unknown) {
   const q = parseOrThrow(componentListQuerySchema, query, "Invalid query");
   return cachedRead(readKey("components", actor.organisationId, q), async () => {
     const descending = q.sort.startsWith("-");
-    const keyset: Keyset = { name: q.sort, descending, ...COMPONENT_ORDERS[q.sort.replace("-", "") as "name" | "massKg"] };
+    const keyset: Keyset = {
+      name: q.sort,
+      descending,
+      ...COMPONENT_ORDERS[q.sort.replace("-", "") as "name" | "massKg"],
+    };
     const db = await getDb();
     const where: SQL[] = [eq(components.organisationId, actor.organisationId)];
     if (q.q) where.push(ilike(components.name, `%${escapeLike(q.q)}%`));
@@ -50,7 +54,10 @@ export async function listComponentsPage(actor: Actor | null, query: unknown) {
         .where(and(...where, afterCursor(keyset, q.cursor)))
         .orderBy(...orderOf(keyset))
         .limit(q.limit + 1),
-      db.select({ total: count() }).from(components).where(and(...where)),
+      db
+        .select({ total: count() })
+        .from(components)
+        .where(and(...where)),
     ]);
     return keysetPage(rows, keyset, q.limit, Number(total));
   });
@@ -59,22 +66,36 @@ export async function listComponentsPage(actor: Actor | null, query: unknown) {
 export async function getComponent(actor: Actor | null, componentId: string) {
   authorize(actor, "components:read");
   const db = await getDb();
-  const component = isUuid(componentId) ? await db.query.components.findFirst({ where: eq(components.id, componentId) }) : undefined;
+  const component = isUuid(componentId)
+    ? await db.query.components.findFirst({ where: eq(components.id, componentId) })
+    : undefined;
   if (!component || component.organisationId !== actor.organisationId) throw AppError.notFound("Component");
   const attachments = await db
-    .select({ id: componentAttachments.id, filename: componentAttachments.filename, contentType: componentAttachments.contentType, size: componentAttachments.size, createdAt: componentAttachments.createdAt })
+    .select({
+      id: componentAttachments.id,
+      filename: componentAttachments.filename,
+      contentType: componentAttachments.contentType,
+      size: componentAttachments.size,
+      createdAt: componentAttachments.createdAt,
+    })
     .from(componentAttachments)
     .where(eq(componentAttachments.componentId, component.id))
     .orderBy(asc(componentAttachments.createdAt));
   return { ...component, attachments };
 }
 
-const nameTaken = () => new AppError("conflict", "A component with this name is already in the register", [{ path: "name", message: "A component with this name is already in the register" }]);
+const nameTaken = () =>
+  new AppError("conflict", "A component with this name is already in the register", [
+    { path: "name", message: "A component with this name is already in the register" },
+  ]);
 
 /** The register's unique index decides (parallel creates cannot both pass); this check only answers early. */
 async function assertNameFree(organisationId: string, name: string, exceptId?: string) {
   const db = await getDb();
-  const existing = await db.select({ id: components.id }).from(components).where(and(eq(components.organisationId, organisationId), ilike(components.name, escapeLike(name))));
+  const existing = await db
+    .select({ id: components.id })
+    .from(components)
+    .where(and(eq(components.organisationId, organisationId), ilike(components.name, escapeLike(name))));
   if (existing.some((e) => e.id !== exceptId)) throw nameTaken();
 }
 
@@ -95,8 +116,17 @@ export async function createComponent(actor: Actor | null, input: unknown) {
   const db = await getDb();
   return guardName(() =>
     db.transaction(async (tx) => {
-      const [row] = await tx.insert(components).values({ ...data, organisationId: actor.organisationId }).returning();
-      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.created", entityType: "component", entityId: row.id });
+      const [row] = await tx
+        .insert(components)
+        .values({ ...data, organisationId: actor.organisationId })
+        .returning();
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "component.created",
+        entityType: "component",
+        entityId: row.id,
+      });
       return row;
     }),
   );
@@ -110,8 +140,18 @@ export async function updateComponent(actor: Actor | null, componentId: string, 
   const db = await getDb();
   return guardName(() =>
     db.transaction(async (tx) => {
-      const [row] = await tx.update(components).set({ ...data, updatedAt: new Date() }).where(eq(components.id, componentId)).returning();
-      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.updated", entityType: "component", entityId: row.id });
+      const [row] = await tx
+        .update(components)
+        .set({ ...data, updatedAt: new Date() })
+        .where(eq(components.id, componentId))
+        .returning();
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "component.updated",
+        entityType: "component",
+        entityId: row.id,
+      });
       return row;
     }),
   );
@@ -125,7 +165,12 @@ export interface ImportRow {
   notes: FieldIssue[];
 }
 
-const NUMBER_COLUMNS = { mass_kg: "massKg", length_mm: "lengthMm", width_mm: "widthMm", height_mm: "heightMm" } as const;
+const NUMBER_COLUMNS = {
+  mass_kg: "massKg",
+  length_mm: "lengthMm",
+  width_mm: "widthMm",
+  height_mm: "heightMm",
+} as const;
 
 /** A CSV row as the component schema's input, and the cells that could not be read as numbers. */
 function rowCandidate(values: Record<string, string>) {
@@ -152,13 +197,25 @@ function rowCandidate(values: Record<string, string>) {
 }
 
 /** Parses and checks a CSV without writing anything: every row with its errors. */
-export async function previewImport(actor: Actor | null, csv: string): Promise<{ rows: ImportRow[]; problems: string[] }> {
+export async function previewImport(
+  actor: Actor | null,
+  csv: string,
+): Promise<{ rows: ImportRow[]; problems: string[] }> {
   authorize(actor, "components:write");
-  const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: "greedy", transformHeader: (h) => h.trim().toLowerCase() });
+  const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ""), {
+    header: true,
+    skipEmptyLines: "greedy",
+    transformHeader: (h) => h.trim().toLowerCase(),
+  });
   const problems: string[] = [];
   const headers = parsed.meta.fields ?? [];
-  const missing = CSV_COLUMNS.filter((c) => ["name", "mass_kg", "grip", "mass_source"].includes(c) && !headers.includes(c));
-  if (missing.length) problems.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}. Download the template to see the expected columns.`);
+  const missing = CSV_COLUMNS.filter(
+    (c) => ["name", "mass_kg", "grip", "mass_source"].includes(c) && !headers.includes(c),
+  );
+  if (missing.length)
+    problems.push(
+      `Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}. Download the template to see the expected columns.`,
+    );
   const unknown = headers.filter((h) => !(CSV_COLUMNS as readonly string[]).includes(h));
   if (unknown.length) problems.push(`Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.join(", ")}.`);
   if (parsed.data.length === 0) problems.push("The file has no rows to import.");
@@ -167,7 +224,12 @@ export async function previewImport(actor: Actor | null, csv: string): Promise<{
 
   const db = await getDb();
   const existing = new Set(
-    (await db.select({ name: components.name }).from(components).where(eq(components.organisationId, actor.organisationId))).map((c) => c.name.toLowerCase()),
+    (
+      await db
+        .select({ name: components.name })
+        .from(components)
+        .where(eq(components.organisationId, actor.organisationId))
+    ).map((c) => c.name.toLowerCase()),
   );
   const seen = new Set<string>();
   const rows = parsed.data.slice(0, MAX_IMPORT_ROWS).map((values, i): ImportRow => {
@@ -176,7 +238,11 @@ export async function previewImport(actor: Actor | null, csv: string): Promise<{
     // A cell that is not a number says why once, not again as the schema's "enter the mass".
     const errors: FieldIssue[] = [
       ...cellErrors,
-      ...(result.success ? [] : result.error.issues.map((issue) => ({ path: String(issue.path[0] ?? ""), message: issue.message })).filter((e) => !cellErrors.some((c) => c.path === e.path))),
+      ...(result.success
+        ? []
+        : result.error.issues
+            .map((issue) => ({ path: String(issue.path[0] ?? ""), message: issue.message }))
+            .filter((e) => !cellErrors.some((c) => c.path === e.path))),
     ];
     const notes: FieldIssue[] = [];
     for (const column of ["name", "notes"] as const) {
@@ -195,15 +261,32 @@ export async function previewImport(actor: Actor | null, csv: string): Promise<{
 /** Imports every row or none: any error answers 422 with the rows' errors and writes nothing. */
 export async function importComponents(actor: Actor | null, csv: string): Promise<{ imported: number }> {
   const { rows, problems } = await previewImport(actor, csv);
-  const rowIssues = rows.flatMap((r) => r.errors.map((e) => ({ path: `line ${r.line}.${e.path}`, message: e.message })));
+  const rowIssues = rows.flatMap((r) =>
+    r.errors.map((e) => ({ path: `line ${r.line}.${e.path}`, message: e.message })),
+  );
   if (problems.length || rowIssues.length)
-    throw new AppError("validation", "Nothing was imported: fix the file and try again", [...problems.map((p) => ({ path: "file", message: p })), ...rowIssues]);
+    throw new AppError("validation", "Nothing was imported: fix the file and try again", [
+      ...problems.map((p) => ({ path: "file", message: p })),
+      ...rowIssues,
+    ]);
   const db = await getDb();
-  const values = rows.map((r) => ({ ...componentSchema.parse(rowCandidate(r.values).candidate), organisationId: actor!.organisationId }));
-  await guardName(() => db.transaction(async (tx) => {
-    const inserted = await tx.insert(components).values(values).returning({ id: components.id });
-    await recordAudit(tx, { organisationId: actor!.organisationId, actorId: actor!.id, action: "component.imported", entityType: "component", entityId: null, details: { count: inserted.length } });
+  const values = rows.map((r) => ({
+    ...componentSchema.parse(rowCandidate(r.values).candidate),
+    organisationId: actor!.organisationId,
   }));
+  await guardName(() =>
+    db.transaction(async (tx) => {
+      const inserted = await tx.insert(components).values(values).returning({ id: components.id });
+      await recordAudit(tx, {
+        organisationId: actor!.organisationId,
+        actorId: actor!.id,
+        action: "component.imported",
+        entityType: "component",
+        entityId: null,
+        details: { count: inserted.length },
+      });
+    }),
+  );
   return { imported: values.length };
 }
 
@@ -216,31 +299,57 @@ export const ATTACHMENT_TYPES: Record<string, string> = {
 export const MAX_ATTACHMENT_BYTES = 10 * 1024 * 1024;
 
 /** Attaches a data sheet or photograph; its type is read from the content, never from the name. */
-export async function addAttachment(actor: Actor | null, componentId: string, file: { name: string; data: Uint8Array }) {
+export async function addAttachment(
+  actor: Actor | null,
+  componentId: string,
+  file: { name: string; data: Uint8Array },
+) {
   authorize(actor, "components:write");
   await getComponent(actor, componentId);
-  if (file.data.byteLength === 0) throw new AppError("validation", "The file is empty", [{ path: "file", message: "The file is empty" }]);
-  if (file.data.byteLength > MAX_ATTACHMENT_BYTES) throw new AppError("payload_too_large", `Files can be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
+  if (file.data.byteLength === 0)
+    throw new AppError("validation", "The file is empty", [{ path: "file", message: "The file is empty" }]);
+  if (file.data.byteLength > MAX_ATTACHMENT_BYTES)
+    throw new AppError("payload_too_large", `Files can be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
   const { fileTypeFromBuffer } = await import("file-type");
   const detected = await fileTypeFromBuffer(file.data);
   if (!detected || !ATTACHMENT_TYPES[detected.mime])
-    throw new AppError("unsupported_media_type", `Attach a PDF data sheet or a photograph (JPEG, PNG or WebP); this file is ${detected ? detected.mime : "of an unknown type"}`);
+    throw new AppError(
+      "unsupported_media_type",
+      `Attach a PDF data sheet or a photograph (JPEG, PNG or WebP); this file is ${detected ? detected.mime : "of an unknown type"}`,
+    );
   const filename = file.name.replace(/[\\/\u0000-\u001f]/g, "_").slice(0, 200) || `attachment.${detected.ext}`;
   const db = await getDb();
   return db.transaction(async (tx) => {
     const stored = await putFile(tx, actor.organisationId, file.data, detected.mime);
     const [row] = await tx
       .insert(componentAttachments)
-      .values({ organisationId: actor.organisationId, componentId, fileId: stored.id, filename, contentType: detected.mime, size: stored.size, uploadedBy: actor.id })
+      .values({
+        organisationId: actor.organisationId,
+        componentId,
+        fileId: stored.id,
+        filename,
+        contentType: detected.mime,
+        size: stored.size,
+        uploadedBy: actor.id,
+      })
       .returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.attachment-added", entityType: "component", entityId: componentId, details: { filename, sha256: stored.sha256 } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "component.attachment-added",
+      entityType: "component",
+      entityId: componentId,
+      details: { filename, sha256: stored.sha256 },
+    });
     return row;
   });
 }
 
 async function attachmentOf(actor: Actor, attachmentId: string) {
   const db = await getDb();
-  const row = isUuid(attachmentId) ? await db.query.componentAttachments.findFirst({ where: eq(componentAttachments.id, attachmentId) }) : undefined;
+  const row = isUuid(attachmentId)
+    ? await db.query.componentAttachments.findFirst({ where: eq(componentAttachments.id, attachmentId) })
+    : undefined;
   if (!row || row.organisationId !== actor.organisationId) throw AppError.notFound("Attachment");
   return row;
 }
@@ -260,6 +369,13 @@ export async function removeAttachment(actor: Actor | null, attachmentId: string
   await db.transaction(async (tx) => {
     await tx.delete(componentAttachments).where(eq(componentAttachments.id, row.id));
     await deleteFile(tx, actor.organisationId, row.fileId);
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "component.attachment-removed", entityType: "component", entityId: row.componentId, details: { filename: row.filename } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "component.attachment-removed",
+      entityType: "component",
+      entityId: row.componentId,
+      details: { filename: row.filename },
+    });
   });
 }

@@ -29,7 +29,11 @@ export const OPERATION_LABELS: Record<Operation, string> = {
 export const nioshInputsSchema = z.object({
   // V below 0 is below the standing surface (into an excavation): accepted, never Clear.
   origin: z.object({ h: num(0, 200, "H in cm"), v: num(-300, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
-  destination: z.object({ h: num(0, 200, "H in cm"), v: num(-300, 250, "V in cm"), a: num(0, 180, "an angle in degrees") }),
+  destination: z.object({
+    h: num(0, 200, "H in cm"),
+    v: num(-300, 250, "V in cm"),
+    a: num(0, 180, "an angle in degrees"),
+  }),
   frequency: num(0, 60, "lifts per minute"),
   durationHours: num(0.01, 24, "hours"),
   /** Rest or light work after the lifting (h): decides the lifting equation's duration category. */
@@ -45,7 +49,11 @@ export const filterInputsSchema = z.object({
   reach: reachSchema,
   frequency: num(0, 60, "operations per minute"),
   twistDeg: num(0, 180, "an angle in degrees"),
-  teamSize: z.number({ error: "Enter the team size" }).int("Whole people only").min(1, "At least 1").max(20, "At most 20"),
+  teamSize: z
+    .number({ error: "Enter the team size" })
+    .int("Whole people only")
+    .min(1, "At least 1")
+    .max(20, "At most 20"),
   carryDistanceM: num(0, 10_000, "metres").optional(),
   durationHours: num(0.01, 24, "hours").optional(),
 });
@@ -56,7 +64,11 @@ export const pushInputsSchema = z.object({
   gradient: num(-1, 1, "a gradient (rise ÷ run)"),
   rollingCoefficient: num(0, 1, "a coefficient").optional(),
   sex: sexSchema,
-  teamSize: z.number({ error: "Enter the team size" }).int("Whole people only").min(1, "At least 1").max(20, "At most 20"),
+  teamSize: z
+    .number({ error: "Enter the team size" })
+    .int("Whole people only")
+    .min(1, "At least 1")
+    .max(20, "At most 20"),
   distanceM: num(0, 10_000, "metres").optional(),
   measuredForceN: num(0.1, 100_000, "newtons").optional(),
   surface: z.enum(SURFACES).optional(),
@@ -72,7 +84,12 @@ export const taskSchema = z.object({
   description: text(300),
   componentId: z.uuid("Choose a component").nullable(),
   /** How many of the component are handled together (a bundle, a pair). */
-  quantity: z.number({ error: "Enter how many" }).int("Whole items only").min(1, "At least 1").max(50, "At most 50").default(1),
+  quantity: z
+    .number({ error: "Enter how many" })
+    .int("Whole items only")
+    .min(1, "At least 1")
+    .max(50, "At most 50")
+    .default(1),
   operation: z.enum(OPERATIONS),
   niosh: nioshInputsSchema.optional(),
   filter: filterInputsSchema.optional(),
@@ -99,7 +116,9 @@ export const hazardSchema = z.object({
   whoIsAtRisk: text(200),
   likelihoodBefore: rating(),
   severityBefore: rating(),
-  controls: z.array(z.object({ text: text(300).min(1, "Describe the control"), level: z.enum(CONTROL_LEVELS) })).max(20),
+  controls: z
+    .array(z.object({ text: text(300).min(1, "Describe the control"), level: z.enum(CONTROL_LEVELS) }))
+    .max(20),
   likelihoodAfter: rating(),
   severityAfter: rating(),
 });
@@ -109,12 +128,18 @@ const optionalDate = () =>
   z
     .string()
     .trim()
-    .refine((v) => v === "" || (/^\d{4}-\d{2}-\d{2}$/.test(v) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v)), "Use a real date")
+    .refine(
+      (v) => v === "" || (/^\d{4}-\d{2}-\d{2}$/.test(v) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v)),
+      "Use a real date",
+    )
     .default("");
 /** A permit or planning reference: letters, digits and a few separators, or blank. */
 const reference = () =>
   text(80)
-    .refine((v) => v === "" || /^[A-Za-z0-9][A-Za-z0-9 ./_:#-]*$/.test(v), "Use letters, digits, spaces and - / . _ : # only")
+    .refine(
+      (v) => v === "" || /^[A-Za-z0-9][A-Za-z0-9 ./_:#-]*$/.test(v),
+      "Use letters, digits, spaces and - / . _ : # only",
+    )
     .default("");
 
 export const NEAR_LINE = ["not-near", "near", "on"] as const;
@@ -123,14 +148,22 @@ export const NEAR_LINE_LABELS: Record<(typeof NEAR_LINE)[number], string> = {
   near: "Near the line (beside it, within the distance where protection is needed)",
   on: "On the line",
 };
-export const PROTECTION_ARRANGEMENTS = ["fenced", "distance", "line-blockage", "possession", "warning-system", "other"] as const;
+export const PROTECTION_ARRANGEMENTS = [
+  "fenced",
+  "distance",
+  "line-blockage",
+  "possession",
+  "warning-system",
+  "other",
+] as const;
 export type ProtectionArrangement = (typeof PROTECTION_ARRANGEMENTS)[number];
 export const PROTECTION_LABELS: Record<ProtectionArrangement, string> = {
   fenced: "Separated from the line by a fence or barrier",
   distance: "Separated from the line by distance, to a marked limit",
   "line-blockage": "Line blockage: no trains on the line while the work is done",
   possession: "Possession: the line handed over for engineering work",
-  "warning-system": "Warning of approaching trains (lookouts or a warning system): the gang goes to a position of safety",
+  "warning-system":
+    "Warning of approaching trains (lookouts or a warning system): the gang goes to a position of safety",
   other: "Another arrangement, described below",
 };
 export const PERMIT_KINDS = ["dig", "hot-work", "electrical", "confined-space", "other"] as const;
@@ -174,7 +207,10 @@ export const permitSchema = z
     validFrom: optionalDate(),
     validTo: optionalDate(),
   })
-  .refine((p) => !p.validFrom || !p.validTo || p.validTo >= p.validFrom, { path: ["validTo"], message: "Must be on or after the start date" });
+  .refine((p) => !p.validFrom || !p.validTo || p.validTo >= p.validFrom, {
+    path: ["validTo"],
+    message: "Must be on or after the start date",
+  });
 
 export const buriedServicesSchema = z.object({
   recordsObtained: z.boolean().default(false),
@@ -183,13 +219,23 @@ export const buriedServicesSchema = z.object({
   scannedBy: text(120).default(""),
   scanDate: optionalDate(),
   trialHoles: text(1000).default(""),
-  handDigWithinM: z.number({ error: "Enter metres" }).min(0, "0 or more").max(10, "At most 10 m").nullable().default(null),
+  handDigWithinM: z
+    .number({ error: "Enter metres" })
+    .min(0, "0 or more")
+    .max(10, "At most 10 m")
+    .nullable()
+    .default(null),
   rule: text(1000).default(""),
 });
 
 export const excavationSchema = z.object({
   present: z.boolean().default(false),
-  depthM: z.number({ error: "Enter metres" }).min(0.05, "At least 0.05 m").max(10, "At most 10 m").nullable().default(null),
+  depthM: z
+    .number({ error: "Enter metres" })
+    .min(0.05, "At least 0.05 m")
+    .max(10, "At most 10 m")
+    .nullable()
+    .default(null),
   support: z.enum(EXCAVATION_SUPPORT).nullable().default(null),
   supportDetail: text(1000).default(""),
   edgeProtection: text(1000).default(""),
@@ -209,7 +255,10 @@ export const environmentSchema = z.object({
 export const contentSchema = z.object({
   scope: z.object({
     summary: text(2000),
-    startDate: z.string().regex(/^(\d{4}-\d{2}-\d{2})?$/, "Use a date").default(""),
+    startDate: z
+      .string()
+      .regex(/^(\d{4}-\d{2}-\d{2})?$/, "Use a date")
+      .default(""),
     durationShifts: z.number().int().min(0).max(1000).default(0),
   }),
   sequence: z.array(z.object({ id: z.string().min(1).max(40), text: text(500) })).max(60),

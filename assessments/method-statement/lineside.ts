@@ -18,7 +18,10 @@ export function lineRows(content: Content): Rows | null {
     ["Where", NEAR_LINE_LABELS[l.nearLine]],
     ["Protection arrangement", l.protection ? PROTECTION_LABELS[l.protection] : "— not chosen"],
     ["Details", l.protectionDetail || "—"],
-    ["Responsible for the safe system of work", [l.responsibleName || "— not named", l.responsibleCompetence].filter(Boolean).join(", ")],
+    [
+      "Responsible for the safe system of work",
+      [l.responsibleName || "— not named", l.responsibleCompetence].filter(Boolean).join(", "),
+    ],
     ["Planning reference", l.planningRef || "—"],
     ["Access point", l.accessPoint || "—"],
     ["Walking route", l.walkingRoute || "—"],
@@ -27,17 +30,26 @@ export function lineRows(content: Content): Rows | null {
   ];
 }
 
-export const permitName = (p: Content["permits"][number]) => (p.kind === "other" ? p.description || "Other permit" : PERMIT_LABELS[p.kind]);
+export const permitName = (p: Content["permits"][number]) =>
+  p.kind === "other" ? p.description || "Other permit" : PERMIT_LABELS[p.kind];
 
 export function permitRows(content: Content): string[][] {
-  return content.permits.map((p) => [permitName(p), p.reference || "— none", p.issuedBy || "—", p.validFrom || p.validTo ? `${p.validFrom || "…"} to ${p.validTo || "…"}` : "—"]);
+  return content.permits.map((p) => [
+    permitName(p),
+    p.reference || "— none",
+    p.issuedBy || "—",
+    p.validFrom || p.validTo ? `${p.validFrom || "…"} to ${p.validTo || "…"}` : "—",
+  ]);
 }
 
 export function buriedServicesRows(content: Content): Rows {
   const b = content.buriedServices;
   return [
     ["Service records", b.recordsObtained ? `obtained${b.recordsRef ? `, ${b.recordsRef}` : ""}` : "— not recorded"],
-    ["Scan with a cable locating tool", b.scanned ? `by ${b.scannedBy || "—"} on ${b.scanDate || "—"}` : "— not recorded"],
+    [
+      "Scan with a cable locating tool",
+      b.scanned ? `by ${b.scannedBy || "—"} on ${b.scanDate || "—"}` : "— not recorded",
+    ],
     ["Trial holes", b.trialHoles || "—"],
     ["Hand-dig within", b.handDigWithinM !== null ? `${fmt(b.handDigWithinM, 2)} m of a located service` : "—"],
     ["The rule the gang follows", b.rule || "—"],

@@ -51,8 +51,24 @@ export interface MethodRequests {
 }
 
 /** The guideline filter's request from a task's filter inputs; `also` adds what the operation uses. */
-function filterRequest(f: NonNullable<Task["filter"]>, load: number, conditions: Task["conditions"], also: Partial<FilterRequest>): FilterRequest {
-  return { method: "filter", sex: f.sex, zone: f.zone, reach: f.reach, load, frequency: f.frequency, twistDeg: f.twistDeg, teamSize: f.teamSize, conditions, ...also };
+function filterRequest(
+  f: NonNullable<Task["filter"]>,
+  load: number,
+  conditions: Task["conditions"],
+  also: Partial<FilterRequest>,
+): FilterRequest {
+  return {
+    method: "filter",
+    sex: f.sex,
+    zone: f.zone,
+    reach: f.reach,
+    load,
+    frequency: f.frequency,
+    twistDeg: f.twistDeg,
+    teamSize: f.teamSize,
+    conditions,
+    ...also,
+  };
 }
 
 /**
@@ -83,14 +99,23 @@ export function methodRequests(task: Task, load: number | null): MethodRequests 
           conditions: task.conditions,
         };
       // One person: the filter takes the lift's own frequency and its largest twist.
-      if (f) out.filter = filterRequest(f, load!, task.conditions, { frequency: n ? n.frequency : f.frequency, twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg, teamSize: 1 });
+      if (f)
+        out.filter = filterRequest(f, load!, task.conditions, {
+          frequency: n ? n.frequency : f.frequency,
+          twistDeg: n ? Math.max(n.origin.a, n.destination.a) : f.twistDeg,
+          teamSize: 1,
+        });
       break;
     }
     case "team-lift":
       if (f) out.filter = filterRequest(f, load!, task.conditions, {});
       break;
     case "carry":
-      if (f) out.filter = filterRequest(f, load!, task.conditions, { carryDistanceM: f.carryDistanceM, durationHours: f.durationHours });
+      if (f)
+        out.filter = filterRequest(f, load!, task.conditions, {
+          carryDistanceM: f.carryDistanceM,
+          durationHours: f.durationHours,
+        });
       break;
     case "push": {
       const p = task.push;
@@ -149,7 +174,8 @@ export function rateTask(task: Task, component: RegisterEntry | undefined): Task
   if (requests.filter) results.filter = scoreFilter(requests.filter);
   if (requests.push) {
     results.push = scorePush(requests.push);
-    if (results.push.runsAway && requests.push.braked && !requests.push.brakeOperator?.trim()) incomplete.push("name who works the trolley's brake");
+    if (results.push.runsAway && requests.push.braked && !requests.push.brakeOperator?.trim())
+      incomplete.push("name who works the trolley's brake");
   }
   if (requests.lift) {
     results.lift = scoreLift(requests.lift);
@@ -185,7 +211,11 @@ export interface ReviewItem {
 
 /** Tasks that put the hands below the standing surface: lowering into or lifting out of an excavation. */
 export function belowStandingLevelTasks(content: Content): Task[] {
-  return content.tasks.filter((t) => t.filter?.zone === "below-standing-level" || (t.operation === "lift" && t.niosh && (t.niosh.origin.v < 0 || t.niosh.destination.v < 0)));
+  return content.tasks.filter(
+    (t) =>
+      t.filter?.zone === "below-standing-level" ||
+      (t.operation === "lift" && t.niosh && (t.niosh.origin.v < 0 || t.niosh.destination.v < 0)),
+  );
 }
 
 /**
@@ -198,40 +228,66 @@ export function linesideGaps(content: Content): ReviewItem[] {
   const out: ReviewItem[] = [];
   const l = content.lineside;
   if (l.nearLine !== "not-near") {
-    if (!l.protection) out.push({ step: "line", message: "Choose the protection arrangement for working on or near the line." });
-    else if (l.protection === "other" && !l.protectionDetail.trim()) out.push({ step: "line", message: "Describe the protection arrangement." });
-    if (!l.responsibleName.trim()) out.push({ step: "line", message: "Name the person responsible for the safe system of work." });
-    if (!l.responsibleCompetence.trim()) out.push({ step: "line", message: "Give the competence reference of the person responsible for the safe system of work." });
+    if (!l.protection)
+      out.push({ step: "line", message: "Choose the protection arrangement for working on or near the line." });
+    else if (l.protection === "other" && !l.protectionDetail.trim())
+      out.push({ step: "line", message: "Describe the protection arrangement." });
+    if (!l.responsibleName.trim())
+      out.push({ step: "line", message: "Name the person responsible for the safe system of work." });
+    if (!l.responsibleCompetence.trim())
+      out.push({
+        step: "line",
+        message: "Give the competence reference of the person responsible for the safe system of work.",
+      });
     if (!l.positionsOfSafety.trim()) out.push({ step: "line", message: "Say where the positions of safety are." });
   }
   content.permits.forEach((p, i) => {
     const name = p.kind === "other" ? p.description.trim() || `Permit ${i + 1}` : PERMIT_LABELS[p.kind];
-    if (p.kind === "other" && !p.description.trim()) out.push({ step: "ground", message: `Permit ${i + 1}: say which permit it is.` });
-    if (!p.reference.trim()) out.push({ step: "ground", message: `${name}: the permit is listed as needed but has no reference.` });
+    if (p.kind === "other" && !p.description.trim())
+      out.push({ step: "ground", message: `Permit ${i + 1}: say which permit it is.` });
+    if (!p.reference.trim())
+      out.push({ step: "ground", message: `${name}: the permit is listed as needed but has no reference.` });
     if (!p.issuedBy.trim()) out.push({ step: "ground", message: `${name}: say who issues it.` });
   });
   const below = belowStandingLevelTasks(content);
   const digging = content.excavation.present || content.permits.some((p) => p.kind === "dig") || below.length > 0;
   if (digging) {
     const b = content.buriedServices;
-    if (!b.recordsObtained) out.push({ step: "ground", message: "Buried services: record that the service records were obtained before digging." });
-    if (!b.scanned) out.push({ step: "ground", message: "Buried services: record the scan with a cable locating tool before digging." });
-    else if (!b.scannedBy.trim() || !b.scanDate) out.push({ step: "ground", message: "Buried services: say who scanned, and when." });
-    if (!b.rule.trim()) out.push({ step: "ground", message: "Buried services: state the rule the gang follows near a located service." });
+    if (!b.recordsObtained)
+      out.push({
+        step: "ground",
+        message: "Buried services: record that the service records were obtained before digging.",
+      });
+    if (!b.scanned)
+      out.push({
+        step: "ground",
+        message: "Buried services: record the scan with a cable locating tool before digging.",
+      });
+    else if (!b.scannedBy.trim() || !b.scanDate)
+      out.push({ step: "ground", message: "Buried services: say who scanned, and when." });
+    if (!b.rule.trim())
+      out.push({ step: "ground", message: "Buried services: state the rule the gang follows near a located service." });
   }
   if (below.length && !content.excavation.present)
-    out.push({ step: "ground", message: `${below.length === 1 ? "A task lowers" : `${below.length} tasks lower`} a load below the standing surface: describe the excavation it goes into.` });
+    out.push({
+      step: "ground",
+      message: `${below.length === 1 ? "A task lowers" : `${below.length} tasks lower`} a load below the standing surface: describe the excavation it goes into.`,
+    });
   if (content.excavation.present) {
     const e = content.excavation;
     if (e.depthM === null) out.push({ step: "ground", message: "Excavation: give its depth." });
     if (!e.support) out.push({ step: "ground", message: "Excavation: say how its sides are supported or battered." });
-    else if (e.support === "other" && !e.supportDetail.trim()) out.push({ step: "ground", message: "Excavation: describe the support." });
-    if (!e.inspection.trim()) out.push({ step: "ground", message: "Excavation: say who inspects it, before each shift and after anything that could weaken it." });
+    else if (e.support === "other" && !e.supportDetail.trim())
+      out.push({ step: "ground", message: "Excavation: describe the support." });
+    if (!e.inspection.trim())
+      out.push({
+        step: "ground",
+        message: "Excavation: say who inspects it, before each shift and after anything that could weaken it.",
+      });
     if (!e.accessEgress.trim()) out.push({ step: "ground", message: "Excavation: describe the safe way in and out." });
   }
   return out;
 }
-
 
 export interface Review {
   missing: ReviewItem[];
@@ -246,22 +302,29 @@ export function reviewContent(content: Content, register: RegisterEntry[]): Revi
   const scores = content.tasks.map((t) => scoreTask(t, t.componentId ? byId.get(t.componentId) : undefined));
   const missing: ReviewItem[] = [];
   if (!content.scope.summary.trim()) missing.push({ step: "scope", message: "Describe the scope of the work." });
-  if (!content.sequence.some((s) => s.text.trim())) missing.push({ step: "sequence", message: "Add at least one step to the sequence of work." });
+  if (!content.sequence.some((s) => s.text.trim()))
+    missing.push({ step: "sequence", message: "Add at least one step to the sequence of work." });
   if (content.tasks.length === 0) missing.push({ step: "loads", message: "Add at least one handling task." });
   content.tasks.forEach((task, i) => {
     const s = scores[i];
     const name = task.description.trim() || `Task ${i + 1}`;
     for (const item of s.incomplete) missing.push({ step: "loads", message: `${name}: ${item}.` });
-    if (s.band === "stop") missing.push({ step: "loads", message: `${name} is banded Stop: redesign it before submitting.` });
+    if (s.band === "stop")
+      missing.push({ step: "loads", message: `${name} is banded Stop: redesign it before submitting.` });
   });
-  if (content.hazards.length === 0) missing.push({ step: "hazards", message: "Record at least one hazard with its controls." });
+  if (content.hazards.length === 0)
+    missing.push({ step: "hazards", message: "Record at least one hazard with its controls." });
   content.hazards.forEach((h, i) => {
-    if (h.controls.length === 0) missing.push({ step: "hazards", message: `Hazard ${i + 1} (${h.hazard || "unnamed"}) has no controls.` });
+    if (h.controls.length === 0)
+      missing.push({ step: "hazards", message: `Hazard ${i + 1} (${h.hazard || "unnamed"}) has no controls.` });
   });
-  if (!content.people.roles.some((r) => r.name.trim())) missing.push({ step: "people", message: "Name the people and their roles." });
+  if (!content.people.roles.some((r) => r.name.trim()))
+    missing.push({ step: "people", message: "Name the people and their roles." });
   if (!content.people.ppe.some((p) => p.trim())) missing.push({ step: "people", message: "List the PPE required." });
-  if (!content.emergency.arrangements.trim()) missing.push({ step: "emergency", message: "Describe the emergency arrangements." });
-  if (!content.emergency.nearestHospital.trim()) missing.push({ step: "emergency", message: "Name the nearest hospital with an emergency department." });
+  if (!content.emergency.arrangements.trim())
+    missing.push({ step: "emergency", message: "Describe the emergency arrangements." });
+  if (!content.emergency.nearestHospital.trim())
+    missing.push({ step: "emergency", message: "Name the nearest hospital with an emergency department." });
   missing.push(...linesideGaps(content));
   const banded = scores.map((s) => s.band).filter((b): b is Band => b !== null);
   return { missing, worstBand: banded.length ? worstBand(banded) : null, scores, canSubmit: missing.length === 0 };
@@ -282,7 +345,11 @@ export interface Rescored {
  * different band, or a different index from any method. A draft shows these before it is submitted;
  * approved revisions keep their stored results and are never re-scored.
  */
-export function rescoredByCurrentRules(tasks: Task[], stored: readonly TaskScore[] | null, fresh: readonly TaskScore[]): Rescored[] {
+export function rescoredByCurrentRules(
+  tasks: Task[],
+  stored: readonly TaskScore[] | null,
+  fresh: readonly TaskScore[],
+): Rescored[] {
   if (!stored) return [];
   const byId = new Map(stored.map((s) => [s.taskId, s]));
   const out: Rescored[] = [];
@@ -295,7 +362,14 @@ export function rescoredByCurrentRules(tasks: Task[], stored: readonly TaskScore
     };
     const methods: (keyof TaskResults)[] = ["niosh", "filter", "push", "lift"];
     if (was.band !== now.band || methods.some((m) => indexOf(was, m) !== indexOf(now, m)))
-      out.push({ taskId: now.taskId, position: i + 1, description: tasks[i]?.description ?? "", was: was.band, now: now.band, wasVersion: was.rulesVersion });
+      out.push({
+        taskId: now.taskId,
+        position: i + 1,
+        description: tasks[i]?.description ?? "",
+        was: was.band,
+        now: now.band,
+        wasVersion: was.rulesVersion,
+      });
   });
   return out;
 }

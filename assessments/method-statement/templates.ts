@@ -56,7 +56,10 @@ const standardPeople = (): Content["people"] => ({
  * responsible, references and positions of safety are the adviser's to fill from the site and the
  * infrastructure manager's planning — the review refuses submission until they are.
  */
-const nearTheLine = (protection: NonNullable<Content["lineside"]["protection"]>, protectionDetail: string): Content["lineside"] => ({
+const nearTheLine = (
+  protection: NonNullable<Content["lineside"]["protection"]>,
+  protectionDetail: string,
+): Content["lineside"] => ({
   nearLine: "near",
   protection,
   protectionDetail,
@@ -64,11 +67,20 @@ const nearTheLine = (protection: NonNullable<Content["lineside"]["protection"]>,
   responsibleCompetence: "",
   planningRef: "",
   accessPoint: "",
-  walkingRoute: "From the access point along the cess walkway to the site; no walking on the ballast shoulder or between the rails.",
+  walkingRoute:
+    "From the access point along the cess walkway to the site; no walking on the ballast shoulder or between the rails.",
   positionsOfSafety: "",
-  limits: "Nothing carried or placed within 3 m of the nearest rail; long items carried parallel to the line, on the side away from it.",
+  limits:
+    "Nothing carried or placed within 3 m of the nearest rail; long items carried parallel to the line, on the side away from it.",
 });
-const permitToDig = (): Content["permits"][number] => ({ kind: "dig", description: "", reference: "", issuedBy: "", validFrom: "", validTo: "" });
+const permitToDig = (): Content["permits"][number] => ({
+  kind: "dig",
+  description: "",
+  reference: "",
+  issuedBy: "",
+  validFrom: "",
+  validTo: "",
+});
 const buriedServicesChecks = (): Content["buriedServices"] => ({
   recordsObtained: false,
   recordsRef: "",
@@ -105,7 +117,11 @@ export const TEMPLATES: Template[] = [
     description: "Ground screws, leg sections and a top frame carried from the van and assembled by hand.",
     build: (c) => ({
       ...emptyContent(),
-      scope: { summary: "Install a modular equipment base by hand on ground screws, ready for a lineside cabinet.", startDate: "", durationShifts: 1 },
+      scope: {
+        summary: "Install a modular equipment base by hand on ground screws, ready for a lineside cabinet.",
+        startDate: "",
+        durationShifts: 1,
+      },
       sequence: [
         { id: id("s", 1), text: "Brief the gang at the access point; walk the route to the site." },
         { id: id("s", 2), text: "Carry the ground screws and leg sections from the van to the site." },
@@ -119,7 +135,16 @@ export const TEMPLATES: Template[] = [
           componentId: c("Modular equipment base: leg section"),
           quantity: 1,
           operation: "carry",
-          filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 40, durationHours: 1 },
+          filter: {
+            sex: "male",
+            zone: "knuckle-to-elbow",
+            reach: "close",
+            frequency: 0.5,
+            twistDeg: 0,
+            teamSize: 1,
+            carryDistanceM: 40,
+            durationHours: 1,
+          },
         },
         {
           id: id("t", 2),
@@ -128,7 +153,14 @@ export const TEMPLATES: Template[] = [
           quantity: 1,
           operation: "lift",
           niosh: closeLift(10, 90, 0.2),
-          filter: { sex: "male", zone: "floor-to-lower-leg", reach: "close", frequency: 0.2, twistDeg: 30, teamSize: 1 },
+          filter: {
+            sex: "male",
+            zone: "floor-to-lower-leg",
+            reach: "close",
+            frequency: 0.2,
+            twistDeg: 30,
+            teamSize: 1,
+          },
         },
         {
           id: id("t", 3),
@@ -136,12 +168,22 @@ export const TEMPLATES: Template[] = [
           componentId: c("Modular equipment base: top frame"),
           quantity: 1,
           operation: "team-lift",
-          filter: { sex: "male", zone: "knuckle-to-elbow", reach: "extended", frequency: 0.1, twistDeg: 0, teamSize: 2 },
+          filter: {
+            sex: "male",
+            zone: "knuckle-to-elbow",
+            reach: "extended",
+            frequency: 0.1,
+            twistDeg: 0,
+            teamSize: 2,
+          },
         },
       ],
       hazards: standardHazards(),
       people: standardPeople(),
-      lineside: nearTheLine("fenced", "Temporary fence between the base position and the line, erected before work and kept in place throughout."),
+      lineside: nearTheLine(
+        "fenced",
+        "Temporary fence between the base position and the line, erected before work and kept in place throughout.",
+      ),
       permits: [permitToDig()],
       buriedServices: buriedServicesChecks(),
       environment: siteEnvironment(),
@@ -153,7 +195,11 @@ export const TEMPLATES: Template[] = [
     description: "Concrete troughs delivered by track trolley, placed by two people, lids carried and fitted.",
     build: (c) => ({
       ...emptyContent(),
-      scope: { summary: "Lay a concrete cable trough route in the cess, with lids, from a trolley run along the track.", startDate: "", durationShifts: 3 },
+      scope: {
+        summary: "Lay a concrete cable trough route in the cess, with lids, from a trolley run along the track.",
+        startDate: "",
+        durationShifts: 3,
+      },
       sequence: [
         { id: id("s", 1), text: "Set up the trolley at the access point under the line blockage." },
         { id: id("s", 2), text: "Push the loaded trolley to the work area." },
@@ -167,7 +213,16 @@ export const TEMPLATES: Template[] = [
           componentId: c("Concrete cable trough, 1 m"),
           quantity: 6,
           operation: "push",
-          push: { mass: 6 * 42 + 60, gradient: 0.02, sex: "male", teamSize: 2, distanceM: 150, surface: "rail", braked: true, brakeOperator: "" },
+          push: {
+            mass: 6 * 42 + 60,
+            gradient: 0.02,
+            sex: "male",
+            teamSize: 2,
+            distanceM: 150,
+            surface: "rail",
+            braked: true,
+            brakeOperator: "",
+          },
         },
         {
           id: id("t", 2),
@@ -175,7 +230,14 @@ export const TEMPLATES: Template[] = [
           componentId: c("Concrete cable trough, 1 m"),
           quantity: 1,
           operation: "team-lift",
-          filter: { sex: "male", zone: "lower-leg-to-knuckle", reach: "close", frequency: 1, twistDeg: 60, teamSize: 2 },
+          filter: {
+            sex: "male",
+            zone: "lower-leg-to-knuckle",
+            reach: "close",
+            frequency: 1,
+            twistDeg: 60,
+            teamSize: 2,
+          },
         },
         {
           id: id("t", 3),
@@ -183,7 +245,16 @@ export const TEMPLATES: Template[] = [
           componentId: c("Concrete trough lid, 1 m"),
           quantity: 1,
           operation: "carry",
-          filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 1, twistDeg: 0, teamSize: 1, carryDistanceM: 8, durationHours: 3 },
+          filter: {
+            sex: "male",
+            zone: "knuckle-to-elbow",
+            reach: "close",
+            frequency: 1,
+            twistDeg: 0,
+            teamSize: 1,
+            carryDistanceM: 8,
+            durationHours: 3,
+          },
         },
       ],
       hazards: [
@@ -203,7 +274,10 @@ export const TEMPLATES: Template[] = [
         },
       ],
       people: standardPeople(),
-      lineside: nearTheLine("line-blockage", "The trolley runs and the troughs are placed only within the line blockage; the gang is clear of the line before it is given back."),
+      lineside: nearTheLine(
+        "line-blockage",
+        "The trolley runs and the troughs are placed only within the line blockage; the gang is clear of the line before it is given back.",
+      ),
       environment: siteEnvironment(),
     }),
   },
@@ -213,9 +287,17 @@ export const TEMPLATES: Template[] = [
     description: "A pre-assembled location cabinet and a chamber ring set with the lorry-loader crane.",
     build: (c) => ({
       ...emptyContent(),
-      scope: { summary: "Place a pre-assembled location cabinet on its base and set a precast chamber ring, both with the lorry-loader crane.", startDate: "", durationShifts: 1 },
+      scope: {
+        summary:
+          "Place a pre-assembled location cabinet on its base and set a precast chamber ring, both with the lorry-loader crane.",
+        startDate: "",
+        durationShifts: 1,
+      },
       sequence: [
-        { id: id("s", 1), text: "Position and set up the lorry-loader on the hardstanding; outriggers on spreader mats." },
+        {
+          id: id("s", 1),
+          text: "Position and set up the lorry-loader on the hardstanding; outriggers on spreader mats.",
+        },
         { id: id("s", 2), text: "Set out the exclusion zone; brief the lift team." },
         { id: id("s", 3), text: "Lift the chamber ring into the excavation." },
         { id: id("s", 4), text: "Lift the cabinet onto its base; bolt down before releasing the slings." },
@@ -239,7 +321,8 @@ export const TEMPLATES: Template[] = [
             wind: { inServiceLimitMs: 12, forecastMs: 5, largeSailArea: true },
             people: {},
             exclusionZoneM: 8,
-            groundBearingNotes: "Hardstanding of stiff clay under the road-stone; mats on level ground, checked for voids.",
+            groundBearingNotes:
+              "Hardstanding of stiff clay under the road-stone; mats on level ground, checked for voids.",
             groundBearing: { outriggerForceKn: 110, matLengthM: 1.2, matWidthM: 1.2, ground: "stiff-clay" },
             accessories: [{ item: "Bow shackle 2 t in each leg", kind: "shackle", wllKg: 2000, carries: "one-leg" }],
           },
@@ -265,7 +348,12 @@ export const TEMPLATES: Template[] = [
             groundBearingNotes: "Outrigger on the cess side stands on the compacted access track.",
             groundBearing: { outriggerForceKn: 140, matLengthM: 1.2, matWidthM: 1.2, ground: "stiff-clay" },
             accessories: [
-              { item: "Master link and shackle 3.25 t at the hook", kind: "shackle", wllKg: 3250, carries: "whole-load" },
+              {
+                item: "Master link and shackle 3.25 t at the hook",
+                kind: "shackle",
+                wllKg: 3250,
+                carries: "whole-load",
+              },
               { item: "Cast-in anchor 1.3 t, one per leg", kind: "eyebolt", wllKg: 1300, carries: "one-leg" },
             ],
           },
@@ -296,18 +384,23 @@ export const TEMPLATES: Template[] = [
         plant: ["Lorry-loader crane", "Four-leg chain sling", "Three-leg chain sling", "Spreader mats"],
         ppe: ["Hi-vis clothing", "Safety helmet with chin strap", "Safety boots", "Rigger gloves"],
       },
-      lineside: nearTheLine("line-blockage", "Lifts made only within the line blockage; the crane's slew limited away from the line throughout."),
+      lineside: nearTheLine(
+        "line-blockage",
+        "Lifts made only within the line blockage; the crane's slew limited away from the line throughout.",
+      ),
       environment: siteEnvironment(),
     }),
   },
   {
     id: "lineside-base",
     name: "Lineside equipment base and cable chamber",
-    description: "Parts run in on a track trolley, carried down the cess, passed into the chamber excavation; the chamber ring set with the lorry-loader.",
+    description:
+      "Parts run in on a track trolley, carried down the cess, passed into the chamber excavation; the chamber ring set with the lorry-loader.",
     build: (c) => ({
       ...emptyContent(),
       scope: {
-        summary: "Build a modular equipment base and set a precast cable chamber beside the line: parts run in on a braked track trolley from the access point, carried down the cess, passed down into the excavation; the chamber ring lifted in with the lorry-loader crane from the access road.",
+        summary:
+          "Build a modular equipment base and set a precast cable chamber beside the line: parts run in on a braked track trolley from the access point, carried down the cess, passed down into the excavation; the chamber ring lifted in with the lorry-loader crane from the access road.",
         startDate: "",
         durationShifts: 2,
       },
@@ -315,7 +408,10 @@ export const TEMPLATES: Template[] = [
         { id: id("s", 1), text: "Brief the gang at the access point; check the trolley's brake before loading." },
         { id: id("s", 2), text: "Run the loaded trolley to the site; the named person works the brake throughout." },
         { id: id("s", 3), text: "Carry the leg sections down the cess to the base position." },
-        { id: id("s", 4), text: "Pass the trough sections down into the chamber excavation to the person standing in it." },
+        {
+          id: id("s", 4),
+          text: "Pass the trough sections down into the chamber excavation to the person standing in it.",
+        },
         { id: id("s", 5), text: "Set the chamber ring with the lorry-loader crane from the access road." },
       ],
       tasks: [
@@ -325,7 +421,16 @@ export const TEMPLATES: Template[] = [
           componentId: c("Modular equipment base: leg section"),
           quantity: 8,
           operation: "push",
-          push: { mass: 8 * 18 + 80, gradient: -1 / 200, sex: "male", teamSize: 2, distanceM: 20, surface: "rail", braked: true, brakeOperator: "" },
+          push: {
+            mass: 8 * 18 + 80,
+            gradient: -1 / 200,
+            sex: "male",
+            teamSize: 2,
+            distanceM: 20,
+            surface: "rail",
+            braked: true,
+            brakeOperator: "",
+          },
           conditions: ["poor-light"],
         },
         {
@@ -334,7 +439,16 @@ export const TEMPLATES: Template[] = [
           componentId: c("Modular equipment base: leg section"),
           quantity: 1,
           operation: "carry",
-          filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 10, durationHours: 1 },
+          filter: {
+            sex: "male",
+            zone: "knuckle-to-elbow",
+            reach: "close",
+            frequency: 0.5,
+            twistDeg: 0,
+            teamSize: 1,
+            carryDistanceM: 10,
+            durationHours: 1,
+          },
           conditions: ["uneven-ground", "slope-or-steps"],
         },
         {
@@ -343,7 +457,14 @@ export const TEMPLATES: Template[] = [
           componentId: c("GRP cable trough, 1 m"),
           quantity: 1,
           operation: "team-lift",
-          filter: { sex: "male", zone: "below-standing-level", reach: "extended", frequency: 0.5, twistDeg: 0, teamSize: 2 },
+          filter: {
+            sex: "male",
+            zone: "below-standing-level",
+            reach: "extended",
+            frequency: 0.5,
+            twistDeg: 0,
+            teamSize: 2,
+          },
         },
         {
           id: id("t", 4),
@@ -365,7 +486,9 @@ export const TEMPLATES: Template[] = [
             exclusionZoneM: 6,
             groundBearingNotes: "Access road verge of firm clay: mats on level ground, checked for voids.",
             groundBearing: { outriggerForceKn: 100, matLengthM: 1.2, matWidthM: 1.2, ground: "firm-clay" },
-            accessories: [{ item: "Cast-in anchor 1.3 t, one per leg", kind: "eyebolt", wllKg: 1300, carries: "one-leg" }],
+            accessories: [
+              { item: "Cast-in anchor 1.3 t, one per leg", kind: "eyebolt", wllKg: 1300, carries: "one-leg" },
+            ],
           },
         },
       ],
@@ -378,7 +501,10 @@ export const TEMPLATES: Template[] = [
           likelihoodBefore: 2,
           severityBefore: 5,
           controls: [
-            { text: "Braked trolley only; brake tested before loading; one named person works it throughout", level: "engineering" },
+            {
+              text: "Braked trolley only; brake tested before loading; one named person works it throughout",
+              level: "engineering",
+            },
             { text: "Trolley never left unattended; scotched and braked when stopped", level: "administrative" },
           ],
           likelihoodAfter: 1,
@@ -400,10 +526,23 @@ export const TEMPLATES: Template[] = [
       ],
       people: {
         ...standardPeople(),
-        roles: [...standardPeople().roles, { role: "Trolley brake operator", name: "", competence: "" }, { role: "Appointed person", name: "", competence: "" }],
-        plant: ["Braked track trolley", "Lorry-loader crane", "Three-leg chain sling", "Outrigger mats 1.2 m", "Trench box"],
+        roles: [
+          ...standardPeople().roles,
+          { role: "Trolley brake operator", name: "", competence: "" },
+          { role: "Appointed person", name: "", competence: "" },
+        ],
+        plant: [
+          "Braked track trolley",
+          "Lorry-loader crane",
+          "Three-leg chain sling",
+          "Outrigger mats 1.2 m",
+          "Trench box",
+        ],
       },
-      lineside: nearTheLine("possession", "The trolley runs within the possession, between its limits; the base and chamber work continue behind the fence after it is given back."),
+      lineside: nearTheLine(
+        "possession",
+        "The trolley runs within the possession, between its limits; the base and chamber work continue behind the fence after it is given back.",
+      ),
       permits: [permitToDig()],
       buriedServices: buriedServicesChecks(),
       excavation: {
@@ -414,7 +553,8 @@ export const TEMPLATES: Template[] = [
         edgeProtection: "Barriers on all sides; covered with boards when left.",
         inspection: "",
         accessEgress: "Ladder inside the trench box, tied off, one metre above the edge.",
-        lowering: "Trough sections passed down to a second person standing in the excavation; the chamber ring lowered by the lorry-loader only.",
+        lowering:
+          "Trough sections passed down to a second person standing in the excavation; the chamber ring lowered by the lorry-loader only.",
       },
       environment: siteEnvironment(),
     }),

@@ -55,7 +55,13 @@ export type Change =
 
 /** Changes of one variable share a key: a combination changes each variable once. */
 const changeKey = (c: Change) =>
-  c.kind === "condition" ? `condition:${c.condition}` : c.kind === "h" || c.kind === "v" ? `${c.kind}:${c.end}` : c.kind === "accessory" ? `accessory:${c.index}` : c.kind;
+  c.kind === "condition"
+    ? `condition:${c.condition}`
+    : c.kind === "h" || c.kind === "v"
+      ? `${c.kind}:${c.end}`
+      : c.kind === "accessory"
+        ? `accessory:${c.index}`
+        : c.kind;
 
 export interface Suggestion {
   change: Change;
@@ -80,7 +86,11 @@ const MAX_SUGGESTIONS = 6;
 const rank = (band: Band) => BANDS.indexOf(band);
 
 /** The task (and a what-if component) with one change made. */
-export function applyChange(task: Task, component: RegisterEntry | undefined, change: Change): [Task, RegisterEntry | undefined] {
+export function applyChange(
+  task: Task,
+  component: RegisterEntry | undefined,
+  change: Change,
+): [Task, RegisterEntry | undefined] {
   const t: Task = { ...task };
   let c = component;
   switch (change.kind) {
@@ -96,7 +106,15 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
       break;
     case "pair":
       t.operation = "team-lift";
-      if (t.filter) t.filter = { ...t.filter, teamSize: 2, frequency: t.niosh?.frequency ?? t.filter.frequency, twistDeg: t.niosh ? Math.max(t.niosh.origin.a, t.niosh.destination.a) : t.filter.twistDeg, carryDistanceM: undefined, durationHours: undefined };
+      if (t.filter)
+        t.filter = {
+          ...t.filter,
+          teamSize: 2,
+          frequency: t.niosh?.frequency ?? t.filter.frequency,
+          twistDeg: t.niosh ? Math.max(t.niosh.origin.a, t.niosh.destination.a) : t.filter.twistDeg,
+          carryDistanceM: undefined,
+          durationHours: undefined,
+        };
       break;
     case "reach":
       if (t.filter) t.filter = { ...t.filter, reach: "close" };
@@ -132,14 +150,22 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
     case "wheel":
       if (t.filter && c) {
         t.operation = "push";
-        t.push = { mass: c.massKg * (task.quantity || 1) + BARROW_KG, gradient: 0, sex: t.filter.sex, teamSize: t.filter.teamSize, distanceM: t.filter.carryDistanceM, surface: "rough" };
+        t.push = {
+          mass: c.massKg * (task.quantity || 1) + BARROW_KG,
+          gradient: 0,
+          sex: t.filter.sex,
+          teamSize: t.filter.teamSize,
+          distanceM: t.filter.carryDistanceM,
+          surface: "rough",
+        };
       }
       break;
     case "level":
       if (t.push) t.push = { ...t.push, gradient: 0 };
       break;
     case "brake":
-      if (t.push) t.push = { ...t.push, braked: true, brakeOperator: t.push.brakeOperator?.trim() || "named in the plan" };
+      if (t.push)
+        t.push = { ...t.push, braked: true, brakeOperator: t.push.brakeOperator?.trim() || "named in the plan" };
       break;
     case "push-mass":
       if (t.push) t.push = { ...t.push, mass: change.kg };
@@ -151,7 +177,11 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
       if (t.lift) t.lift = { ...t.lift, ratedCapacity: change.kg };
       break;
     case "sling":
-      if (t.lift) t.lift = { ...t.lift, sling: { ...t.lift.sling, legWll: change.legKg, markedWll: change.markedKg ?? t.lift.sling.markedWll } };
+      if (t.lift)
+        t.lift = {
+          ...t.lift,
+          sling: { ...t.lift.sling, legWll: change.legKg, markedWll: change.markedKg ?? t.lift.sling.markedWll },
+        };
       break;
     case "sling-angle":
       if (t.lift) t.lift = { ...t.lift, sling: { ...t.lift.sling, angleFromVerticalDeg: change.deg } };
@@ -159,7 +189,12 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
     case "examine":
       if (t.lift?.liftDate) {
         const day = t.lift.liftDate;
-        t.lift = { ...t.lift, examinations: (t.lift.examinations ?? []).map((e) => (examinationOk(e, day) ? e : { ...e, lastExamined: day, schemeDueDate: undefined })) };
+        t.lift = {
+          ...t.lift,
+          examinations: (t.lift.examinations ?? []).map((e) =>
+            examinationOk(e, day) ? e : { ...e, lastExamined: day, schemeDueDate: undefined },
+          ),
+        };
       }
       break;
     case "wind":
@@ -172,10 +207,15 @@ export function applyChange(task: Task, component: RegisterEntry | undefined, ch
       t.conditions = (t.conditions ?? []).filter((x) => x !== change.condition);
       break;
     case "mat":
-      if (t.lift?.groundBearing) t.lift = { ...t.lift, groundBearing: { ...t.lift.groundBearing, matLengthM: change.m, matWidthM: change.m } };
+      if (t.lift?.groundBearing)
+        t.lift = { ...t.lift, groundBearing: { ...t.lift.groundBearing, matLengthM: change.m, matWidthM: change.m } };
       break;
     case "accessory":
-      if (t.lift?.accessories) t.lift = { ...t.lift, accessories: t.lift.accessories.map((a, i) => (i === change.index ? { ...a, wllKg: change.kg } : a)) };
+      if (t.lift?.accessories)
+        t.lift = {
+          ...t.lift,
+          accessories: t.lift.accessories.map((a, i) => (i === change.index ? { ...a, wllKg: change.kg } : a)),
+        };
       break;
   }
   return [t, c];
@@ -198,7 +238,14 @@ function sizeOf(change: Change, task: Task, load: number): number {
     case "v":
       return Math.abs(task.niosh![change.end].v - change.cm) / 75;
     case "twist":
-      return (Math.max(task.niosh ? Math.max(task.niosh.origin.a, task.niosh.destination.a) : 0, task.filter?.twistDeg ?? 0) - change.deg) / 180;
+      return (
+        (Math.max(
+          task.niosh ? Math.max(task.niosh.origin.a, task.niosh.destination.a) : 0,
+          task.filter?.twistDeg ?? 0,
+        ) -
+          change.deg) /
+        180
+      );
     case "frequency":
       return rel(task.niosh?.frequency ?? task.filter!.frequency, change.perMinute);
     case "carry":
@@ -269,7 +316,9 @@ export function describeChange(change: Change, task: Task): string {
         : `${where} height ${fmt(change.cm, 0)} cm instead of ${fmt(from, 0)} cm (a stand, bench or step)`;
     }
     case "twist":
-      return change.deg === 0 ? "No twisting: turn the feet, or re-arrange the workplace" : `Twist at most ${fmt(change.deg, 0)}° (turn the feet)`;
+      return change.deg === 0
+        ? "No twisting: turn the feet, or re-arrange the workplace"
+        : `Twist at most ${fmt(change.deg, 0)}° (turn the feet)`;
     case "frequency":
       return `${fmt(change.perMinute)} a minute instead of ${fmt(task.niosh?.frequency ?? task.filter!.frequency)} (share the work, or slow the pace)`;
     case "recovery":
@@ -314,12 +363,17 @@ function candidates(task: Task, score: TaskScore): Change[][] {
   const lists: Change[][] = [];
   const { niosh, filter, push, lift } = score.results;
   for (const condition of task.conditions ?? []) lists.push([{ kind: "condition", condition }]);
-  const down = (from: number, to: number, steps: number) => Array.from({ length: steps }, (_, i) => from - ((from - to) * (i + 1)) / steps);
+  const down = (from: number, to: number, steps: number) =>
+    Array.from({ length: steps }, (_, i) => from - ((from - to) * (i + 1)) / steps);
 
-  if (task.quantity > 1) lists.push(Array.from({ length: task.quantity - 1 }, (_, i) => ({ kind: "quantity", quantity: task.quantity - 1 - i })));
+  if (task.quantity > 1)
+    lists.push(
+      Array.from({ length: task.quantity - 1 }, (_, i) => ({ kind: "quantity", quantity: task.quantity - 1 - i })),
+    );
   if (task.operation === "lift" && task.filter) lists.push([{ kind: "pair" }]);
   const team = push?.inputs.teamSize ?? (task.operation !== "lift" ? filter?.inputs.teamSize : undefined);
-  if (team !== undefined && team < MAX_TEAM_SIZE) lists.push(Array.from({ length: MAX_TEAM_SIZE - team }, (_, i) => ({ kind: "team", people: team + 1 + i })));
+  if (team !== undefined && team < MAX_TEAM_SIZE)
+    lists.push(Array.from({ length: MAX_TEAM_SIZE - team }, (_, i) => ({ kind: "team", people: team + 1 + i })));
 
   if (niosh) {
     const frequency = niosh.inputs.frequency;
@@ -328,7 +382,11 @@ function candidates(task: Task, score: TaskScore): Change[][] {
       if (pos.h > METRIC.hMin) {
         // Beyond the equation's reach, its limit is the first thing to try.
         const from = Math.min(pos.h, METRIC.hMax);
-        lists.push([...(pos.h > METRIC.hMax ? [METRIC.hMax] : []), ...down(from, METRIC.hMin, 8).map(Math.floor)].filter((cm, i, all) => cm < pos.h && all.indexOf(cm) === i).map((cm) => ({ kind: "h", end, cm })));
+        lists.push(
+          [...(pos.h > METRIC.hMax ? [METRIC.hMax] : []), ...down(from, METRIC.hMin, 8).map(Math.floor)]
+            .filter((cm, i, all) => cm < pos.h && all.indexOf(cm) === i)
+            .map((cm) => ({ kind: "h", end, cm })),
+        );
       }
       if (pos.v !== METRIC.vOptimum) {
         const start = pos.v < 0 ? 0 : pos.v;
@@ -337,10 +395,21 @@ function candidates(task: Task, score: TaskScore): Change[][] {
       }
     }
     const twist = Math.max(niosh.inputs.origin.a, niosh.inputs.destination.a);
-    if (twist > 0) lists.push([...(twist > MAX_ASYMMETRY_DEG ? [MAX_ASYMMETRY_DEG] : []), 90, 45, 30, 0].filter((d) => d < twist).map((deg) => ({ kind: "twist", deg })));
-    if (frequency > 0.2) lists.push([12, 10, 8, 6, 5, 4, 3, 2, 1, 0.5, 0.2].filter((f) => f < frequency).map((perMinute) => ({ kind: "frequency", perMinute })));
+    if (twist > 0)
+      lists.push(
+        [...(twist > MAX_ASYMMETRY_DEG ? [MAX_ASYMMETRY_DEG] : []), 90, 45, 30, 0]
+          .filter((d) => d < twist)
+          .map((deg) => ({ kind: "twist", deg })),
+      );
+    if (frequency > 0.2)
+      lists.push(
+        [12, 10, 8, 6, 5, 4, 3, 2, 1, 0.5, 0.2]
+          .filter((f) => f < frequency)
+          .map((perMinute) => ({ kind: "frequency", perMinute })),
+      );
     const d = niosh.inputs.durationHours;
-    if (d <= 2 && niosh.derived.durationBand !== (d <= 1 ? "short" : "moderate")) lists.push([{ kind: "recovery", hours: Math.ceil((d <= 1 ? 1.2 : 0.3) * d * 10) / 10 }]);
+    if (d <= 2 && niosh.derived.durationBand !== (d <= 1 ? "short" : "moderate"))
+      lists.push([{ kind: "recovery", hours: Math.ceil((d <= 1 ? 1.2 : 0.3) * d * 10) / 10 }]);
   }
   if (filter) {
     const f = filter.inputs;
@@ -349,12 +418,14 @@ function candidates(task: Task, score: TaskScore): Change[][] {
     const best = ZONES.indexOf("knuckle-to-elbow");
     if (at !== best) {
       const path: Zone[] = [];
-      for (let i = at + Math.sign(best - at); i !== best + Math.sign(best - at); i += Math.sign(best - at)) path.push(ZONES[i]);
+      for (let i = at + Math.sign(best - at); i !== best + Math.sign(best - at); i += Math.sign(best - at))
+        path.push(ZONES[i]);
       lists.push(path.map((zone) => ({ kind: "zone", zone })));
     }
     if (!niosh) {
       if (f.twistDeg > 0) lists.push([90, 45, 0].filter((d) => d < f.twistDeg).map((deg) => ({ kind: "twist", deg })));
-      if (f.frequency > 0.5) lists.push([8, 2, 0.5].filter((x) => x < f.frequency).map((perMinute) => ({ kind: "frequency", perMinute })));
+      if (f.frequency > 0.5)
+        lists.push([8, 2, 0.5].filter((x) => x < f.frequency).map((perMinute) => ({ kind: "frequency", perMinute })));
     }
     if (f.carryDistanceM !== undefined && f.carryDistanceM > 0) {
       lists.push([20, 10, 5].filter((m) => m < f.carryDistanceM!).map((m) => ({ kind: "carry", m })));
@@ -364,25 +435,47 @@ function candidates(task: Task, score: TaskScore): Change[][] {
   if (push) {
     const p = push.inputs;
     if (p.gradient !== 0) lists.push([{ kind: "level" }]);
-    if (push.forceSource === "estimated") lists.push([0.75, 0.5, 0.25].map((k) => ({ kind: "push-mass", kg: Math.floor(p.mass * k) })));
+    if (push.forceSource === "estimated")
+      lists.push([0.75, 0.5, 0.25].map((k) => ({ kind: "push-mass", kg: Math.floor(p.mass * k) })));
     if (!p.braked && push.runsAway) lists.push([{ kind: "brake" }]);
-    if (p.distanceM !== undefined && p.distanceM > PUSH_DISTANCE_LIMIT_M) lists.push([{ kind: "push-distance", m: PUSH_DISTANCE_LIMIT_M }]);
+    if (p.distanceM !== undefined && p.distanceM > PUSH_DISTANCE_LIMIT_M)
+      lists.push([{ kind: "push-distance", m: PUSH_DISTANCE_LIMIT_M }]);
   }
   if (lift) {
     const l = lift.inputs;
-    if (lift.utilisation > UTILISATION.clearUpTo) lists.push([{ kind: "capacity", kg: Math.ceil(lift.hookLoad / UTILISATION.clearUpTo / 10) * 10 }]);
+    if (lift.utilisation > UTILISATION.clearUpTo)
+      lists.push([{ kind: "capacity", kg: Math.ceil(lift.hookLoad / UTILISATION.clearUpTo / 10) * 10 }]);
     if (!lift.slingOk) {
       // Each leg at the tension it carries, the assembly at the load it carries, both rounded up.
-      const legKg = Math.ceil(Math.max(lift.legTension / (l.sling.hitch === "choked" ? 0.8 : 1), lift.slingLoad / lift.modeFactor) / 10) * 10;
-      lists.push([{ kind: "sling", legKg, markedKg: l.sling.markedWll !== undefined ? Math.ceil(lift.slingLoad / 10) * 10 : undefined }]);
-      if (l.sling.legs > 1 && l.sling.angleFromVerticalDeg > 30) lists.push([45, 30].filter((d) => d < l.sling.angleFromVerticalDeg).map((deg) => ({ kind: "sling-angle", deg })));
+      const legKg =
+        Math.ceil(
+          Math.max(lift.legTension / (l.sling.hitch === "choked" ? 0.8 : 1), lift.slingLoad / lift.modeFactor) / 10,
+        ) * 10;
+      lists.push([
+        {
+          kind: "sling",
+          legKg,
+          markedKg: l.sling.markedWll !== undefined ? Math.ceil(lift.slingLoad / 10) * 10 : undefined,
+        },
+      ]);
+      if (l.sling.legs > 1 && l.sling.angleFromVerticalDeg > 30)
+        lists.push(
+          [45, 30].filter((d) => d < l.sling.angleFromVerticalDeg).map((deg) => ({ kind: "sling-angle", deg })),
+        );
     }
     if (lift.examinations.some((e) => e.status !== "in-date")) lists.push([{ kind: "examine" }]);
-    if (l.wind && l.wind.forecastMs > l.wind.inServiceLimitMs * WIND_MARGIN) lists.push([{ kind: "wind", ms: Math.floor(l.wind.inServiceLimitMs * WIND_MARGIN * 10) / 10 }]);
-    if (l.radiusM !== undefined && l.maxRadiusM !== undefined && l.radiusM > l.maxRadiusM) lists.push([{ kind: "radius", m: l.maxRadiusM }]);
+    if (l.wind && l.wind.forecastMs > l.wind.inServiceLimitMs * WIND_MARGIN)
+      lists.push([{ kind: "wind", ms: Math.floor(l.wind.inServiceLimitMs * WIND_MARGIN * 10) / 10 }]);
+    if (l.radiusM !== undefined && l.maxRadiusM !== undefined && l.radiusM > l.maxRadiusM)
+      lists.push([{ kind: "radius", m: l.maxRadiusM }]);
     const g = lift.ground;
     if (g && l.groundBearing && g.allowableKpa && g.ratio! > BEARING_MARGIN)
-      lists.push([{ kind: "mat", m: Math.ceil(Math.sqrt(l.groundBearing.outriggerForceKn / (g.allowableKpa * BEARING_MARGIN)) * 20) / 20 }]);
+      lists.push([
+        {
+          kind: "mat",
+          m: Math.ceil(Math.sqrt(l.groundBearing.outriggerForceKn / (g.allowableKpa * BEARING_MARGIN)) * 20) / 20,
+        },
+      ]);
     lift.accessoryChecks.forEach((a, index) => {
       if (!a.ok) lists.push([{ kind: "accessory", index, kg: Math.ceil(a.carriesKg / 10) * 10 }]);
     });
@@ -433,7 +526,9 @@ function lighterLoad(task: Task, component: RegisterEntry | undefined, score: Ta
   const kg = Math.floor(lo * 10) / 10;
   if (kg <= 0) return null;
   const band = bandAt(kg);
-  return rank(band) <= rank(target) ? { change: { kind: "load", kg }, band, size: (score.load - kg) / score.load } : null;
+  return rank(band) <= rank(target)
+    ? { change: { kind: "load", kg }, band, size: (score.load - kg) / score.load }
+    : null;
 }
 
 /**
@@ -450,7 +545,8 @@ function pressure(task: Task, score: TaskScore): Pressure {
   }
   return [rank(score.band ?? "stop"), holding, worst];
 }
-const lower = (a: Pressure, b: Pressure) => a[0] < b[0] || (a[0] === b[0] && (a[1] < b[1] || (a[1] === b[1] && a[2] < b[2])));
+const lower = (a: Pressure, b: Pressure) =>
+  a[0] < b[0] || (a[0] === b[0] && (a[1] < b[1] || (a[1] === b[1] && a[2] < b[2])));
 
 const MAX_COMBINED = 5;
 
@@ -516,14 +612,17 @@ export function solveForClear(task: Task, component: RegisterEntry | undefined, 
   if (score.band === "clear") return { suggestions: [], together: null, bestBand: "clear", reachesClear: true };
 
   const found = bestOfEachList(task, component, score).sort((a, b) => rank(a.band) - rank(b.band) || a.size - b.size);
-  const suggestions = found.slice(0, MAX_SUGGESTIONS).map((f) => ({ change: f.change, text: describeChange(f.change, task), band: f.band }));
+  const suggestions = found
+    .slice(0, MAX_SUGGESTIONS)
+    .map((f) => ({ change: f.change, text: describeChange(f.change, task), band: f.band }));
   let bestBand: Band = found.length ? found[0].band : score.band;
   // Combine where no single change reaches Clear, or only cutting the load does (the part may not split).
   let together: WhatIf["together"] = null;
   const otherBest = found.find((f) => f.change.kind !== "load")?.band ?? score.band;
   if (otherBest !== "clear") {
     together = combine(task, component, score);
-    if (together && rank(together.band) < rank(otherBest)) bestBand = rank(together.band) < rank(bestBand) ? together.band : bestBand;
+    if (together && rank(together.band) < rank(otherBest))
+      bestBand = rank(together.band) < rank(bestBand) ? together.band : bestBand;
     else together = null;
   }
   return { suggestions, together, bestBand, reachesClear: bestBand === "clear" };

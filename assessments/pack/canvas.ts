@@ -24,7 +24,9 @@ export class PackResources {
     private readonly doc: PDFDocument,
     fonts: PackFonts,
   ) {
-    Object.values(fonts).forEach((font: PackFont, i) => this.fontRefs.set(font, { name: `F${i + 1}`, ref: font.embedIn(doc) }));
+    Object.values(fonts).forEach((font: PackFont, i) =>
+      this.fontRefs.set(font, { name: `F${i + 1}`, ref: font.embedIn(doc) }),
+    );
   }
 
   font(font: PackFont) {
@@ -47,7 +49,9 @@ export class PackResources {
     // Latin-1: text is written as bytes (two per glyph) in literal strings. The fastest zlib level:
     // twice as quick as the default for a file about a tenth larger.
     const content = Buffer.from(ops.join("\n"), "latin1");
-    const stream = this.doc.context.stream(deflateSync(content, { level: constants.Z_BEST_SPEED }), { Filter: "FlateDecode" });
+    const stream = this.doc.context.stream(deflateSync(content, { level: constants.Z_BEST_SPEED }), {
+      Filter: "FlateDecode",
+    });
     page.node.addContentStream(this.doc.context.register(stream));
     for (const font of fonts) page.node.setFontDictionary(PDFName.of(this.font(font).name), this.font(font).ref);
     for (const image of images) page.node.setXObject(PDFName.of(this.imageName(image)), image.ref);
@@ -79,7 +83,10 @@ export class PageCanvas {
     return this.page.getHeight();
   }
 
-  drawText(text: string, { x, y, size, font, color }: { x: number; y: number; size: number; font: PackFont; color: RGB }) {
+  drawText(
+    text: string,
+    { x, y, size, font, color }: { x: number; y: number; size: number; font: PackFont; color: RGB },
+  ) {
     this.fonts.add(font);
     const selectFont = `/${this.resources.font(font).name} ${n(size)} Tf `;
     const fill = `${colour(color)} rg `;
@@ -89,19 +96,63 @@ export class PageCanvas {
     this.ops.push(`BT ${state}${n(x)} ${n(y)} Td (${font.encode(text)}) Tj ET`);
   }
 
-  drawLine({ start, end, thickness, color, dashArray }: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number; color: RGB; dashArray?: number[] }) {
+  drawLine({
+    start,
+    end,
+    thickness,
+    color,
+    dashArray,
+  }: {
+    start: { x: number; y: number };
+    end: { x: number; y: number };
+    thickness: number;
+    color: RGB;
+    dashArray?: number[];
+  }) {
     const dash = dashArray ? `[${dashArray.map(n).join(" ")}] 0 d ` : "";
-    this.ops.push(`q ${dash}${n(thickness)} w ${colour(color)} RG ${n(start.x)} ${n(start.y)} m ${n(end.x)} ${n(end.y)} l S Q`);
+    this.ops.push(
+      `q ${dash}${n(thickness)} w ${colour(color)} RG ${n(start.x)} ${n(start.y)} m ${n(end.x)} ${n(end.y)} l S Q`,
+    );
   }
 
-  drawRectangle({ x, y, width, height, color, borderColor, borderWidth = 1 }: { x: number; y: number; width: number; height: number; color?: RGB; borderColor?: RGB; borderWidth?: number }) {
+  drawRectangle({
+    x,
+    y,
+    width,
+    height,
+    color,
+    borderColor,
+    borderWidth = 1,
+  }: {
+    x: number;
+    y: number;
+    width: number;
+    height: number;
+    color?: RGB;
+    borderColor?: RGB;
+    borderWidth?: number;
+  }) {
     const box = `${n(x)} ${n(y)} ${n(width)} ${n(height)} re`;
     if (color) this.ops.push(`q ${colour(color)} rg ${box} f Q`);
     if (borderColor) this.ops.push(`q ${n(borderWidth)} w ${colour(borderColor)} RG ${box} S Q`);
   }
 
   /** A circle, filled and/or outlined; `size` is the radius, as in pdf-lib. */
-  drawCircle({ x, y, size: r, color, borderColor, borderWidth = 1 }: { x: number; y: number; size: number; color?: RGB; borderColor?: RGB; borderWidth?: number }) {
+  drawCircle({
+    x,
+    y,
+    size: r,
+    color,
+    borderColor,
+    borderWidth = 1,
+  }: {
+    x: number;
+    y: number;
+    size: number;
+    color?: RGB;
+    borderColor?: RGB;
+    borderWidth?: number;
+  }) {
     const k = r * KAPPA;
     const path =
       `${n(x + r)} ${n(y)} m ` +
@@ -115,7 +166,9 @@ export class PageCanvas {
 
   /** Many filled rectangles in one colour, as one path (a QR code's modules). */
   fillRectangles(rects: { x: number; y: number; width: number; height: number }[], color: RGB) {
-    this.ops.push(`q ${colour(color)} rg ${rects.map((r) => `${n(r.x)} ${n(r.y)} ${n(r.width)} ${n(r.height)} re`).join(" ")} f Q`);
+    this.ops.push(
+      `q ${colour(color)} rg ${rects.map((r) => `${n(r.x)} ${n(r.y)} ${n(r.width)} ${n(r.height)} re`).join(" ")} f Q`,
+    );
   }
 
   drawImage(image: PackImage, { x, y, width, height }: { x: number; y: number; width: number; height: number }) {

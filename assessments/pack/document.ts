@@ -12,8 +12,21 @@ import { GROUND_TYPES } from "../lift-plan/ground";
 import { DURATION_LABELS } from "../rules/niosh-frequency";
 import { CONDITION_TEXT } from "../rules/conditions";
 import { gradientText, SURFACE_LABELS } from "../rules/push";
-import { CONTROL_LEVEL_LABELS, NEAR_LINE_LABELS, OPERATION_LABELS, riskRating, type Content } from "../method-statement/content";
-import { buriedServicesRows, environmentRows, excavationRows, LINE_CAUTION, lineRows, permitRows } from "../method-statement/lineside";
+import {
+  CONTROL_LEVEL_LABELS,
+  NEAR_LINE_LABELS,
+  OPERATION_LABELS,
+  riskRating,
+  type Content,
+} from "../method-statement/content";
+import {
+  buriedServicesRows,
+  environmentRows,
+  excavationRows,
+  LINE_CAUTION,
+  lineRows,
+  permitRows,
+} from "../method-statement/lineside";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";
 import { fmt } from "../rules/format";
@@ -29,7 +42,16 @@ export const PACK_CAUTION =
 export interface PackInput {
   organisation: string;
   title: string;
-  job: { name: string; client: string; location: string; lineReference: string | null; mileage: string | null; accessPoint: string | null; siteContactName: string | null; siteContactPhone: string | null };
+  job: {
+    name: string;
+    client: string;
+    location: string;
+    lineReference: string | null;
+    mileage: string | null;
+    accessPoint: string | null;
+    siteContactName: string | null;
+    siteContactPhone: string | null;
+  };
   revision: {
     id: string;
     number: number;
@@ -46,7 +68,14 @@ export interface PackInput {
   componentNames: Record<string, string>;
   signatures: { name: string; role: string; signedAt: Date; png: Uint8Array }[];
   /** Briefings held against this revision and signed off, with who signed on. */
-  briefings: { place: string; startedAt: Date; completedAt: Date; foremanName: string; foremanSignature: Uint8Array | null; attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; png: Uint8Array }[] }[];
+  briefings: {
+    place: string;
+    startedAt: Date;
+    completedAt: Date;
+    foremanName: string;
+    foremanSignature: Uint8Array | null;
+    attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; png: Uint8Array }[];
+  }[];
   /** The public check page; printed on the cover with a QR code of it. */
   verifyUrl: string;
 }
@@ -69,21 +98,50 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   // A plain (uncompressed) entry, so /verify can name the revision even in an altered copy.
   // pdf-lib keeps the Info dictionary private; its trailer reference is public.
   const info = doc.context.lookup(doc.context.trailerInfo.Info);
-  (info as import("pdf-lib").PDFDict).set(PDFName.of("HeftwiseRevision"), PDFString.of(`heftwise-revision:${revision.id}`));
+  (info as import("pdf-lib").PDFDict).set(
+    PDFName.of("HeftwiseRevision"),
+    PDFString.of(`heftwise-revision:${revision.id}`),
+  );
 
   // Cover
-  w.page.drawRectangle({ x: 0, y: w.page.getHeight() - 70, width: w.page.getWidth(), height: 70, color: COLOURS.frame });
-  w.page.drawText("Heftwise", { x: MARGIN, y: w.page.getHeight() - 44, size: 20, font: fonts.bold, color: rgb(0.953, 0.937, 0.894) });
-  w.page.drawText(w.safe(input.organisation), { x: MARGIN + 120, y: w.page.getHeight() - 42, size: 11, font: fonts.regular, color: rgb(0.953, 0.937, 0.894) });
+  w.page.drawRectangle({
+    x: 0,
+    y: w.page.getHeight() - 70,
+    width: w.page.getWidth(),
+    height: 70,
+    color: COLOURS.frame,
+  });
+  w.page.drawText("Heftwise", {
+    x: MARGIN,
+    y: w.page.getHeight() - 44,
+    size: 20,
+    font: fonts.bold,
+    color: rgb(0.953, 0.937, 0.894),
+  });
+  w.page.drawText(w.safe(input.organisation), {
+    x: MARGIN + 120,
+    y: w.page.getHeight() - 42,
+    size: 11,
+    font: fonts.regular,
+    color: rgb(0.953, 0.937, 0.894),
+  });
   w.y -= 60;
   w.heading(input.title, 1);
-  w.text(`${revision.status === "approved" ? "Approved" : revision.status === "superseded" ? "Superseded" : "Draft for approval — not for use on site"} · revision ${revision.number}`, { size: 12, font: fonts.bold, color: revision.status === "approved" ? COLOURS.band.clear : COLOURS.band.act });
+  w.text(
+    `${revision.status === "approved" ? "Approved" : revision.status === "superseded" ? "Superseded" : "Draft for approval — not for use on site"} · revision ${revision.number}`,
+    { size: 12, font: fonts.bold, color: revision.status === "approved" ? COLOURS.band.clear : COLOURS.band.act },
+  );
   w.space(6);
   w.pairs([
     ["Job", input.job.name],
     ["Client", input.job.client],
     ["Location", input.job.location],
-    ...(input.job.lineReference ? ([["Line and mileage", [input.job.lineReference, input.job.mileage].filter(Boolean).join(", ")]] as [string, string][]) : []),
+    ...(input.job.lineReference
+      ? ([["Line and mileage", [input.job.lineReference, input.job.mileage].filter(Boolean).join(", ")]] as [
+          string,
+          string,
+        ][])
+      : []),
     ["Access point", input.job.accessPoint ?? "—"],
     ["Site contact", [input.job.siteContactName, input.job.siteContactPhone].filter(Boolean).join(", ") || "—"],
     ["Author", revision.authorName ?? "—"],
@@ -96,14 +154,38 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   w.space(8);
   const worst = worstBand(scores.map((s) => s.band).filter((b): b is Band => b !== null));
   w.ensure(30);
-  w.page.drawText("Worst band of the tasks:", { x: MARGIN, y: w.y - 12, size: 11, font: fonts.bold, color: COLOURS.ink });
+  w.page.drawText("Worst band of the tasks:", {
+    x: MARGIN,
+    y: w.y - 12,
+    size: 11,
+    font: fonts.bold,
+    color: COLOURS.ink,
+  });
   w.band(scores.some((s) => s.band) ? worst : null, MARGIN + 140, w.y - 16, 11);
   w.y -= 30;
   w.ensure(130);
   w.page.fillRectangles(qrModules(input.verifyUrl, MARGIN, w.y - 110, 110), COLOURS.ink);
-  w.page.drawText("Check this document", { x: MARGIN + 124, y: w.y - 30, size: 11, font: fonts.bold, color: COLOURS.ink });
-  w.page.drawText(w.safe(input.verifyUrl), { x: MARGIN + 124, y: w.y - 46, size: 9.5, font: fonts.regular, color: COLOURS.band.clear });
-  w.page.drawText("Upload it there to see whether it is the approved revision, unaltered.", { x: MARGIN + 124, y: w.y - 62, size: 9, font: fonts.regular, color: COLOURS.muted });
+  w.page.drawText("Check this document", {
+    x: MARGIN + 124,
+    y: w.y - 30,
+    size: 11,
+    font: fonts.bold,
+    color: COLOURS.ink,
+  });
+  w.page.drawText(w.safe(input.verifyUrl), {
+    x: MARGIN + 124,
+    y: w.y - 46,
+    size: 9.5,
+    font: fonts.regular,
+    color: COLOURS.band.clear,
+  });
+  w.page.drawText("Upload it there to see whether it is the approved revision, unaltered.", {
+    x: MARGIN + 124,
+    y: w.y - 62,
+    size: 9,
+    font: fonts.regular,
+    color: COLOURS.muted,
+  });
   w.y -= 124;
   w.text(PACK_CAUTION, { size: 10, font: fonts.italic, color: COLOURS.muted });
 
@@ -129,11 +211,24 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     w.heading(`Task ${i + 1}: ${task.description || OPERATION_LABELS[task.operation]}`, 2);
     w.ensure(24);
     const bw = w.band(s.band);
-    w.page.drawText(w.safe(`${OPERATION_LABELS[task.operation]} · rules version ${s.rulesVersion}`), { x: MARGIN + bw + 8, y: w.y - 11, size: 9.5, font: fonts.regular, color: COLOURS.muted });
+    w.page.drawText(w.safe(`${OPERATION_LABELS[task.operation]} · rules version ${s.rulesVersion}`), {
+      x: MARGIN + bw + 8,
+      y: w.y - 11,
+      size: 9.5,
+      font: fonts.regular,
+      color: COLOURS.muted,
+    });
     w.y -= 22;
-    if (s.load !== null) w.pairs([["Load", `${fmt(s.load)} kg${task.quantity > 1 ? ` (${task.quantity} × ${input.componentNames[task.componentId!] ?? "component"})` : ""}${s.estimatedMass ? " — ESTIMATED MASS: confirm by weighing" : ""}`]]);
+    if (s.load !== null)
+      w.pairs([
+        [
+          "Load",
+          `${fmt(s.load)} kg${task.quantity > 1 ? ` (${task.quantity} × ${input.componentNames[task.componentId!] ?? "component"})` : ""}${s.estimatedMass ? " — ESTIMATED MASS: confirm by weighing" : ""}`,
+        ],
+      ]);
     const { niosh, filter, push, lift } = s.results;
-    if (task.conditions?.length) w.pairs([["Working conditions", task.conditions.map((c) => CONDITION_TEXT[c].label).join("; ")]]);
+    if (task.conditions?.length)
+      w.pairs([["Working conditions", task.conditions.map((c) => CONDITION_TEXT[c].label).join("; ")]]);
     if (niosh) {
       w.heading("Revised NIOSH Lifting Equation", 3);
       const o = niosh.inputs.origin;
@@ -141,9 +236,20 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
       w.pairs([
         ["Hands at start (H, V, twist)", `${fmt(o.h)} cm, ${fmt(o.v)} cm, ${fmt(o.a)}°`],
         ["Hands at end (H, V, twist)", `${fmt(d.h)} cm, ${fmt(d.v)} cm, ${fmt(d.a)}°`],
-        ["Frequency, duration, grip", `${fmt(niosh.inputs.frequency)}/min, ${fmt(niosh.inputs.durationHours)} h, ${niosh.inputs.coupling}`],
-        ["Rest after, duration category", `${niosh.inputs.recoveryHours !== undefined ? `${fmt(niosh.inputs.recoveryHours)} h` : "not given"}; ${DURATION_LABELS[niosh.derived.durationBand]} column`],
-        ["HM, VM, DM, AM, FM, CM", [niosh.origin.hm, niosh.origin.vm, niosh.origin.dm, niosh.origin.am, niosh.origin.fm, niosh.origin.cm].map((x) => fmt(x, 2)).join(", ")],
+        [
+          "Frequency, duration, grip",
+          `${fmt(niosh.inputs.frequency)}/min, ${fmt(niosh.inputs.durationHours)} h, ${niosh.inputs.coupling}`,
+        ],
+        [
+          "Rest after, duration category",
+          `${niosh.inputs.recoveryHours !== undefined ? `${fmt(niosh.inputs.recoveryHours)} h` : "not given"}; ${DURATION_LABELS[niosh.derived.durationBand]} column`,
+        ],
+        [
+          "HM, VM, DM, AM, FM, CM",
+          [niosh.origin.hm, niosh.origin.vm, niosh.origin.dm, niosh.origin.am, niosh.origin.fm, niosh.origin.cm]
+            .map((x) => fmt(x, 2))
+            .join(", "),
+        ],
         ["RWL (limit)", niosh.li === null ? "none: outside the equation's range" : `${fmt(niosh.limit)} kg`],
         ["Lifting index", niosh.li === null ? "none: outside the equation's range" : fmt(niosh.li)],
       ]);
@@ -152,10 +258,21 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     if (filter) {
       w.heading("Guideline weights (HSE L23)", 3);
       w.pairs([
-        ["Figures for, zone, reach", `${filter.inputs.sex === "male" ? "men" : "women"}, ${filter.inputs.zone.replace(/-/g, " ")}, ${filter.inputs.reach}`],
-        ["Frequency, twist, team", `${fmt(filter.inputs.frequency)}/min, ${fmt(filter.inputs.twistDeg)}°, ${filter.inputs.teamSize}`],
-        ...(filter.inputs.carryDistanceM ? ([["Carried", `${fmt(filter.inputs.carryDistanceM)} m`]] as [string, string][]) : []),
-        ["Table figure, kept after reductions", `${fmt(filter.baseGuideline)} kg, ${fmt(filter.reductionFactor * 100, 0)} %`],
+        [
+          "Figures for, zone, reach",
+          `${filter.inputs.sex === "male" ? "men" : "women"}, ${filter.inputs.zone.replace(/-/g, " ")}, ${filter.inputs.reach}`,
+        ],
+        [
+          "Frequency, twist, team",
+          `${fmt(filter.inputs.frequency)}/min, ${fmt(filter.inputs.twistDeg)}°, ${filter.inputs.teamSize}`,
+        ],
+        ...(filter.inputs.carryDistanceM
+          ? ([["Carried", `${fmt(filter.inputs.carryDistanceM)} m`]] as [string, string][])
+          : []),
+        [
+          "Table figure, kept after reductions",
+          `${fmt(filter.baseGuideline)} kg, ${fmt(filter.reductionFactor * 100, 0)} %`,
+        ],
         ["Guideline (limit)", `${fmt(filter.guideline)} kg`],
         ["Index", filter.index === null ? "none: no guideline weight remains" : fmt(filter.index)],
       ]);
@@ -164,14 +281,23 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     if (push) {
       w.heading("Pushing and pulling", 3);
       w.pairs([
-        ["Mass, surface, gradient", `${fmt(push.inputs.mass)} kg, ${push.inputs.surface ? SURFACE_LABELS[push.inputs.surface] : "surface not stated (judged as rails)"}, ${gradientText(push.inputs.gradient)}`],
-        ["People, brake", `${push.inputs.teamSize} (${push.inputs.sex === "male" ? "men's" : "women's"} figures); ${push.inputs.braked ? `braked, worked by ${push.inputs.brakeOperator || "— not named"}` : "unbraked"}`],
+        [
+          "Mass, surface, gradient",
+          `${fmt(push.inputs.mass)} kg, ${push.inputs.surface ? SURFACE_LABELS[push.inputs.surface] : "surface not stated (judged as rails)"}, ${gradientText(push.inputs.gradient)}`,
+        ],
+        [
+          "People, brake",
+          `${push.inputs.teamSize} (${push.inputs.sex === "male" ? "men's" : "women's"} figures); ${push.inputs.braked ? `braked, worked by ${push.inputs.brakeOperator || "— not named"}` : "unbraked"}`,
+        ],
         ["Force to start (limit)", `${fmt(push.startForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
         ["Force to keep moving (limit)", `${fmt(push.sustainedForceN, 0)} N (${fmt(push.guidelineSustainedN, 0)} N)`],
         ...(push.inputs.braked
           ? ([["Holding and stopping", "by the brake"]] as [string, string][])
           : ([
-              ["Force to hold it on the slope (limit)", `${fmt(push.holdForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
+              [
+                "Force to hold it on the slope (limit)",
+                `${fmt(push.holdForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`,
+              ],
               ["Force to stop it (limit)", `${fmt(push.stopForceN, 0)} N (${fmt(push.guidelineStartN, 0)} N)`],
             ] as [string, string][])),
         ["Runs away if let go", push.runsAway ? "YES" : "no"],
@@ -179,11 +305,20 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
       ]);
       reasons(w, push.reasons, push.warnings);
     }
-    if (lift) liftSection(w, lift, input.content.tasks[i].lift?.exclusionZoneM, input.content.tasks[i].lift?.groundBearingNotes);
+    if (lift)
+      liftSection(
+        w,
+        lift,
+        input.content.tasks[i].lift?.exclusionZoneM,
+        input.content.tasks[i].lift?.groundBearingNotes,
+      );
     // From the stored snapshot: the changes the engine confirmed when the revision was scored.
     const advice = whatIfLines(s.whatIf);
     if (advice.length) {
-      w.text("What would bring it to clear (each change re-scored by the same rules):", { size: 9.5, font: fonts.bold });
+      w.text("What would bring it to clear (each change re-scored by the same rules):", {
+        size: 9.5,
+        font: fonts.bold,
+      });
       for (const a of advice) w.text(`- ${a}`, { size: 9.5, indent: 8 });
     }
     if (s.incomplete.length) w.text(`Incomplete: ${s.incomplete.join("; ")}.`, { size: 9.5, color: COLOURS.band.act });
@@ -194,12 +329,19 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   w.heading("Method statement");
   w.heading("Scope", 3);
   w.text(content.scope.summary || "—");
-  if (content.scope.startDate || content.scope.durationShifts) w.text(`Planned start ${content.scope.startDate || "—"}; ${content.scope.durationShifts} shift(s).`, { color: COLOURS.muted });
+  if (content.scope.startDate || content.scope.durationShifts)
+    w.text(`Planned start ${content.scope.startDate || "—"}; ${content.scope.durationShifts} shift(s).`, {
+      color: COLOURS.muted,
+    });
   linesideSections(w, content);
   w.heading("Sequence of work", 3);
   content.sequence.forEach((s, i) => w.text(`${i + 1}. ${s.text}`, { indent: 4 }));
   w.heading("People", 3);
-  w.table(["Role", "Name", "Competence"], content.people.roles.map((r) => [r.role, r.name, r.competence]), [0.34, 0.33, 0.33]);
+  w.table(
+    ["Role", "Name", "Competence"],
+    content.people.roles.map((r) => [r.role, r.name, r.competence]),
+    [0.34, 0.33, 0.33],
+  );
   w.heading("Plant and equipment", 3);
   w.text(content.people.plant.filter(Boolean).join("; ") || "—");
   w.heading("PPE", 3);
@@ -234,9 +376,26 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     const image = embedPng(doc, sig.png);
     const scale = Math.min(200 / image.width, 70 / image.height, 1);
     w.ensure(100);
-    w.page.drawImage(image, { x: MARGIN, y: w.y - image.height * scale - 4, width: image.width * scale, height: image.height * scale });
-    w.page.drawText(w.safe(`${sig.name}, ${sig.role}`), { x: MARGIN + 220, y: w.y - 20, size: 11, font: fonts.bold, color: COLOURS.ink });
-    w.page.drawText(`Countersigned ${date(sig.signedAt)}`, { x: MARGIN + 220, y: w.y - 36, size: 9.5, font: fonts.regular, color: COLOURS.muted });
+    w.page.drawImage(image, {
+      x: MARGIN,
+      y: w.y - image.height * scale - 4,
+      width: image.width * scale,
+      height: image.height * scale,
+    });
+    w.page.drawText(w.safe(`${sig.name}, ${sig.role}`), {
+      x: MARGIN + 220,
+      y: w.y - 20,
+      size: 11,
+      font: fonts.bold,
+      color: COLOURS.ink,
+    });
+    w.page.drawText(`Countersigned ${date(sig.signedAt)}`, {
+      x: MARGIN + 220,
+      y: w.y - 36,
+      size: 9.5,
+      font: fonts.regular,
+      color: COLOURS.muted,
+    });
     w.y -= Math.max(image.height * scale + 14, 50);
   }
 
@@ -244,13 +403,26 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   if (input.briefings.length) {
     w.heading("Briefing record", 2, 60);
     for (const b of input.briefings) {
-      w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, { font: fonts.bold });
+      w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, {
+        font: fonts.bold,
+      });
       for (const a of b.attendees) {
         const image = embedPng(doc, a.png);
         const scale = Math.min(120 / image.width, 32 / image.height, 1);
         w.ensure(40);
-        w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}, ${date(a.signedAt)}`), { x: MARGIN, y: w.y - 14, size: 9.5, font: fonts.regular, color: COLOURS.ink });
-        w.page.drawImage(image, { x: MARGIN + 360, y: w.y - 34, width: image.width * scale, height: image.height * scale });
+        w.page.drawText(w.safe(`${a.name} (${a.employer}), card ${a.cardNumber}, ${date(a.signedAt)}`), {
+          x: MARGIN,
+          y: w.y - 14,
+          size: 9.5,
+          font: fonts.regular,
+          color: COLOURS.ink,
+        });
+        w.page.drawImage(image, {
+          x: MARGIN + 360,
+          y: w.y - 34,
+          width: image.width * scale,
+          height: image.height * scale,
+        });
         w.y -= 40;
       }
       w.space(6);
@@ -259,7 +431,9 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
 
   w.finish((n, total) => [
     `Caution: ${PACK_CAUTION}`,
-    w.safe(`${input.title} · revision ${revision.number} (${revision.status}) · content SHA-256 ${revision.contentHash.slice(0, 16)}… · page ${n} of ${total}`),
+    w.safe(
+      `${input.title} · revision ${revision.number} (${revision.status}) · content SHA-256 ${revision.contentHash.slice(0, 16)}… · page ${n} of ${total}`,
+    ),
   ]);
   return doc;
 }
@@ -273,21 +447,27 @@ function qrModules(text: string, x: number, y: number, side: number) {
   const cell = side / (modules.size + 2);
   const rects: { x: number; y: number; width: number; height: number }[] = [];
   for (let row = 0; row < modules.size; row++) {
-    for (let col = 0; col < modules.size; ) {
+    for (let col = 0; col < modules.size;) {
       if (!modules.get(row, col)) {
         col++;
         continue;
       }
       const start = col;
       while (col < modules.size && modules.get(row, col)) col++;
-      rects.push({ x: x + (start + 1) * cell, y: y + side - (row + 2) * cell, width: (col - start) * cell, height: cell });
+      rects.push({
+        x: x + (start + 1) * cell,
+        y: y + side - (row + 2) * cell,
+        width: (col - start) * cell,
+        height: cell,
+      });
     }
   }
   return rects;
 }
 
 function reasons(w: Writer, list: Reason[], warnings: Warning[]) {
-  for (const warning of warnings) w.text(`Warning: ${warning.message}`, { size: 9.5, color: COLOURS.band.act, indent: 4 });
+  for (const warning of warnings)
+    w.text(`Warning: ${warning.message}`, { size: 9.5, color: COLOURS.band.act, indent: 4 });
   for (const r of list) {
     w.text(r.text, { size: 9.5, indent: 4, gap: 1 });
     w.text(`Source: ${r.source}`, { size: 8, color: COLOURS.muted, indent: 12 });
@@ -326,16 +506,38 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
   w.heading(`Lift plan — category ${lift.category}`, 3);
   const people = lift.inputs.people ?? {};
   w.pairs([
-    ["Hook load", `${fmt(lift.hookLoad)} kg (load ${fmt(lift.inputs.load)} + rigging ${fmt(lift.inputs.riggingMass)} + hook block ${fmt(lift.inputs.hookBlockMass)})`],
-    ["Rated capacity, radius", `${fmt(lift.inputs.ratedCapacity)} kg at ${lift.inputs.radiusM !== undefined ? `${fmt(lift.inputs.radiusM, 1)} m` : "—"} (max ${lift.inputs.maxRadiusM !== undefined ? `${fmt(lift.inputs.maxRadiusM, 1)} m` : "—"})`],
+    [
+      "Hook load",
+      `${fmt(lift.hookLoad)} kg (load ${fmt(lift.inputs.load)} + rigging ${fmt(lift.inputs.riggingMass)} + hook block ${fmt(lift.inputs.hookBlockMass)})`,
+    ],
+    [
+      "Rated capacity, radius",
+      `${fmt(lift.inputs.ratedCapacity)} kg at ${lift.inputs.radiusM !== undefined ? `${fmt(lift.inputs.radiusM, 1)} m` : "—"} (max ${lift.inputs.maxRadiusM !== undefined ? `${fmt(lift.inputs.maxRadiusM, 1)} m` : "—"})`,
+    ],
     ["Utilisation", `${fmt(lift.utilisation * 100, 0)} %`],
-    ["Sling", `${single ? "one sling" : `${lift.inputs.sling.legs} leg(s)`}, ${HITCH_LABELS[hitch]}, ${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical, WLL ${fmt(lift.inputs.sling.legWll)} kg ${single ? "straight" : "per leg"}`],
-    ["Assembly limit", `computed ${fmt(lift.computedSlingWll)} kg (mode factor ${fmt(lift.modeFactor)}); marked ${lift.inputs.sling.markedWll !== undefined ? `${fmt(lift.inputs.sling.markedWll)} kg` : "— not entered"}; rated ${fmt(lift.slingWll)} kg`],
-    ["Tension, result", `${fmt(lift.legTension)} kg per ${single ? "part" : "leg"} — ${lift.slingOk ? "passes" : "FAILS"}`],
+    [
+      "Sling",
+      `${single ? "one sling" : `${lift.inputs.sling.legs} leg(s)`}, ${HITCH_LABELS[hitch]}, ${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical, WLL ${fmt(lift.inputs.sling.legWll)} kg ${single ? "straight" : "per leg"}`,
+    ],
+    [
+      "Assembly limit",
+      `computed ${fmt(lift.computedSlingWll)} kg (mode factor ${fmt(lift.modeFactor)}); marked ${lift.inputs.sling.markedWll !== undefined ? `${fmt(lift.inputs.sling.markedWll)} kg` : "— not entered"}; rated ${fmt(lift.slingWll)} kg`,
+    ],
+    [
+      "Tension, result",
+      `${fmt(lift.legTension)} kg per ${single ? "part" : "leg"} — ${lift.slingOk ? "passes" : "FAILS"}`,
+    ],
     ["Category because", lift.categoryReasons.join("; ")],
     ["Lift date", lift.inputs.liftDate ?? "—"],
-    ...lift.examinations.map((e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string]),
-    ["Wind", lift.inputs.wind ? `forecast ${fmt(lift.inputs.wind.forecastMs, 1)} m/s, limit ${fmt(lift.inputs.wind.inServiceLimitMs, 1)} m/s` : "—"],
+    ...lift.examinations.map(
+      (e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string],
+    ),
+    [
+      "Wind",
+      lift.inputs.wind
+        ? `forecast ${fmt(lift.inputs.wind.forecastMs, 1)} m/s, limit ${fmt(lift.inputs.wind.inServiceLimitMs, 1)} m/s`
+        : "—",
+    ],
     ["Exclusion zone", exclusionZoneM !== undefined ? `${fmt(exclusionZoneM, 1)} m radius` : "—"],
     [
       "Ground bearing",
@@ -344,11 +546,26 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
         : "— not checked",
     ],
     ["Ground notes", groundNotes || "—"],
-    ...lift.accessoryChecks.map((a) => [`Accessory: ${a.item}`, `carries ${fmt(a.carriesKg, 0)} kg of ${fmt(a.wllKg, 0)} kg WLL — ${a.ok ? "passes" : "FAILS"}`] as [string, string]),
-    ["Appointed person", people.appointedPerson ? `${people.appointedPerson.name} (${people.appointedPerson.competenceRef})` : "—"],
-    ["Lift supervisor", people.liftSupervisor ? `${people.liftSupervisor.name} (${people.liftSupervisor.competenceRef})` : "—"],
+    ...lift.accessoryChecks.map(
+      (a) =>
+        [
+          `Accessory: ${a.item}`,
+          `carries ${fmt(a.carriesKg, 0)} kg of ${fmt(a.wllKg, 0)} kg WLL — ${a.ok ? "passes" : "FAILS"}`,
+        ] as [string, string],
+    ),
+    [
+      "Appointed person",
+      people.appointedPerson ? `${people.appointedPerson.name} (${people.appointedPerson.competenceRef})` : "—",
+    ],
+    [
+      "Lift supervisor",
+      people.liftSupervisor ? `${people.liftSupervisor.name} (${people.liftSupervisor.competenceRef})` : "—",
+    ],
     ["Operator", people.operator ? `${people.operator.name} (${people.operator.competenceRef})` : "—"],
-    ["Slinger/signaller", people.slingerSignaller ? `${people.slingerSignaller.name} (${people.slingerSignaller.competenceRef})` : "—"],
+    [
+      "Slinger/signaller",
+      people.slingerSignaller ? `${people.slingerSignaller.name} (${people.slingerSignaller.competenceRef})` : "—",
+    ],
   ]);
   // The sling, drawn: hook, legs at their angle, tension on each leg, the load.
   const height = 150;
@@ -361,30 +578,82 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
   const legs = lift.inputs.sling.legs;
   // A basket or endless sling: two parts, passing under the load.
   const part = Math.max(spread, 18);
-  const xs = single ? [cx - part, cx + part] : legs === 1 ? [cx] : legs === 2 ? [cx - spread, cx + spread] : legs === 3 ? [cx - spread, cx, cx + spread] : [cx - spread, cx - spread / 3, cx + spread / 3, cx + spread];
+  const xs = single
+    ? [cx - part, cx + part]
+    : legs === 1
+      ? [cx]
+      : legs === 2
+        ? [cx - spread, cx + spread]
+        : legs === 3
+          ? [cx - spread, cx, cx + spread]
+          : [cx - spread, cx - spread / 3, cx + spread / 3, cx + spread];
   w.page.drawCircle({ x: cx, y: top - 6, size: 4, color: COLOURS.ink });
   const colour = lift.slingOk ? COLOURS.frame : COLOURS.band.act;
   xs.forEach((x, i) => {
     w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x, y: top - 6 - drop }, thickness: 2, color: colour });
     // Every leg carries the same tension: label the outer legs only.
     if (i === 0 || i === xs.length - 1)
-      w.page.drawText(`${fmt(lift.legTension, 0)} kg`, { x: (cx + x) / 2 + (x < cx ? -46 : 6), y: top - 6 - drop / 2, size: 9, font: fonts.bold, color: colour });
+      w.page.drawText(`${fmt(lift.legTension, 0)} kg`, {
+        x: (cx + x) / 2 + (x < cx ? -46 : 6),
+        y: top - 6 - drop / 2,
+        size: 9,
+        font: fonts.bold,
+        color: colour,
+      });
   });
   if (legs > 1) {
-    w.page.drawLine({ start: { x: cx, y: top - 6 }, end: { x: cx, y: top - 6 - drop }, thickness: 0.6, color: COLOURS.muted, dashArray: [3, 3] });
-    w.page.drawText(`${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical`, { x: cx + 8, y: top - 40, size: 9, font: fonts.regular, color: COLOURS.band.clear });
+    w.page.drawLine({
+      start: { x: cx, y: top - 6 },
+      end: { x: cx, y: top - 6 - drop },
+      thickness: 0.6,
+      color: COLOURS.muted,
+      dashArray: [3, 3],
+    });
+    w.page.drawText(`${fmt(lift.inputs.sling.angleFromVerticalDeg, 1)}° from vertical`, {
+      x: cx + 8,
+      y: top - 40,
+      size: 9,
+      font: fonts.regular,
+      color: COLOURS.band.clear,
+    });
   }
-  const loadWidth = Math.max(120, (xs[xs.length - 1] - xs[0]) + 30);
-  w.page.drawRectangle({ x: cx - loadWidth / 2, y: top - 6 - drop - 30, width: loadWidth, height: 30, color: COLOURS.band.watch });
+  const loadWidth = Math.max(120, xs[xs.length - 1] - xs[0] + 30);
+  w.page.drawRectangle({
+    x: cx - loadWidth / 2,
+    y: top - 6 - drop - 30,
+    width: loadWidth,
+    height: 30,
+    color: COLOURS.band.watch,
+  });
   if (single) {
     const under = top - 6 - drop - 34;
-    w.page.drawLine({ start: { x: xs[0], y: top - 6 - drop }, end: { x: xs[0], y: under }, thickness: 2, color: colour });
+    w.page.drawLine({
+      start: { x: xs[0], y: top - 6 - drop },
+      end: { x: xs[0], y: under },
+      thickness: 2,
+      color: colour,
+    });
     w.page.drawLine({ start: { x: xs[0], y: under }, end: { x: xs[1], y: under }, thickness: 2, color: colour });
-    w.page.drawLine({ start: { x: xs[1], y: under }, end: { x: xs[1], y: top - 6 - drop }, thickness: 2, color: colour });
+    w.page.drawLine({
+      start: { x: xs[1], y: under },
+      end: { x: xs[1], y: top - 6 - drop },
+      thickness: 2,
+      color: colour,
+    });
   }
-  if (hitch === "choked" || hitch === "endless-choked") for (const x of xs) w.page.drawCircle({ x, y: top - 6 - drop - 5, size: 5, borderColor: colour, borderWidth: 1.5 });
-  w.page.drawText(`${fmt(lift.slingLoad, 0)} kg`, { x: cx - 20, y: top - drop - 26, size: 10, font: fonts.bold, color: rgb(1, 1, 1) });
+  if (hitch === "choked" || hitch === "endless-choked")
+    for (const x of xs) w.page.drawCircle({ x, y: top - 6 - drop - 5, size: 5, borderColor: colour, borderWidth: 1.5 });
+  w.page.drawText(`${fmt(lift.slingLoad, 0)} kg`, {
+    x: cx - 20,
+    y: top - drop - 26,
+    size: 10,
+    font: fonts.bold,
+    color: rgb(1, 1, 1),
+  });
   w.y = top - height;
-  w.text(`Hitch: ${HITCH_LABELS[hitch]}.${legs === 4 && !single ? " Four legs drawn; three are taken to share the load." : ""}`, { size: 8.5, color: COLOURS.muted });
+  w.text(
+    `Hitch: ${HITCH_LABELS[hitch]}.${legs === 4 && !single ? " Four legs drawn; three are taken to share the load." : ""}`,
+    { size: 8.5, color: COLOURS.muted },
+  );
   reasons(w, lift.reasons, lift.warnings);
 }

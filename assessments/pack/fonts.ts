@@ -14,7 +14,14 @@ import { CustomFontEmbedder, PDFContext, PDFObjectCopier, type PDFDocument, type
 type FontkitFont = ReturnType<typeof fontkit.create>;
 
 /** One byte of a glyph code inside a PDF literal string: parentheses, backslash and line ends escaped. */
-const literalByte = (b: number) => (b === 0x28 || b === 0x29 || b === 0x5c ? `\\${String.fromCharCode(b)}` : b === 0x0a ? "\\n" : b === 0x0d ? "\\r" : String.fromCharCode(b));
+const literalByte = (b: number) =>
+  b === 0x28 || b === 0x29 || b === 0x5c
+    ? `\\${String.fromCharCode(b)}`
+    : b === 0x0a
+      ? "\\n"
+      : b === 0x0d
+        ? "\\r"
+        : String.fromCharCode(b);
 /** A glyph id as the two bytes Identity-H expects. */
 const glyphCode = (id: number) => literalByte(id >> 8) + literalByte(id & 0xff);
 
@@ -58,7 +65,9 @@ export class PackFont {
 
   /** Adds the font to a document and returns its reference. */
   embedIn(doc: PDFDocument): PDFRef {
-    const copy = PDFObjectCopier.for(this.scratch.context, doc.context).copy(this.scratch.context.lookup(this.scratch.ref)!);
+    const copy = PDFObjectCopier.for(this.scratch.context, doc.context).copy(
+      this.scratch.context.lookup(this.scratch.ref)!,
+    );
     return doc.context.register(copy);
   }
 

@@ -27,9 +27,20 @@ export function embedPng(doc: PDFDocument, bytes: Uint8Array): PackImage {
     alpha[i] = data[i * 4 + 3];
     if (alpha[i] !== 255) opaque = false;
   }
-  const image = { Type: "XObject", Subtype: "Image", Width: width, Height: height, BitsPerComponent: 8, Filter: "FlateDecode" };
+  const image = {
+    Type: "XObject",
+    Subtype: "Image",
+    Width: width,
+    Height: height,
+    BitsPerComponent: 8,
+    Filter: "FlateDecode",
+  };
   const { context } = doc;
-  const mask = opaque ? undefined : context.register(context.stream(deflateSync(alpha), { ...image, ColorSpace: "DeviceGray" }));
-  const ref = context.register(context.stream(deflateSync(rgb), { ...image, ColorSpace: "DeviceRGB", ...(mask ? { SMask: mask } : {}) }));
+  const mask = opaque
+    ? undefined
+    : context.register(context.stream(deflateSync(alpha), { ...image, ColorSpace: "DeviceGray" }));
+  const ref = context.register(
+    context.stream(deflateSync(rgb), { ...image, ColorSpace: "DeviceRGB", ...(mask ? { SMask: mask } : {}) }),
+  );
   return { ref, width, height };
 }

@@ -26,7 +26,19 @@ export const COLOURS = {
 };
 
 /** Characters outside the shipped fonts' Latin set, written the long way rather than dropped. */
-const REPLACEMENTS: Record<string, string> = { "β": "beta ", "≤": "<=", "≥": ">=", "→": "->", "←": "<-", "✕": "x", "•": "-", "▲": "", "▼": "", "\u2212": "-", "\u00a0": " " };
+const REPLACEMENTS: Record<string, string> = {
+  β: "beta ",
+  "≤": "<=",
+  "≥": ">=",
+  "→": "->",
+  "←": "<-",
+  "✕": "x",
+  "•": "-",
+  "▲": "",
+  "▼": "",
+  "\u2212": "-",
+  "\u00a0": " ",
+};
 
 export class Writer {
   page!: PageCanvas;
@@ -115,7 +127,16 @@ export class Writer {
     return pieces;
   }
 
-  text(text: string, { size = 10, font = this.fonts.regular, color = COLOURS.ink, indent = 0, gap = 3 }: { size?: number; font?: PackFont; color?: RGB; indent?: number; gap?: number } = {}) {
+  text(
+    text: string,
+    {
+      size = 10,
+      font = this.fonts.regular,
+      color = COLOURS.ink,
+      indent = 0,
+      gap = 3,
+    }: { size?: number; font?: PackFont; color?: RGB; indent?: number; gap?: number } = {},
+  ) {
     for (const line of this.lines(text, font, size, this.width - indent)) {
       this.ensure(size + gap);
       this.y -= size;
@@ -131,7 +152,12 @@ export class Writer {
     this.space(level === 1 ? 4 : 10);
     this.text(text, { size, font: this.fonts.bold, gap: 6 });
     if (level < 3) {
-      this.page.drawLine({ start: { x: MARGIN, y: this.y + 2 }, end: { x: MARGIN + this.width, y: this.y + 2 }, thickness: 0.8, color: COLOURS.rule });
+      this.page.drawLine({
+        start: { x: MARGIN, y: this.y + 2 },
+        end: { x: MARGIN + this.width, y: this.y + 2 },
+        thickness: 0.8,
+        color: COLOURS.rule,
+      });
       this.space(6);
     }
   }
@@ -144,8 +170,24 @@ export class Writer {
       const count = Math.max(labelLines.length, valueLines.length);
       this.ensure(13 * count);
       const top = this.y;
-      labelLines.forEach((line, i) => this.page.drawText(line, { x: MARGIN, y: top - 10 - i * 13, size: 9.5, font: this.fonts.bold, color: COLOURS.muted }));
-      valueLines.forEach((line, i) => this.page.drawText(line, { x: MARGIN + labelWidth, y: top - 10 - i * 13, size: 10, font: this.fonts.regular, color: COLOURS.ink }));
+      labelLines.forEach((line, i) =>
+        this.page.drawText(line, {
+          x: MARGIN,
+          y: top - 10 - i * 13,
+          size: 9.5,
+          font: this.fonts.bold,
+          color: COLOURS.muted,
+        }),
+      );
+      valueLines.forEach((line, i) =>
+        this.page.drawText(line, {
+          x: MARGIN + labelWidth,
+          y: top - 10 - i * 13,
+          size: 10,
+          font: this.fonts.regular,
+          color: COLOURS.ink,
+        }),
+      );
       this.y = top - 13 * count - 2;
     }
   }
@@ -158,13 +200,27 @@ export class Writer {
       const height = Math.max(...wrapped.map((w) => w.length)) * 11.5 + 5;
       this.ensure(height);
       let x = MARGIN;
-      if (bold) this.page.drawRectangle({ x: MARGIN, y: this.y - height, width: this.width, height, color: COLOURS.paper });
+      if (bold)
+        this.page.drawRectangle({ x: MARGIN, y: this.y - height, width: this.width, height, color: COLOURS.paper });
       wrapped.forEach((lines, i) => {
-        lines.forEach((line, j) => this.page.drawText(line, { x: x + 3, y: this.y - 11 - j * 11.5, size: 9, font: bold ? this.fonts.bold : this.fonts.regular, color: COLOURS.ink }));
+        lines.forEach((line, j) =>
+          this.page.drawText(line, {
+            x: x + 3,
+            y: this.y - 11 - j * 11.5,
+            size: 9,
+            font: bold ? this.fonts.bold : this.fonts.regular,
+            color: COLOURS.ink,
+          }),
+        );
         x += widths[i];
       });
       this.y -= height;
-      this.page.drawLine({ start: { x: MARGIN, y: this.y }, end: { x: MARGIN + this.width, y: this.y }, thickness: 0.5, color: COLOURS.rule });
+      this.page.drawLine({
+        start: { x: MARGIN, y: this.y },
+        end: { x: MARGIN + this.width, y: this.y },
+        thickness: 0.5,
+        color: COLOURS.rule,
+      });
     };
     drawRow(head, true);
     for (const row of rows) drawRow(row, false);
@@ -180,7 +236,12 @@ export class Writer {
       this.page.drawRectangle({ x, y, width, height, color: COLOURS.band[band] });
       if (band === "stop")
         for (let hx = x - height; hx < x + width; hx += 6)
-          this.page.drawLine({ start: { x: Math.max(x, hx), y: y + Math.max(0, x - hx) }, end: { x: Math.min(x + width, hx + height), y: y + Math.min(height, x + width - hx) }, thickness: 1.2, color: rgb(0.3, 0.3, 0.3) });
+          this.page.drawLine({
+            start: { x: Math.max(x, hx), y: y + Math.max(0, x - hx) },
+            end: { x: Math.min(x + width, hx + height), y: y + Math.min(height, x + width - hx) },
+            thickness: 1.2,
+            color: rgb(0.3, 0.3, 0.3),
+          });
       this.page.drawText(label, { x: x + 6, y: y + 4, size, font: this.fonts.bold, color: rgb(1, 1, 1) });
     } else {
       this.page.drawRectangle({ x, y, width, height, borderColor: COLOURS.muted, borderWidth: 0.8 });
@@ -197,8 +258,15 @@ export class Writer {
     this.pages.forEach((page, i) => {
       const wrapped = footer(i + 1, this.pages.length).flatMap((t) => this.lines(t, this.fonts.regular, 7, this.width));
       const top = MARGIN + 8 + wrapped.length * 9;
-      page.drawLine({ start: { x: MARGIN, y: top + 4 }, end: { x: A4.width - MARGIN, y: top + 4 }, thickness: 0.6, color: COLOURS.rule });
-      wrapped.forEach((line, j) => page.drawText(line, { x: MARGIN, y: top - 7 - j * 9, size: 7, font: this.fonts.regular, color: COLOURS.muted }));
+      page.drawLine({
+        start: { x: MARGIN, y: top + 4 },
+        end: { x: A4.width - MARGIN, y: top + 4 },
+        thickness: 0.6,
+        color: COLOURS.rule,
+      });
+      wrapped.forEach((line, j) =>
+        page.drawText(line, { x: MARGIN, y: top - 7 - j * 9, size: 7, font: this.fonts.regular, color: COLOURS.muted }),
+      );
       page.finish();
     });
   }

@@ -6,7 +6,17 @@ import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { and, asc, eq, inArray, isNotNull } from "drizzle-orm";
 import type { Queryable } from "@/db/client";
-import { assessments, briefingAttendees, briefings, components, jobs, organisations, revisions, signatures, users } from "@/db/schema";
+import {
+  assessments,
+  briefingAttendees,
+  briefings,
+  components,
+  jobs,
+  organisations,
+  revisions,
+  signatures,
+  users,
+} from "@/db/schema";
 import { config } from "@/lib/config";
 import { woffToTtf } from "@/lib/woff";
 import { isUuid } from "@/lib/ids";
@@ -21,19 +31,26 @@ let fonts: Promise<PackFonts> | undefined;
 export function packFonts(): Promise<PackFonts> {
   const dir = path.join(process.cwd(), "fonts");
   fonts ??= Promise.all(
-    ["atkinson-hyperlegible-latin-400-normal.woff", "atkinson-hyperlegible-latin-700-normal.woff", "atkinson-hyperlegible-latin-400-italic.woff"].map(async (f) => PackFont.load(woffToTtf(await readFile(path.join(dir, f))))),
+    [
+      "atkinson-hyperlegible-latin-400-normal.woff",
+      "atkinson-hyperlegible-latin-700-normal.woff",
+      "atkinson-hyperlegible-latin-400-italic.woff",
+    ].map(async (f) => PackFont.load(woffToTtf(await readFile(path.join(dir, f))))),
   ).then(([regular, bold, italic]) => ({ regular, bold, italic }));
   return fonts;
 }
 
 export const verifyUrl = () => `${config().NEXTAUTH_URL.replace(/\/$/, "")}/verify`;
 
-
 /**
  * The pack PDF of a revision; signed when the organisation's key is given (fetch it before any
  * transaction: PGlite serves one connection, so a query outside an open transaction would wait on it).
  */
-export async function renderPack(tx: Queryable, revisionId: string, key?: { p12: Uint8Array; passphrase: string }): Promise<Uint8Array> {
+export async function renderPack(
+  tx: Queryable,
+  revisionId: string,
+  key?: { p12: Uint8Array; passphrase: string },
+): Promise<Uint8Array> {
   const [row] = await tx
     .select({ revision: revisions, assessment: assessments, job: jobs, organisation: organisations })
     .from(revisions)
@@ -42,14 +59,39 @@ export async function renderPack(tx: Queryable, revisionId: string, key?: { p12:
     .innerJoin(organisations, eq(organisations.id, revisions.organisationId))
     .where(eq(revisions.id, revisionId));
   const { revision, assessment, job, organisation } = row;
-  const nameOf = async (id: string | null) => (id ? ((await tx.select({ name: users.name }).from(users).where(eq(users.id, id)))[0]?.name ?? null) : null);
+  const nameOf = async (id: string | null) =>
+    id ? ((await tx.select({ name: users.name }).from(users).where(eq(users.id, id)))[0]?.name ?? null) : null;
   // The names of the components the tasks use (the rest of the register is not in the pack).
   const content = contentSchema.parse(revision.content);
   const componentIds = [...new Set(content.tasks.map((t) => t.componentId).filter(isUuid))];
-  const register = componentIds.length ? await tx.select({ id: components.id, name: components.name }).from(components).where(and(eq(components.organisationId, organisation.id), inArray(components.id, componentIds))) : [];
-  const signed = await tx.select().from(signatures).where(eq(signatures.revisionId, revisionId)).orderBy(asc(signatures.signedAt));
-  const held = await tx.select().from(briefings).where(and(eq(briefings.revisionId, revisionId), isNotNull(briefings.completedAt))).orderBy(asc(briefings.startedAt));
-  const attendees = held.length ? await tx.select().from(briefingAttendees).where(inArray(briefingAttendees.briefingId, held.map((b) => b.id))).orderBy(asc(briefingAttendees.signedAt)) : [];
+  const register = componentIds.length
+    ? await tx
+        .select({ id: components.id, name: components.name })
+        .from(components)
+        .where(and(eq(components.organisationId, organisation.id), inArray(components.id, componentIds)))
+    : [];
+  const signed = await tx
+    .select()
+    .from(signatures)
+    .where(eq(signatures.revisionId, revisionId))
+    .orderBy(asc(signatures.signedAt));
+  const held = await tx
+    .select()
+    .from(briefings)
+    .where(and(eq(briefings.revisionId, revisionId), isNotNull(briefings.completedAt)))
+    .orderBy(asc(briefings.startedAt));
+  const attendees = held.length
+    ? await tx
+        .select()
+        .from(briefingAttendees)
+        .where(
+          inArray(
+            briefingAttendees.briefingId,
+            held.map((b) => b.id),
+          ),
+        )
+        .orderBy(asc(briefingAttendees.signedAt))
+    : [];
   const doc = await buildPack(
     {
       organisation: organisation.name,
@@ -76,12 +118,25 @@ export async function renderPack(tx: Queryable, revisionId: string, key?: { p12:
         completedAt: b.completedAt!,
         foremanName: b.foremanName,
         foremanSignature: b.foremanSignature,
-        attendees: attendees.filter((a) => a.briefingId === b.id).map((a) => ({ name: a.name, employer: a.employer, cardNumber: a.cardNumber, signedAt: a.signedAt, png: a.signature })),
+        attendees: attendees
+          .filter((a) => a.briefingId === b.id)
+          .map((a) => ({
+            name: a.name,
+            employer: a.employer,
+            cardNumber: a.cardNumber,
+            signedAt: a.signedAt,
+            png: a.signature,
+          })),
       })),
       verifyUrl: verifyUrl(),
     },
     await packFonts(),
   );
   if (!key) return savePack(doc);
-  return savePack(doc, { p12: key.p12, passphrase: key.passphrase, signerName: organisation.name, location: job.location });
+  return savePack(doc, {
+    p12: key.p12,
+    passphrase: key.passphrase,
+    signerName: organisation.name,
+    location: job.location,
+  });
 }

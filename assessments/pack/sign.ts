@@ -34,15 +34,24 @@ function openP12(p12: Uint8Array, passphrase: string): OpenedKey {
   const cacheKey = createHash("sha256").update(p12).update(passphrase).digest("hex");
   let key = opened.get(cacheKey);
   if (!key) {
-    const parsed = forge.pkcs12.pkcs12FromAsn1(forge.asn1.fromDer(Buffer.from(p12).toString("binary")), false, passphrase);
+    const parsed = forge.pkcs12.pkcs12FromAsn1(
+      forge.asn1.fromDer(Buffer.from(p12).toString("binary")),
+      false,
+      passphrase,
+    );
     const certificate = parsed.getBags({ bagType: forge.pki.oids.certBag })[forge.pki.oids.certBag]![0].cert!;
-    const forgeKey = parsed.getBags({ bagType: forge.pki.oids.pkcs8ShroudedKeyBag })[forge.pki.oids.pkcs8ShroudedKeyBag]![0].key!;
+    const forgeKey = parsed.getBags({ bagType: forge.pki.oids.pkcs8ShroudedKeyBag })[
+      forge.pki.oids.pkcs8ShroudedKeyBag
+    ]![0].key!;
     const nativeKey = createPrivateKey(forge.pki.privateKeyToPem(forgeKey));
     key = {
       certificate,
       sign: (md) => {
         const digest = Buffer.from(md.digest().getBytes(), "binary");
-        return privateEncrypt({ key: nativeKey, padding: constants.RSA_PKCS1_PADDING }, Buffer.concat([SHA256_DIGEST_INFO, digest])).toString("binary");
+        return privateEncrypt(
+          { key: nativeKey, padding: constants.RSA_PKCS1_PADDING },
+          Buffer.concat([SHA256_DIGEST_INFO, digest]),
+        ).toString("binary");
       },
     };
     opened.set(cacheKey, key);

@@ -8,7 +8,16 @@ import { createHash } from "node:crypto";
 import { and, asc, desc, eq, ne } from "drizzle-orm";
 import { z } from "zod";
 import { getDb, type Tx } from "@/db/client";
-import { assessments, auditEvents, issuedPacks, organisations, revisions, signatures, storedFiles, users } from "@/db/schema";
+import {
+  assessments,
+  auditEvents,
+  issuedPacks,
+  organisations,
+  revisions,
+  signatures,
+  storedFiles,
+  users,
+} from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { config } from "@/lib/config";
 import { drawnSignatureSchema } from "@/lib/drawn-signature";
@@ -27,7 +36,13 @@ import { isAssignedToJob } from "../briefing/assignment";
 const appUrl = () => config().NEXTAUTH_URL.replace(/\/$/, "");
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 
-export async function storePack(tx: Tx, organisationId: string, revisionId: string, pdf: Uint8Array, kind: "draft" | "approved") {
+export async function storePack(
+  tx: Tx,
+  organisationId: string,
+  revisionId: string,
+  pdf: Uint8Array,
+  kind: "draft" | "approved",
+) {
   const file = await putFile(tx, organisationId, pdf, "application/pdf");
   await tx.insert(issuedPacks).values({ organisationId, revisionId, fileId: file.id, sha256: file.sha256, kind });
 }
@@ -38,32 +53,67 @@ async function person(id: string | null) {
   return (await db.query.users.findFirst({ where: eq(users.id, id) })) ?? null;
 }
 
-const packName = (title: string, number: number, kind: string) => `${title.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60)}-rev${number}-${kind}.pdf`;
+const packName = (title: string, number: number, kind: string) =>
+  `${title
+    .replace(/[^A-Za-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .slice(0, 60)}-rev${number}-${kind}.pdf`;
 
 /** Submits a complete draft to a named approver; refused (422) while anything required is missing. */
-export async function submitRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
+export async function submitRevision(
+  actor: Actor | null,
+  revisionId: string,
+  input: unknown,
+  { notify = true } = {},
+): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "assessments:submit");
   // Whose record first: another organisation's revision is "not found" whatever the body says.
   const current = await getRevision(actor, revisionId);
   const data = parseOrThrow(submitRevisionSchema, input);
-  if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
-  if (current.revision.version !== data.version) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
+  if (current.revision.status !== "draft")
+    throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
+  if (current.revision.version !== data.version)
+    throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
   const review = reviewContent(current.content, current.register);
   if (!review.canSubmit)
-    throw new AppError("validation", "The assessment is not complete", review.missing.map((m) => ({ path: m.step, message: m.message })));
+    throw new AppError(
+      "validation",
+      "The assessment is not complete",
+      review.missing.map((m) => ({ path: m.step, message: m.message })),
+    );
   const db = await getDb();
   const approver = await db.query.users.findFirst({ where: eq(users.id, data.approverId) });
   if (!approver || approver.organisationId !== actor.organisationId || approver.role !== "approver" || !approver.active)
-    throw new AppError("validation", "Some fields need attention", [{ path: "approverId", message: "Choose an active approver of your organisation" }]);
+    throw new AppError("validation", "Some fields need attention", [
+      { path: "approverId", message: "Choose an active approver of your organisation" },
+    ]);
   const hash = contentHash(current.content);
   await db.transaction(async (tx) => {
     const [updated] = await tx
       .update(revisions)
-      .set({ status: "submitted", approverId: approver.id, reviewDate: data.reviewDate, submittedAt: new Date(), contentHash: hash, results: review.scores, worstBand: review.worstBand, updatedAt: new Date() })
+      .set({
+        status: "submitted",
+        approverId: approver.id,
+        reviewDate: data.reviewDate,
+        submittedAt: new Date(),
+        contentHash: hash,
+        results: review.scores,
+        worstBand: review.worstBand,
+        updatedAt: new Date(),
+      })
       .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.status, "draft")))
       .returning({ id: revisions.id });
-    if (!updated) throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.submitted", entityType: "revision", entityId: revisionId, contentHash: hash, details: { approverId: approver.id } });
+    if (!updated)
+      throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.submitted",
+      entityType: "revision",
+      entityId: revisionId,
+      contentHash: hash,
+      details: { approverId: approver.id },
+    });
   });
   // After the commit: a failed e-mail is logged and shown, and never undoes the submission.
   return { mail: notify ? await sendApprovalRequest(actor, revisionId) : null };
@@ -82,7 +132,11 @@ async function sendApprovalRequest(actor: Actor, revisionId: string): Promise<Se
       await storePack(tx, actor.organisationId, revisionId, bytes, "draft");
       return bytes;
     });
-    attachment = { filename: packName(assessment.title, revision.number, "draft"), content: Buffer.from(pdf), contentType: "application/pdf" };
+    attachment = {
+      filename: packName(assessment.title, revision.number, "draft"),
+      content: Buffer.from(pdf),
+      contentType: "application/pdf",
+    };
   } catch (err) {
     // The submission stands; the e-mail says the pack is on the review page instead.
     console.error("draft pack failed", err);
@@ -92,23 +146,38 @@ async function sendApprovalRequest(actor: Actor, revisionId: string): Promise<Se
     paragraphs: [
       `Hello ${approver.name},`,
       `${actor.name} has submitted revision ${revision.number} of "${assessment.title}" (${job.name}) for your countersignature.`,
-      attachment ? "The draft pack is attached. Review it in Heftwise, then countersign it or return it with comments." : "Open the review page to read it, then countersign it or return it with comments.",
+      attachment
+        ? "The draft pack is attached. Review it in Heftwise, then countersign it or return it with comments."
+        : "Open the review page to read it, then countersign it or return it with comments.",
     ],
     action: { label: "Open the review", url: `${appUrl()}/reviews/${revisionId}` },
     footnote: "The attached draft is not for use on site until it is approved.",
   });
-  return sendMail({ organisationId: actor.organisationId, kind: "approval-request", to: approver.email, subject: `Review requested: ${assessment.title} (rev. ${revision.number})`, attachments: attachment ? [attachment] : undefined, ...body });
+  return sendMail({
+    organisationId: actor.organisationId,
+    kind: "approval-request",
+    to: approver.email,
+    subject: `Review requested: ${assessment.title} (rev. ${revision.number})`,
+    attachments: attachment ? [attachment] : undefined,
+    ...body,
+  });
 }
 
 /** The revision as its approver reviews it: only the named approver, only while submitted or after. */
 export async function getReview(actor: Actor | null, revisionId: string) {
   authorize(actor, "reviews:read");
   const db = await getDb();
-  const [row] = z.uuid().safeParse(revisionId).success ? await db.select().from(revisions).where(eq(revisions.id, revisionId)) : [];
-  if (!row || row.organisationId !== actor.organisationId || row.status === "draft") throw AppError.notFound("Revision");
+  const [row] = z.uuid().safeParse(revisionId).success
+    ? await db.select().from(revisions).where(eq(revisions.id, revisionId))
+    : [];
+  if (!row || row.organisationId !== actor.organisationId || row.status === "draft")
+    throw AppError.notFound("Revision");
   if (row.approverId !== actor.id) throw new AppError("forbidden", "This revision was submitted to another approver");
   const data = await loadRevision(actor.organisationId, revisionId);
-  const signed = await db.select({ name: signatures.signerName, role: signatures.signerRole, signedAt: signatures.signedAt }).from(signatures).where(eq(signatures.revisionId, revisionId));
+  const signed = await db
+    .select({ name: signatures.signerName, role: signatures.signerRole, signedAt: signatures.signedAt })
+    .from(signatures)
+    .where(eq(signatures.revisionId, revisionId));
   return { ...data, signatures: signed, author: await person(row.authorId) };
 }
 
@@ -129,12 +198,18 @@ export const returnSchema = z.object({
 async function submittedToMe(actor: Actor, revisionId: string, version: number) {
   const { revision } = await getReview(actor, revisionId);
   if (revision.status !== "submitted") throw new AppError("conflict", `This revision is already ${revision.status}.`);
-  if (revision.version !== version) throw new AppError("conflict", "The revision changed since you opened it. Reload the page.");
+  if (revision.version !== version)
+    throw new AppError("conflict", "The revision changed since you opened it. Reload the page.");
   return revision;
 }
 
 /** Countersigns: locks the revision, supersedes the previous approved one, stores the signed pack. All or nothing. */
-export async function approveRevision(actor: Actor | null, revisionId: string, input: unknown, { notify = true } = {}): Promise<{ mail: SendOutcome | null }> {
+export async function approveRevision(
+  actor: Actor | null,
+  revisionId: string,
+  input: unknown,
+  { notify = true } = {},
+): Promise<{ mail: SendOutcome | null }> {
   authorize(actor, "reviews:decide");
   const data = await parseOrThrowAsync(approveSchema, input);
   const png = data.signature;
@@ -153,20 +228,53 @@ export async function approveRevision(actor: Actor | null, revisionId: string, i
     const superseded = await tx
       .update(revisions)
       .set({ status: "superseded", updatedAt: new Date() })
-      .where(and(eq(revisions.assessmentId, revision.assessmentId), eq(revisions.status, "approved"), ne(revisions.id, revisionId)))
+      .where(
+        and(
+          eq(revisions.assessmentId, revision.assessmentId),
+          eq(revisions.status, "approved"),
+          ne(revisions.id, revisionId),
+        ),
+      )
       .returning({ id: revisions.id, number: revisions.number });
-    await tx.insert(signatures).values({ organisationId: actor.organisationId, revisionId, signerId: actor.id, signerName: data.name, signerRole: data.role, image: png, contentHash: hash });
+    await tx.insert(signatures).values({
+      organisationId: actor.organisationId,
+      revisionId,
+      signerId: actor.id,
+      signerName: data.name,
+      signerRole: data.role,
+      image: png,
+      contentHash: hash,
+    });
     const pdf = await renderPack(tx, revisionId, key);
     await storePack(tx, actor.organisationId, revisionId, pdf, "approved");
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.approved", entityType: "revision", entityId: revisionId, contentHash: hash, details: { signerName: data.name, signerRole: data.role, packSha256: sha256(pdf) } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.approved",
+      entityType: "revision",
+      entityId: revisionId,
+      contentHash: hash,
+      details: { signerName: data.name, signerRole: data.role, packSha256: sha256(pdf) },
+    });
     for (const s of superseded)
-      await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.superseded", entityType: "revision", entityId: s.id, details: { by: revisionId } });
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "revision.superseded",
+        entityType: "revision",
+        entityId: s.id,
+        details: { by: revisionId },
+      });
   });
   return { mail: notify ? await notifyAuthor(actor, revisionId, "approved") : null };
 }
 
 /** Returns the revision to its author as a draft, with comments per section. */
-export async function returnRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ mail: SendOutcome }> {
+export async function returnRevision(
+  actor: Actor | null,
+  revisionId: string,
+  input: unknown,
+): Promise<{ mail: SendOutcome }> {
   authorize(actor, "reviews:decide");
   const data = parseOrThrow(returnSchema, input);
   const revision = await submittedToMe(actor, revisionId, data.version);
@@ -175,18 +283,40 @@ export async function returnRevision(actor: Actor | null, revisionId: string, in
   await db.transaction(async (tx) => {
     const [back] = await tx
       .update(revisions)
-      .set({ status: "draft", returnComments: { by: actor.name, at: new Date().toISOString(), comments }, version: revision.version + 1, updatedAt: new Date() })
+      .set({
+        status: "draft",
+        returnComments: { by: actor.name, at: new Date().toISOString(), comments },
+        version: revision.version + 1,
+        updatedAt: new Date(),
+      })
       .where(and(eq(revisions.id, revisionId), eq(revisions.status, "submitted"), eq(revisions.version, data.version)))
       .returning({ id: revisions.id });
     if (!back) throw new AppError("conflict", "The revision changed since you opened it. Reload the page.");
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.returned", entityType: "revision", entityId: revisionId, contentHash: revision.contentHash, details: { sections: Object.keys(comments) } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.returned",
+      entityType: "revision",
+      entityId: revisionId,
+      contentHash: revision.contentHash,
+      details: { sections: Object.keys(comments) },
+    });
   });
   return { mail: await notifyAuthor(actor, revisionId, "returned", comments) };
 }
 
-async function notifyAuthor(actor: Actor, revisionId: string, outcome: "approved" | "returned", comments?: Record<string, string>): Promise<SendOutcome> {
+async function notifyAuthor(
+  actor: Actor,
+  revisionId: string,
+  outcome: "approved" | "returned",
+  comments?: Record<string, string>,
+): Promise<SendOutcome> {
   const db = await getDb();
-  const [row] = await db.select({ revision: revisions, title: assessments.title }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).where(eq(revisions.id, revisionId));
+  const [row] = await db
+    .select({ revision: revisions, title: assessments.title })
+    .from(revisions)
+    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+    .where(eq(revisions.id, revisionId));
   const author = await person(row.revision.authorId);
   if (!author) return { id: "", status: "failed", error: "The author has no account" };
   const link = `${appUrl()}/revisions/${revisionId}`;
@@ -194,15 +324,28 @@ async function notifyAuthor(actor: Actor, revisionId: string, outcome: "approved
     outcome === "approved"
       ? renderMail({
           heading: `Approved: ${row.title}`,
-          paragraphs: [`Hello ${author.name},`, `${actor.name} countersigned revision ${row.revision.number}. It is locked, and the signed pack is ready to download and brief from.`],
+          paragraphs: [
+            `Hello ${author.name},`,
+            `${actor.name} countersigned revision ${row.revision.number}. It is locked, and the signed pack is ready to download and brief from.`,
+          ],
           action: { label: "Open the approved revision", url: link },
         })
       : renderMail({
           heading: `Returned with comments: ${row.title}`,
-          paragraphs: [`Hello ${author.name},`, `${actor.name} returned revision ${row.revision.number} to you. It is a draft again.`, ...Object.entries(comments ?? {}).map(([step, text]) => `${step}: ${text}`)],
+          paragraphs: [
+            `Hello ${author.name},`,
+            `${actor.name} returned revision ${row.revision.number} to you. It is a draft again.`,
+            ...Object.entries(comments ?? {}).map(([step, text]) => `${step}: ${text}`),
+          ],
           action: { label: "Open the draft", url: link },
         });
-  return sendMail({ organisationId: actor.organisationId, kind: outcome === "approved" ? "revision-approved" : "revision-returned", to: author.email, subject: `${outcome === "approved" ? "Approved" : "Returned"}: ${row.title} (rev. ${row.revision.number})`, ...body });
+  return sendMail({
+    organisationId: actor.organisationId,
+    kind: outcome === "approved" ? "revision-approved" : "revision-returned",
+    to: author.email,
+    subject: `${outcome === "approved" ? "Approved" : "Returned"}: ${row.title} (rev. ${row.revision.number})`,
+    ...body,
+  });
 }
 
 /** A new draft copied from the latest approved revision; refused while a draft or submission exists. */
@@ -212,25 +355,57 @@ export async function startNewRevision(actor: Actor | null, revisionId: string):
   if (revision.status !== "approved") throw new AppError("conflict", "A new revision starts from the approved one.");
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const siblings = await tx.select().from(revisions).where(eq(revisions.assessmentId, revision.assessmentId)).orderBy(desc(revisions.number));
-    if (siblings.some((s) => s.status === "draft" || s.status === "submitted")) throw new AppError("conflict", "This assessment already has a revision in progress.");
+    const siblings = await tx
+      .select()
+      .from(revisions)
+      .where(eq(revisions.assessmentId, revision.assessmentId))
+      .orderBy(desc(revisions.number));
+    if (siblings.some((s) => s.status === "draft" || s.status === "submitted"))
+      throw new AppError("conflict", "This assessment already has a revision in progress.");
     // The new draft becomes the assessment's latest; the unique index allows one at a time.
-    await tx.update(revisions).set({ isLatest: false }).where(and(eq(revisions.assessmentId, revision.assessmentId), eq(revisions.isLatest, true)));
+    await tx
+      .update(revisions)
+      .set({ isLatest: false })
+      .where(and(eq(revisions.assessmentId, revision.assessmentId), eq(revisions.isLatest, true)));
     const [created] = await tx
       .insert(revisions)
-      .values({ organisationId: actor.organisationId, assessmentId: revision.assessmentId, number: siblings[0].number + 1, isLatest: true, content: revision.content, results: revision.results, worstBand: revision.worstBand, authorId: actor.id })
+      .values({
+        organisationId: actor.organisationId,
+        assessmentId: revision.assessmentId,
+        number: siblings[0].number + 1,
+        isLatest: true,
+        content: revision.content,
+        results: revision.results,
+        worstBand: revision.worstBand,
+        authorId: actor.id,
+      })
       .returning({ id: revisions.id });
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "revision.started", entityType: "revision", entityId: created.id, contentHash: contentHash(revision.content), details: { from: revision.id } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.started",
+      entityType: "revision",
+      entityId: created.id,
+      contentHash: contentHash(revision.content),
+      details: { from: revision.id },
+    });
     return { revisionId: created.id };
   });
 }
 
 /** The newest pack of a revision (signed once approved), for those allowed to see it. */
-export async function getPackFile(actor: Actor | null, revisionId: string): Promise<{ filename: string; data: Uint8Array }> {
+export async function getPackFile(
+  actor: Actor | null,
+  revisionId: string,
+): Promise<{ filename: string; data: Uint8Array }> {
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   const db = await getDb();
   const [row] = z.uuid().safeParse(revisionId).success
-    ? await db.select({ revision: revisions, title: assessments.title, jobId: assessments.jobId }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).where(eq(revisions.id, revisionId))
+    ? await db
+        .select({ revision: revisions, title: assessments.title, jobId: assessments.jobId })
+        .from(revisions)
+        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+        .where(eq(revisions.id, revisionId))
     : [];
   if (!row || row.revision.organisationId !== actor.organisationId) throw AppError.notFound("Pack");
   const r = row.revision;
@@ -238,7 +413,9 @@ export async function getPackFile(actor: Actor | null, revisionId: string): Prom
     can(actor, "assessments:read") ||
     (can(actor, "reviews:read") && r.approverId === actor.id) ||
     // A foreman: the same rule as the briefings — approved work of the jobs they are assigned to.
-    (can(actor, "briefings:run") && (r.status === "approved" || r.status === "superseded") && (await isAssignedToJob(actor, row.jobId)));
+    (can(actor, "briefings:run") &&
+      (r.status === "approved" || r.status === "superseded") &&
+      (await isAssignedToJob(actor, row.jobId)));
   if (!allowed) throw new AppError("forbidden", "Your role does not allow this");
   const [pack] = await db
     .select({ kind: issuedPacks.kind, data: storedFiles.data })
@@ -254,7 +431,15 @@ export async function getPackFile(actor: Actor | null, revisionId: string): Prom
 }
 
 export type Verification =
-  | { result: "authentic"; status: string; title: string; revision: number; organisation: string; approvedAt: Date | null; kind: string }
+  | {
+      result: "authentic";
+      status: string;
+      title: string;
+      revision: number;
+      organisation: string;
+      approvedAt: Date | null;
+      kind: string;
+    }
   | { result: "altered"; status: string; title: string; revision: number; organisation: string }
   | { result: "unknown" };
 
@@ -267,25 +452,51 @@ export async function verifyPack(data: Uint8Array): Promise<Verification> {
   const hash = sha256(data);
   const describe = async (revisionId: string) => {
     const [row] = await db
-      .select({ status: revisions.status, number: revisions.number, approvedAt: revisions.approvedAt, title: assessments.title, organisation: organisations.name })
+      .select({
+        status: revisions.status,
+        number: revisions.number,
+        approvedAt: revisions.approvedAt,
+        title: assessments.title,
+        organisation: organisations.name,
+      })
       .from(revisions)
       .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
       .innerJoin(organisations, eq(organisations.id, revisions.organisationId))
       .where(eq(revisions.id, revisionId));
     return row;
   };
-  const [issued] = await db.select().from(issuedPacks).where(eq(issuedPacks.sha256, hash)).orderBy(asc(issuedPacks.createdAt)).limit(1);
+  const [issued] = await db
+    .select()
+    .from(issuedPacks)
+    .where(eq(issuedPacks.sha256, hash))
+    .orderBy(asc(issuedPacks.createdAt))
+    .limit(1);
   if (issued) {
     const r = await describe(issued.revisionId);
-    return { result: "authentic", status: r.status, title: r.title, revision: r.number, organisation: r.organisation, approvedAt: r.approvedAt, kind: issued.kind };
+    return {
+      result: "authentic",
+      status: r.status,
+      title: r.title,
+      revision: r.number,
+      organisation: r.organisation,
+      approvedAt: r.approvedAt,
+      kind: issued.kind,
+    };
   }
   // An altered copy is named only when Heftwise issued a pack of that revision: a file that merely
   // contains a revision's id (a draft's, say) learns nothing about it.
-  const named = Buffer.from(data).toString("latin1").match(/heftwise-revision:([0-9a-f-]{36})/);
+  const named = Buffer.from(data)
+    .toString("latin1")
+    .match(/heftwise-revision:([0-9a-f-]{36})/);
   if (named) {
-    const [issuedForRevision] = await db.select({ id: issuedPacks.id }).from(issuedPacks).where(eq(issuedPacks.revisionId, named[1])).limit(1);
+    const [issuedForRevision] = await db
+      .select({ id: issuedPacks.id })
+      .from(issuedPacks)
+      .where(eq(issuedPacks.revisionId, named[1]))
+      .limit(1);
     const r = issuedForRevision ? await describe(named[1]) : undefined;
-    if (r) return { result: "altered", status: r.status, title: r.title, revision: r.number, organisation: r.organisation };
+    if (r)
+      return { result: "altered", status: r.status, title: r.title, revision: r.number, organisation: r.organisation };
   }
   return { result: "unknown" };
 }
@@ -294,15 +505,33 @@ export async function verifyPack(data: Uint8Array): Promise<Verification> {
 export async function listAssessmentAudit(actor: Actor | null, assessmentId: string) {
   authorize(actor, "assessments:read");
   const db = await getDb();
-  const assessment = z.uuid().safeParse(assessmentId).success ? await db.query.assessments.findFirst({ where: eq(assessments.id, assessmentId) }) : undefined;
+  const assessment = z.uuid().safeParse(assessmentId).success
+    ? await db.query.assessments.findFirst({ where: eq(assessments.id, assessmentId) })
+    : undefined;
   if (!assessment || assessment.organisationId !== actor.organisationId) throw AppError.notFound("Assessment");
-  const revs = await db.select({ id: revisions.id, number: revisions.number }).from(revisions).where(eq(revisions.assessmentId, assessmentId));
+  const revs = await db
+    .select({ id: revisions.id, number: revisions.number })
+    .from(revisions)
+    .where(eq(revisions.assessmentId, assessmentId));
   const numberOf = new Map(revs.map((r) => [r.id, r.number]));
   const events = await db
-    .select({ id: auditEvents.id, action: auditEvents.action, entityId: auditEvents.entityId, contentHash: auditEvents.contentHash, details: auditEvents.details, createdAt: auditEvents.createdAt, actorName: users.name })
+    .select({
+      id: auditEvents.id,
+      action: auditEvents.action,
+      entityId: auditEvents.entityId,
+      contentHash: auditEvents.contentHash,
+      details: auditEvents.details,
+      createdAt: auditEvents.createdAt,
+      actorName: users.name,
+    })
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorId))
     .where(and(eq(auditEvents.organisationId, actor.organisationId), eq(auditEvents.entityType, "revision")))
     .orderBy(asc(auditEvents.createdAt));
-  return { assessment, events: events.filter((e) => e.entityId && numberOf.has(e.entityId)).map((e) => ({ ...e, revision: numberOf.get(e.entityId!)! })) };
+  return {
+    assessment,
+    events: events
+      .filter((e) => e.entityId && numberOf.has(e.entityId))
+      .map((e) => ({ ...e, revision: numberOf.get(e.entityId!)! })),
+  };
 }

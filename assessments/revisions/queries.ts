@@ -24,7 +24,13 @@ export async function listAwaitingReview(actor: Actor | null) {
     .from(revisions)
     .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
     .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-    .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)))
+    .where(
+      and(
+        eq(revisions.organisationId, actor.organisationId),
+        eq(revisions.status, "submitted"),
+        eq(revisions.approverId, actor.id),
+      ),
+    )
     .orderBy(desc(revisions.submittedAt));
 }
 
@@ -38,7 +44,9 @@ export async function countRevisionsByStatus(actor: Actor | null) {
       .from(revisions)
       .where(eq(revisions.organisationId, actor.organisationId))
       .groupBy(revisions.status);
-    return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<(typeof rows)[number]["status"], number>>;
+    return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<
+      Record<(typeof rows)[number]["status"], number>
+    >;
   });
 }
 
@@ -50,7 +58,13 @@ export async function countAwaitingReview(actor: Actor | null): Promise<number> 
     const [{ n }] = await db
       .select({ n: count() })
       .from(revisions)
-      .where(and(eq(revisions.organisationId, actor.organisationId), eq(revisions.status, "submitted"), eq(revisions.approverId, actor.id)));
+      .where(
+        and(
+          eq(revisions.organisationId, actor.organisationId),
+          eq(revisions.status, "submitted"),
+          eq(revisions.approverId, actor.id),
+        ),
+      );
     return Number(n);
   });
 }

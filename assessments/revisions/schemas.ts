@@ -50,6 +50,5 @@ export const submitRevisionSchema = submitFormSchema.extend({ version: z.number(
 
 export type SubmitFormInput = z.infer<typeof submitFormSchema>;
 
-
 /** The wizard's sections, by key: return comments and the review list name them. */
 export const STEP_KEYS = ["scope", "sequence", "loads", "hazards", "people", "emergency"] as const;

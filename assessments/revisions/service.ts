@@ -24,7 +24,13 @@ export function contentHash(content: unknown): string {
   return createHash("sha256").update(JSON.stringify(content)).digest("hex");
 }
 
-const registerColumns = { id: components.id, name: components.name, massKg: components.massKg, grip: components.grip, massSource: components.massSource };
+const registerColumns = {
+  id: components.id,
+  name: components.name,
+  massKg: components.massKg,
+  grip: components.grip,
+  massSource: components.massSource,
+};
 
 /**
  * The register entries a content's tasks name: scoring needs those and no others, so a register of
@@ -34,7 +40,10 @@ export async function registerFor(organisationId: string, content: Pick<Content,
   const ids = [...new Set(content.tasks.map((t) => t.componentId).filter(isUuid))];
   if (ids.length === 0) return [];
   const db = await getDb();
-  return db.select(registerColumns).from(components).where(and(eq(components.organisationId, organisationId), inArray(components.id, ids)));
+  return db
+    .select(registerColumns)
+    .from(components)
+    .where(and(eq(components.organisationId, organisationId), inArray(components.id, ids)));
 }
 
 /** Register entries by name (any case), for a template's components. */
@@ -44,7 +53,15 @@ async function registerNamed(organisationId: string, names: string[]): Promise<R
   return db
     .select(registerColumns)
     .from(components)
-    .where(and(eq(components.organisationId, organisationId), inArray(sql`lower(${components.name})`, names.map((n) => n.toLowerCase()))));
+    .where(
+      and(
+        eq(components.organisationId, organisationId),
+        inArray(
+          sql`lower(${components.name})`,
+          names.map((n) => n.toLowerCase()),
+        ),
+      ),
+    );
 }
 
 export const assessmentListQuerySchema = pageQuerySchema.extend({
@@ -66,62 +83,76 @@ const ASSESSMENT_ORDERS = {
 
 function assessmentKeyset(sort: z.infer<typeof assessmentListQuerySchema>["sort"]): Keyset {
   const descending = sort.startsWith("-");
-  return { name: sort, descending, ...ASSESSMENT_ORDERS[descending ? (sort.slice(1) as "updatedAt" | "title") : (sort as "updatedAt" | "title")] };
+  return {
+    name: sort,
+    descending,
+    ...ASSESSMENT_ORDERS[descending ? (sort.slice(1) as "updatedAt" | "title") : (sort as "updatedAt" | "title")],
+  };
 }
 
 /** The latest revision of each assessment, filtered, sorted and paged by keyset; the total counted in SQL. */
 export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
   authorize(actor, "assessments:read");
   const q = parseOrThrow(assessmentListQuerySchema, query, "Invalid query");
-  return cachedRead(readKey("assessments", actor.organisationId, q, new Date().toISOString().slice(0, 10)), async () => {
-    const keyset = assessmentKeyset(q.sort);
-    const db = await getDb();
-    // Conditions on the revision, and on the assessment; both tables are named by organisation, so
-    // that either sort can walk its own index (db/schema.ts).
-    const onRevision: SQL[] = [eq(revisions.organisationId, actor.organisationId), eq(revisions.isLatest, true)];
-    const onAssessment: SQL[] = [eq(assessments.organisationId, actor.organisationId)];
-    if (q.q) onAssessment.push(ilike(assessments.title, `%${escapeLike(q.q)}%`));
-    if (q.jobId) onAssessment.push(eq(assessments.jobId, q.jobId));
-    if (q.status) onRevision.push(eq(revisions.status, q.status));
-    if (q.worstBand) onRevision.push(eq(revisions.worstBand, q.worstBand));
-    if (q.authorId) onRevision.push(eq(revisions.authorId, q.authorId));
-    if (q.reviewDue) {
-      const limit = new Date(Date.now() + Number(q.reviewDue) * 86_400_000).toISOString().slice(0, 10);
-      onRevision.push(eq(revisions.status, "approved"), lte(revisions.reviewDate, limit));
-    }
-    const where = [...onRevision, ...onAssessment];
-    const after = afterCursor(keyset, q.cursor);
-    const [rows, [{ total }]] = await Promise.all([
-      db
-        .select({
-          assessmentId: assessments.id,
-          title: assessments.title,
-          jobId: jobs.id,
-          jobName: jobs.name,
-          revisionId: revisions.id,
-          number: revisions.number,
-          status: revisions.status,
-          worstBand: revisions.worstBand,
-          reviewDate: revisions.reviewDate,
-          updatedAt: revisions.updatedAt,
-          authorId: revisions.authorId,
-          authorName: users.name,
-          ...keysetColumns(keyset),
-        })
-        .from(revisions)
-        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-        .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-        .leftJoin(users, eq(users.id, revisions.authorId))
-        .where(and(...where, after))
-        .orderBy(...orderOf(keyset))
-        .limit(q.limit + 1),
-      // The count reads the assessments only when a filter does: the latest revisions alone are one index.
-      q.q || q.jobId
-        ? db.select({ total: count() }).from(revisions).innerJoin(assessments, eq(assessments.id, revisions.assessmentId)).where(and(...where))
-        : db.select({ total: count() }).from(revisions).where(and(...onRevision)),
-    ]);
-    return keysetPage(rows, keyset, q.limit, Number(total));
-  });
+  return cachedRead(
+    readKey("assessments", actor.organisationId, q, new Date().toISOString().slice(0, 10)),
+    async () => {
+      const keyset = assessmentKeyset(q.sort);
+      const db = await getDb();
+      // Conditions on the revision, and on the assessment; both tables are named by organisation, so
+      // that either sort can walk its own index (db/schema.ts).
+      const onRevision: SQL[] = [eq(revisions.organisationId, actor.organisationId), eq(revisions.isLatest, true)];
+      const onAssessment: SQL[] = [eq(assessments.organisationId, actor.organisationId)];
+      if (q.q) onAssessment.push(ilike(assessments.title, `%${escapeLike(q.q)}%`));
+      if (q.jobId) onAssessment.push(eq(assessments.jobId, q.jobId));
+      if (q.status) onRevision.push(eq(revisions.status, q.status));
+      if (q.worstBand) onRevision.push(eq(revisions.worstBand, q.worstBand));
+      if (q.authorId) onRevision.push(eq(revisions.authorId, q.authorId));
+      if (q.reviewDue) {
+        const limit = new Date(Date.now() + Number(q.reviewDue) * 86_400_000).toISOString().slice(0, 10);
+        onRevision.push(eq(revisions.status, "approved"), lte(revisions.reviewDate, limit));
+      }
+      const where = [...onRevision, ...onAssessment];
+      const after = afterCursor(keyset, q.cursor);
+      const [rows, [{ total }]] = await Promise.all([
+        db
+          .select({
+            assessmentId: assessments.id,
+            title: assessments.title,
+            jobId: jobs.id,
+            jobName: jobs.name,
+            revisionId: revisions.id,
+            number: revisions.number,
+            status: revisions.status,
+            worstBand: revisions.worstBand,
+            reviewDate: revisions.reviewDate,
+            updatedAt: revisions.updatedAt,
+            authorId: revisions.authorId,
+            authorName: users.name,
+            ...keysetColumns(keyset),
+          })
+          .from(revisions)
+          .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+          .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+          .leftJoin(users, eq(users.id, revisions.authorId))
+          .where(and(...where, after))
+          .orderBy(...orderOf(keyset))
+          .limit(q.limit + 1),
+        // The count reads the assessments only when a filter does: the latest revisions alone are one index.
+        q.q || q.jobId
+          ? db
+              .select({ total: count() })
+              .from(revisions)
+              .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+              .where(and(...where))
+          : db
+              .select({ total: count() })
+              .from(revisions)
+              .where(and(...onRevision)),
+      ]);
+      return keysetPage(rows, keyset, q.limit, Number(total));
+    },
+  );
 }
 
 /** Every assessment's latest revision (first page of 100), newest first. */
@@ -129,17 +160,25 @@ export async function listAssessments(actor: Actor | null) {
   return (await listAssessmentsPage(actor, { limit: 100 })).items;
 }
 
-export async function createAssessment(actor: Actor | null, input: unknown): Promise<{ assessmentId: string; revisionId: string }> {
+export async function createAssessment(
+  actor: Actor | null,
+  input: unknown,
+): Promise<{ assessmentId: string; revisionId: string }> {
   authorize(actor, "assessments:write");
   const data = parseOrThrow(createAssessmentSchema, input);
   const db = await getDb();
   const job = await db.query.jobs.findFirst({ where: eq(jobs.id, data.jobId) });
   if (!job || job.organisationId !== actor.organisationId)
-    throw new AppError("validation", "Some fields need attention", [{ path: "jobId", message: "Choose one of your jobs" }]);
+    throw new AppError("validation", "Some fields need attention", [
+      { path: "jobId", message: "Choose one of your jobs" },
+    ]);
   let content: Content = emptyContent();
   if (data.templateId) {
     const template = findTemplate(data.templateId);
-    if (!template) throw new AppError("validation", "Some fields need attention", [{ path: "templateId", message: "Unknown template" }]);
+    if (!template)
+      throw new AppError("validation", "Some fields need attention", [
+        { path: "templateId", message: "Unknown template" },
+      ]);
     // The template names its components; build once to learn which, then with their ids.
     const named: string[] = [];
     template.build((name) => (named.push(name), null));
@@ -153,12 +192,32 @@ export async function createAssessment(actor: Actor | null, input: unknown): Pro
   if (job.lineReference?.trim() && !data.templateId) content.lineside.nearLine = "near";
   const review = reviewContent(content, await registerFor(actor.organisationId, content));
   return db.transaction(async (tx) => {
-    const [assessment] = await tx.insert(assessments).values({ organisationId: actor.organisationId, jobId: job.id, title: data.title, createdBy: actor.id }).returning();
+    const [assessment] = await tx
+      .insert(assessments)
+      .values({ organisationId: actor.organisationId, jobId: job.id, title: data.title, createdBy: actor.id })
+      .returning();
     const [revision] = await tx
       .insert(revisions)
-      .values({ organisationId: actor.organisationId, assessmentId: assessment.id, number: 1, isLatest: true, content, authorId: actor.id, results: review.scores, worstBand: review.worstBand })
+      .values({
+        organisationId: actor.organisationId,
+        assessmentId: assessment.id,
+        number: 1,
+        isLatest: true,
+        content,
+        authorId: actor.id,
+        results: review.scores,
+        worstBand: review.worstBand,
+      })
       .returning();
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "assessment.created", entityType: "revision", entityId: revision.id, contentHash: contentHash(content), details: { templateId: data.templateId ?? null } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "assessment.created",
+      entityType: "revision",
+      entityId: revision.id,
+      contentHash: contentHash(content),
+      details: { templateId: data.templateId ?? null },
+    });
     return { assessmentId: assessment.id, revisionId: revision.id };
   });
 }
@@ -184,20 +243,35 @@ export async function getRevision(actor: Actor | null, revisionId: string) {
 }
 
 /** Saves a draft. A stale version answers 409 and nothing is written; so does a locked revision. */
-export async function saveRevision(actor: Actor | null, revisionId: string, input: unknown): Promise<{ version: number; worstBand: string | null }> {
+export async function saveRevision(
+  actor: Actor | null,
+  revisionId: string,
+  input: unknown,
+): Promise<{ version: number; worstBand: string | null }> {
   authorize(actor, "assessments:write");
   // Whose record first: another organisation's revision is "not found" whatever the body says.
   const current = await getRevision(actor, revisionId);
   const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
-  if (current.revision.status !== "draft") throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
+  if (current.revision.status !== "draft")
+    throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
   const review = reviewContent(data.content, await registerFor(actor.organisationId, data.content));
   const db = await getDb();
   const [saved] = await db
     .update(revisions)
-    .set({ content: data.content, results: review.scores, worstBand: review.worstBand, version: data.version + 1, updatedAt: new Date() })
+    .set({
+      content: data.content,
+      results: review.scores,
+      worstBand: review.worstBand,
+      version: data.version + 1,
+      updatedAt: new Date(),
+    })
     .where(and(eq(revisions.id, revisionId), eq(revisions.version, data.version), eq(revisions.status, "draft")))
     .returning({ version: revisions.version });
-  if (!saved) throw new AppError("conflict", "Someone else saved this draft after you opened it. Your changes are kept on screen: copy what you need, then reload.");
+  if (!saved)
+    throw new AppError(
+      "conflict",
+      "Someone else saved this draft after you opened it. Your changes are kept on screen: copy what you need, then reload.",
+    );
   return { version: saved.version, worstBand: review.worstBand };
 }
 
@@ -211,9 +285,13 @@ export async function listApprovers(actor: Actor | null) {
     .orderBy(asc(users.name));
 }
 
-
 /** One task of a draft, changed through the same save (and the same version check) as the whole draft. */
-async function changeTasks(actor: Actor | null, revisionId: string, version: unknown, change: (tasks: Content["tasks"]) => Content["tasks"]) {
+async function changeTasks(
+  actor: Actor | null,
+  revisionId: string,
+  version: unknown,
+  change: (tasks: Content["tasks"]) => Content["tasks"],
+) {
   authorize(actor, "assessments:write");
   const current = await getRevision(actor, revisionId);
   const content = { ...current.content, tasks: change(current.content.tasks) };

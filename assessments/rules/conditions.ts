@@ -11,7 +11,15 @@
 import type { Band, Reason } from "./types";
 import { SOURCES } from "./sources";
 
-export const CONDITIONS = ["uneven-ground", "slope-or-steps", "restricted-posture", "wind-on-panels", "hot-or-cold", "poor-light", "restrictive-ppe"] as const;
+export const CONDITIONS = [
+  "uneven-ground",
+  "slope-or-steps",
+  "restricted-posture",
+  "wind-on-panels",
+  "hot-or-cold",
+  "poor-light",
+  "restrictive-ppe",
+] as const;
 export type Condition = (typeof CONDITIONS)[number];
 
 export const CONDITION_FLOOR: Band = "watch";
@@ -19,12 +27,14 @@ export const CONDITION_FLOOR: Band = "watch";
 export const CONDITION_TEXT: Record<Condition, { label: string; controls: string; remedy: string }> = {
   "uneven-ground": {
     label: "uneven or unstable ground (ballast, cess)",
-    controls: "walk and clear the route first, lay walkway boards where the cess is soft or broken, boots with ankle support",
+    controls:
+      "walk and clear the route first, lay walkway boards where the cess is soft or broken, boots with ankle support",
     remedy: "Lay boards or a cleared walkway along the route, so the ground is even underfoot",
   },
   "slope-or-steps": {
     label: "slopes or steps on the way",
-    controls: "avoid carrying on steps, use a ramp or pass the load up, the heavier end uphill with the stronger person below",
+    controls:
+      "avoid carrying on steps, use a ramp or pass the load up, the heavier end uphill with the stronger person below",
     remedy: "Route round the slope or steps, or pass the load over them with a ramp",
   },
   "restricted-posture": {
@@ -44,7 +54,8 @@ export const CONDITION_TEXT: Record<Condition, { label: string; controls: string
   },
   "poor-light": {
     label: "poor light",
-    controls: "portable lighting along the route and at the place of work, head torches, walk the route in the light first",
+    controls:
+      "portable lighting along the route and at the place of work, head torches, walk the route in the light first",
     remedy: "Light the route and the place of work, or do it in daylight",
   },
   "restrictive-ppe": {

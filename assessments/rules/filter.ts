@@ -194,7 +194,8 @@ export function scoreFilter(req: FilterRequest): FilterResult {
   if (req.teamSize > 1)
     reasons.push({
       text: `Team of ${fmt(req.teamSize)}: the team handles about ${req.teamSize === 2 ? "two-thirds" : "half"} of the sum of its members' capabilities; each carries about ${fmt(req.load / req.teamSize)} kg.`,
-      source: req.teamSize <= 3 ? SOURCES.hseL23 : `${SOURCES.hseL23}; team of four at one half: ${SOURCES.heftwisePolicy}`,
+      source:
+        req.teamSize <= 3 ? SOURCES.hseL23 : `${SOURCES.hseL23}; team of four at one half: ${SOURCES.heftwisePolicy}`,
     });
   if (req.teamSize > MAX_TEAM_SIZE) {
     floors.push("stop");
@@ -208,7 +209,12 @@ export function scoreFilter(req: FilterRequest): FilterResult {
       text: "After the reductions no guideline weight remains: the task must be redesigned.",
       source: SOURCES.heftwisePolicy,
     });
-    warnings.push({ field: "frequency", message: "The frequency and twisting reductions together leave no guideline weight: the filter cannot judge this. Handle less often or remove the twist.", cannotJudge: true });
+    warnings.push({
+      field: "frequency",
+      message:
+        "The frequency and twisting reductions together leave no guideline weight: the filter cannot judge this. Handle less often or remove the twist.",
+      cannotJudge: true,
+    });
   } else
     reasons.push({
       text: `Load ${fmt(req.load)} kg against a guideline of ${fmt(guideline)} kg: index ${fmt(index)}${index > 1 ? " — above the filter, a fuller assessment is needed" : ", within the filter"}.`,
@@ -225,11 +231,16 @@ export function scoreFilter(req: FilterRequest): FilterResult {
         message: `Carried ${fmt(carry)} m: the guideline figures hold up to about ${CARRY_FILTER_LIMIT_M} m without rest. Assess the carry in more detail, or plan rests or a trolley.`,
       });
     }
-    if (req.zone === "floor-to-lower-leg" || req.zone === "lower-leg-to-knuckle" || req.zone === "below-standing-level") {
+    if (
+      req.zone === "floor-to-lower-leg" ||
+      req.zone === "lower-leg-to-knuckle" ||
+      req.zone === "below-standing-level"
+    ) {
       floors.push("watch");
       warnings.push({
         field: "zone",
-        message: "Carried with the hands below knuckle height: the guideline figures do not cover this. Assess in more detail.",
+        message:
+          "Carried with the hands below knuckle height: the guideline figures do not cover this. Assess in more detail.",
       });
     }
     // Counted per person: each member of a team carries their share (ISO 11228-1 practice).

@@ -3,7 +3,9 @@
  * Built from an integer and a precomputed decimal part, because general number-to-string
  * conversion dominated the cost of a scoring (see `npm run bench:rules`).
  */
-const DECIMALS_2 = Array.from({ length: 100 }, (_, i) => (i === 0 ? "" : `.${String(i).padStart(2, "0").replace(/0$/, "")}`));
+const DECIMALS_2 = Array.from({ length: 100 }, (_, i) =>
+  i === 0 ? "" : `.${String(i).padStart(2, "0").replace(/0$/, "")}`,
+);
 const DECIMALS_1 = Array.from({ length: 10 }, (_, i) => (i === 0 ? "" : `.${i}`));
 
 export function fmt(x: number, dp: 0 | 1 | 2 = 2): string {

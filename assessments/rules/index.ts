@@ -34,8 +34,7 @@ export function score(request: ScoreRequest): ScoreResult {
 /** Validates then scores an unknown value; an invalid request answers with its issues. */
 export function scoreUnknown(input: unknown): ScoreResult | ScoreError {
   const parsed = scoreRequestSchema.safeParse(input);
-  if (!parsed.success)
-    return { error: { message: "Invalid scoring request", issues: toIssues(parsed.error) } };
+  if (!parsed.success) return { error: { message: "Invalid scoring request", issues: toIssues(parsed.error) } };
   return score(parsed.data);
 }
 

@@ -89,7 +89,15 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
   const scored: OrderedTask[] = [];
   for (let i = 0; i < req.tasks.length; i++) {
     const task = req.tasks[i];
-    const taskWarnings = rangeWarnings(task.origin, task.destination, task.frequency, req.durationHours, req.recoveryHours, u, `tasks.${i}.`);
+    const taskWarnings = rangeWarnings(
+      task.origin,
+      task.destination,
+      task.frequency,
+      req.durationHours,
+      req.recoveryHours,
+      u,
+      `tasks.${i}.`,
+    );
     let judgeable = true;
     for (const w of taskWarnings) {
       // The duration is the job's: say it once, not per task.
@@ -101,7 +109,9 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
     const origin = endLimits(task.origin, travel, task, duration, u);
     // With significant control at the destination, the end with the larger STLI (smaller STRWL)
     // governs; a zero FM at either end is kept.
-    const chosen = task.controlAtDestination ? worseEnd(origin, endLimits(task.destination, travel, task, duration, u)) : origin;
+    const chosen = task.controlAtDestination
+      ? worseEnd(origin, endLimits(task.destination, travel, task, duration, u))
+      : origin;
     if (chosen.strwl <= 0 && judgeable) {
       judgeable = false;
       const high = !chosen.lowV;
@@ -126,7 +136,14 @@ export function scoreComposite(req: CompositeRequest): CompositeResult {
       lowV: chosen.lowV,
     });
   }
-  for (const w of rangeWarnings(req.tasks[0].origin, req.tasks[0].origin, MIN_FREQUENCY, req.durationHours, req.recoveryHours, u))
+  for (const w of rangeWarnings(
+    req.tasks[0].origin,
+    req.tasks[0].origin,
+    MIN_FREQUENCY,
+    req.durationHours,
+    req.recoveryHours,
+    u,
+  ))
     if (w.field === "recoveryHours" || w.field === "durationHours") warnings.push(w);
 
   const outOfRange = scored.some((s) => s.result.stli === null);
@@ -207,10 +224,21 @@ interface EndLimits {
   lowV: boolean;
 }
 
-function endLimits(pos: HandPosition, travel: number, task: CompositeTaskRequest, duration: ReturnType<typeof durationBand>, u: UnitSystem): EndLimits {
+function endLimits(
+  pos: HandPosition,
+  travel: number,
+  task: CompositeTaskRequest,
+  duration: ReturnType<typeof durationBand>,
+  u: UnitSystem,
+): EndLimits {
   const firwl = freeIndexLimit(pos, travel, task.coupling, u);
   const lowV = pos.v < u.vColumnSplit;
-  return { end: pos === task.origin ? "origin" : "destination", firwl, strwl: firwl * frequencyMultiplier(task.frequency, duration, !lowV), lowV };
+  return {
+    end: pos === task.origin ? "origin" : "destination",
+    firwl,
+    strwl: firwl * frequencyMultiplier(task.frequency, duration, !lowV),
+    lowV,
+  };
 }
 
 /** The end with the smaller STRWL; on a tie, the smaller FIRWL. */

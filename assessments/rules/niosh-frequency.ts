@@ -102,10 +102,16 @@ export function frequencyMultiplier(liftsPerMinute: number, duration: DurationBa
  * Why FM is 0 for this frequency, naming the Table 5 cell; called only when it is.
  * `vLabel` names the V column in the request's units ("V < 75 cm").
  */
-export function zeroFrequencyExplanation(liftsPerMinute: number, duration: DurationBand, highVertical: boolean, vLabel: string): string {
+export function zeroFrequencyExplanation(
+  liftsPerMinute: number,
+  duration: DurationBand,
+  highVertical: boolean,
+  vLabel: string,
+): string {
   const f = Math.max(liftsPerMinute, MIN_FREQUENCY);
   const cell = `${DURATION_LABELS[duration]}, ${vLabel}`;
-  if (f > MAX_FREQUENCY) return `${trim(f)}/min is beyond the last row of Table 5 (15/min): FM is 0 for every duration.`;
+  if (f > MAX_FREQUENCY)
+    return `${trim(f)}/min is beyond the last row of Table 5 (15/min): FM is 0 for every duration.`;
   const col = column(duration, highVertical);
   const last = ROWS[LAST_NON_ZERO_ROW[col]];
   const zeroRow = ROWS[LAST_NON_ZERO_ROW[col] + 1];

@@ -168,7 +168,13 @@ export function couplingMultiplier(coupling: Coupling, v: number, u: UnitSystem)
   return v < u.vColumnSplit ? 0.95 : 1;
 }
 
-function scoreEnd(req: NioshRequest, pos: HandPosition, travel: number, duration: DurationBand, u: UnitSystem): NioshEndResult {
+function scoreEnd(
+  req: NioshRequest,
+  pos: HandPosition,
+  travel: number,
+  duration: DurationBand,
+  u: UnitSystem,
+): NioshEndResult {
   // Plain literals, no spreads: this is the hot path of live scoring and batch scoring.
   const hm = horizontalMultiplier(pos.h, u);
   const vm = verticalMultiplier(pos.v, u);
@@ -285,9 +291,12 @@ export function scoreNiosh(req: NioshRequest): NioshResult {
   let judgeable = true;
   for (const w of warnings) if (w.cannotJudge) judgeable = false;
   // Otherwise the larger index governs.
-  const governing = destination && destination.li !== null && origin.li !== null && destination.li > origin.li ? destination : origin;
+  const governing =
+    destination && destination.li !== null && origin.li !== null && destination.li > origin.li ? destination : origin;
   const li = judgeable ? governing.li : null;
-  const reasons = judgeable ? nioshReasons(li!, bandForIndex(li, NIOSH_THRESHOLDS), governing, governing === destination, u, req.load) : outOfRangeReasons(warnings);
+  const reasons = judgeable
+    ? nioshReasons(li!, bandForIndex(li, NIOSH_THRESHOLDS), governing, governing === destination, u, req.load)
+    : outOfRangeReasons(warnings);
   const floors: Band[] = [bandForIndex(li, NIOSH_THRESHOLDS)];
   applyConditions(req.conditions, floors, reasons);
   const band = worstBand(floors);
@@ -314,7 +323,10 @@ const OUT_OF_RANGE_REASON: Reason = Object.freeze({
   source: SOURCES.nioshManual,
 });
 const BAND_REASON: Record<Band, Reason> = {
-  clear: Object.freeze({ text: "Lifting index at or below 1.0: nominal risk for nearly all healthy workers.", source: SOURCES.nioshManual }),
+  clear: Object.freeze({
+    text: "Lifting index at or below 1.0: nominal risk for nearly all healthy workers.",
+    source: SOURCES.nioshManual,
+  }),
   watch: Object.freeze({
     text: `Lifting index above 1.0: increased risk for some workers. Heftwise puts LI up to ${NIOSH_THRESHOLDS.watchUpTo} at watch and up to 3.0 at act.`,
     source: `${SOURCES.nioshManual}; thresholds between 1 and 3: ${SOURCES.heftwisePolicy}`,
@@ -323,17 +335,32 @@ const BAND_REASON: Record<Band, Reason> = {
     text: `Lifting index above ${NIOSH_THRESHOLDS.watchUpTo}: increased risk for many workers; redesign the lift before work. Heftwise puts LI up to 3.0 at act.`,
     source: `${SOURCES.nioshManual}; thresholds between 1 and 3: ${SOURCES.heftwisePolicy}`,
   }),
-  stop: Object.freeze({ text: "Lifting index above 3.0: nearly all workers are at increased risk of injury.", source: SOURCES.nioshManual }),
+  stop: Object.freeze({
+    text: "Lifting index above 3.0: nearly all workers are at increased risk of injury.",
+    source: SOURCES.nioshManual,
+  }),
 };
 
 /** Each cause named, after the general statement. */
 function outOfRangeReasons(warnings: Warning[]): Reason[] {
   const reasons: Reason[] = [OUT_OF_RANGE_REASON];
-  for (const w of warnings) if (w.cannotJudge) reasons.push({ text: w.message, source: w.field.endsWith("frequency") ? SOURCES.nioshFrequencyTable : SOURCES.nioshManual });
+  for (const w of warnings)
+    if (w.cannotJudge)
+      reasons.push({
+        text: w.message,
+        source: w.field.endsWith("frequency") ? SOURCES.nioshFrequencyTable : SOURCES.nioshManual,
+      });
   return reasons;
 }
 
-function nioshReasons(li: number, band: Band, governing: NioshEndResult, atDestination: boolean, u: UnitSystem, load: number): Reason[] {
+function nioshReasons(
+  li: number,
+  band: Band,
+  governing: NioshEndResult,
+  atDestination: boolean,
+  u: UnitSystem,
+  load: number,
+): Reason[] {
   const reasons: Reason[] = [
     {
       text: `Recommended weight limit at the ${atDestination ? "destination" : "origin"} is ${fmt(governing.rwl)} ${u.massUnit}; the load of ${fmt(load)} ${u.massUnit} gives a lifting index of ${fmt(li)}.`,

@@ -44,7 +44,11 @@ export const STOP_DECELERATION = (STOP_FROM_MS * STOP_FROM_MS) / (2 * STOP_WITHI
 
 export const SURFACES = ["rail", "hard", "rough"] as const;
 export type Surface = (typeof SURFACES)[number];
-export const SURFACE_LABELS: Record<Surface, string> = { rail: "on rails", hard: "on hard, even ground", rough: "on rough ground (ballast, cess, grass)" };
+export const SURFACE_LABELS: Record<Surface, string> = {
+  rail: "on rails",
+  hard: "on hard, even ground",
+  rough: "on rough ground (ballast, cess, grass)",
+};
 
 /**
  * Rolling coefficients by surface: [effort (highest plausible), runaway (lowest plausible)].
@@ -55,9 +59,21 @@ export const SURFACE_LABELS: Record<Surface, string> = { rail: "on rails", hard:
  * Where the surface is not stated, the rail figures are used: the load may be a trolley on rails.
  */
 export const ROLLING: Record<Surface, { effort: number; runaway: number; source: string }> = {
-  rail: { effort: 0.02, runaway: 0.001, source: `effort: ${SOURCES.hseL23} (2 %; no published figure for track trolleys); runaway: steel on rail, from memory` },
-  hard: { effort: 0.02, runaway: 0.005, source: `effort: ${SOURCES.hseL23} (2 %); runaway: small hard wheels, from memory` },
-  rough: { effort: 0.1, runaway: 0.02, source: `effort: small wheels on loose ground 5–10 %, from memory; runaway: ${SOURCES.hseL23} (2 %)` },
+  rail: {
+    effort: 0.02,
+    runaway: 0.001,
+    source: `effort: ${SOURCES.hseL23} (2 %; no published figure for track trolleys); runaway: steel on rail, from memory`,
+  },
+  hard: {
+    effort: 0.02,
+    runaway: 0.005,
+    source: `effort: ${SOURCES.hseL23} (2 %); runaway: small hard wheels, from memory`,
+  },
+  rough: {
+    effort: 0.1,
+    runaway: 0.02,
+    source: `effort: small wheels on loose ground 5–10 %, from memory; runaway: ${SOURCES.hseL23} (2 %)`,
+  },
 };
 
 /** Guideline forces in newtons (L23: men 20 kg ≈ 200 N to start or stop, 10 kg ≈ 100 N to keep moving; women 15 / 7 kg). */
@@ -153,7 +169,10 @@ export function scorePush(req: PushRequest): PushResult {
 
   reasons.push(
     measured
-      ? { text: `Measured force ${fmt(sustained)} N used for starting and for keeping it moving.`, source: "Push-pull gauge reading entered by the assessor" }
+      ? {
+          text: `Measured force ${fmt(sustained)} N used for starting and for keeping it moving.`,
+          source: "Push-pull gauge reading entered by the assessor",
+        }
       : {
           text: `${fmt(req.mass)} kg ${SURFACE_LABELS[surface]}, ${gradientText(req.gradient)}, rolling resistance ${fmt(crr * 100, 1)} % of the weight: ${fmt(start)} N to start it, ${fmt(sustained)} N to keep it moving${req.gradient < 0 ? " (downhill taken as level: the slope's help is not counted)" : ""}.`,
           source: `${req.rollingCoefficient !== undefined ? "Coefficient entered by the assessor" : rolling.source}; starting force and downhill effort: ${SOURCES.heftwisePolicy}`,
@@ -174,21 +193,43 @@ export function scorePush(req: PushRequest): PushResult {
         text: `Unbraked on ${req.surface ? "rails" : "an unstated surface (taken as rails)"}: at ${gradientText(req.gradient)} it runs away by itself if let go (anything steeper than about ${steeperThan}). Do not use an unbraked trolley here.`,
         source: `${ROLLING.rail.source}; unbraked runaway on rails is Stop: ${SOURCES.heftwisePolicy}`,
       });
-      warnings.push({ field: "braked", message: `The load runs away unbraked on this gradient (steeper than about ${steeperThan}): use a trolley with a working brake, tested before use.` });
+      warnings.push({
+        field: "braked",
+        message: `The load runs away unbraked on this gradient (steeper than about ${steeperThan}): use a trolley with a working brake, tested before use.`,
+      });
     } else if (!braked)
-      warnings.push({ field: "gradient", message: `It rolls by itself on this gradient (steeper than about ${steeperThan}): people must hold it back. Use a brake, a restraint, or a person controlling from the downhill end.` });
+      warnings.push({
+        field: "gradient",
+        message: `It rolls by itself on this gradient (steeper than about ${steeperThan}): people must hold it back. Use a brake, a restraint, or a person controlling from the downhill end.`,
+      });
     else if (!req.brakeOperator?.trim()) {
-      reasons.push({ text: "Braked on a gradient where it would run away: the plan must name who works the brake.", source: SOURCES.heftwisePolicy });
-      warnings.push({ field: "brakeOperator", message: "Name who works the brake: on this gradient the load runs away if the brake is released." });
+      reasons.push({
+        text: "Braked on a gradient where it would run away: the plan must name who works the brake.",
+        source: SOURCES.heftwisePolicy,
+      });
+      warnings.push({
+        field: "brakeOperator",
+        message: "Name who works the brake: on this gradient the load runs away if the brake is released.",
+      });
     }
   }
   if (!req.surface)
-    warnings.push({ field: "surface", message: "Surface not stated: judged as on rails, where a load runs away on the gentlest gradient. State the surface." });
+    warnings.push({
+      field: "surface",
+      message:
+        "Surface not stated: judged as on rails, where a load runs away on the gentlest gradient. State the surface.",
+    });
   if (surface === "rail")
-    reasons.push({ text: "Trolley use on the line is governed by the infrastructure manager's rules (brakes, protection, who may use it); Heftwise does not replace them.", source: SOURCES.heftwisePolicy });
+    reasons.push({
+      text: "Trolley use on the line is governed by the infrastructure manager's rules (brakes, protection, who may use it); Heftwise does not replace them.",
+      source: SOURCES.heftwisePolicy,
+    });
   if (req.teamSize > MAX_TEAM_SIZE) {
     floors.push("stop");
-    reasons.push({ text: `A team of ${fmt(req.teamSize)} is more than four: use a powered aid or split the load.`, source: SOURCES.hseL23 });
+    reasons.push({
+      text: `A team of ${fmt(req.teamSize)} is more than four: use a powered aid or split the load.`,
+      source: SOURCES.hseL23,
+    });
   }
   if (req.distanceM !== undefined && req.distanceM > PUSH_DISTANCE_LIMIT_M) {
     floors.push("watch");

@@ -20,7 +20,8 @@ export const couplingSchema = z.enum(["good", "fair", "poor"]);
 export const unitsSchema = z.enum(["metric", "us"]);
 export const zoneSchema = z.enum(ZONES);
 export const reachSchema = z.enum(["close", "extended"]);
-const teamSize = () => z.number().int("must be a whole number").min(1, "must be at least 1").max(20, "must be at most 20");
+const teamSize = () =>
+  z.number().int("must be a whole number").min(1, "must be at least 1").max(20, "must be at most 20");
 const durationHours = () => positive().refine((x) => x <= 24, "must be at most 24 hours");
 
 /** V may be negative: hands below the standing surface (an excavation), which the equation cannot judge. */
@@ -44,7 +45,9 @@ export const nioshRequestSchema = z.strictObject({
   destination: handPositionSchema,
   frequency: nonNegative(),
   durationHours: durationHours(),
-  recoveryHours: nonNegative().refine((x) => x <= 24, "must be at most 24 hours").optional(),
+  recoveryHours: nonNegative()
+    .refine((x) => x <= 24, "must be at most 24 hours")
+    .optional(),
   coupling: couplingSchema,
   controlAtDestination: z.boolean(),
   conditions: conditionsSchema.optional(),
@@ -64,7 +67,9 @@ export const compositeRequestSchema = z.strictObject({
   method: z.literal("niosh-composite"),
   units: unitsSchema,
   durationHours: durationHours(),
-  recoveryHours: nonNegative().refine((x) => x <= 24, "must be at most 24 hours").optional(),
+  recoveryHours: nonNegative()
+    .refine((x) => x <= 24, "must be at most 24 hours")
+    .optional(),
   tasks: z
     .array(compositeTaskSchema)
     .min(MIN_COMPOSITE_TASKS, `a composite job needs at least ${MIN_COMPOSITE_TASKS} tasks`)
@@ -90,7 +95,9 @@ export const pushRequestSchema = z.strictObject({
   method: z.literal("push"),
   mass: positive(),
   gradient: finite().refine((g) => Math.abs(g) <= 1, "must be between -1 and 1 (rise ÷ run)"),
-  rollingCoefficient: nonNegative().refine((c) => c <= 1, "must be at most 1").optional(),
+  rollingCoefficient: nonNegative()
+    .refine((c) => c <= 1, "must be at most 1")
+    .optional(),
   sex: sexSchema,
   teamSize: teamSize(),
   distanceM: nonNegative().optional(),

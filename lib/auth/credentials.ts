@@ -9,7 +9,16 @@ import { users } from "@/db/schema";
 import type { Actor } from "@/lib/permissions";
 import { verifyPassword } from "./passwords";
 import { signInSchema } from "./schemas";
-import { clearAttempts, FREE_ADDRESS_FAILURES, FREE_PAIR_FAILURES, readAttempts, recordFailure, slowdownAfter, throttleKeys, waitAfter } from "./throttle";
+import {
+  clearAttempts,
+  FREE_ADDRESS_FAILURES,
+  FREE_PAIR_FAILURES,
+  readAttempts,
+  recordFailure,
+  slowdownAfter,
+  throttleKeys,
+  waitAfter,
+} from "./throttle";
 
 export const SIGN_IN_FAILED = "E-mail or password not recognised.";
 
@@ -22,7 +31,10 @@ export async function checkCredentials(input: unknown, clientAddress: string | n
   const keys = throttleKeys(email, clientAddress);
   const attempts = await readAttempts([keys.pair, keys.account, ...(keys.address ? [keys.address] : [])]);
   const now = Date.now();
-  const wait = Math.max(waitAfter(attempts.get(keys.pair), FREE_PAIR_FAILURES, now), keys.address ? waitAfter(attempts.get(keys.address), FREE_ADDRESS_FAILURES, now) : 0);
+  const wait = Math.max(
+    waitAfter(attempts.get(keys.pair), FREE_PAIR_FAILURES, now),
+    keys.address ? waitAfter(attempts.get(keys.address), FREE_ADDRESS_FAILURES, now) : 0,
+  );
   if (wait > 0) {
     const minutes = Math.ceil(wait / 60_000);
     throw new SignInError(`Too many attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`);

@@ -25,7 +25,13 @@ export const authOptions: NextAuthOptions = {
       async authorize(credentials, req) {
         // A thrown error's message reaches the sign-in form; it never says which part was wrong.
         const actor = await checkCredentials(credentials, clientAddress(req?.headers));
-        return { id: actor.id, name: actor.name, email: actor.email, role: actor.role, organisationId: actor.organisationId };
+        return {
+          id: actor.id,
+          name: actor.name,
+          email: actor.email,
+          role: actor.role,
+          organisationId: actor.organisationId,
+        };
       },
     }),
   ],

@@ -25,7 +25,10 @@ interface State {
   entries: Map<string, Entry>;
 }
 
-const state = ((globalThis as unknown as { __heftwiseSessionCache?: State }).__heftwiseSessionCache ??= { generation: 0, entries: new Map() });
+const state = ((globalThis as unknown as { __heftwiseSessionCache?: State }).__heftwiseSessionCache ??= {
+  generation: 0,
+  entries: new Map(),
+});
 
 /** The generation to pass back to `rememberSession`: a change in between means the answer may be stale. */
 export const sessionGeneration = () => state.generation;
@@ -41,10 +44,20 @@ export function recallSession(sessionId: string, userId: string, now = Date.now(
 }
 
 /** Keeps an open session's answer, unless a session or user changed since the check began. */
-export function rememberSession(sessionId: string, actor: Actor, sessionExpiresAt: Date, checkedAtGeneration: number, now = Date.now()) {
+export function rememberSession(
+  sessionId: string,
+  actor: Actor,
+  sessionExpiresAt: Date,
+  checkedAtGeneration: number,
+  now = Date.now(),
+) {
   if (checkedAtGeneration !== state.generation) return;
   if (state.entries.size >= MAX_ENTRIES) state.entries.delete(state.entries.keys().next().value!);
-  state.entries.set(sessionId, { userId: actor.id, actor, until: Math.min(now + SESSION_CACHE_TTL_MS, sessionExpiresAt.getTime()) });
+  state.entries.set(sessionId, {
+    userId: actor.id,
+    actor,
+    until: Math.min(now + SESSION_CACHE_TTL_MS, sessionExpiresAt.getTime()),
+  });
 }
 
 /** After any change to a session or to a user's access (sign-out, deactivation, role, password). */

@@ -21,7 +21,8 @@ import { config } from "@/lib/config";
 import { recallSession, rememberSession, sessionGeneration } from "./session-cache";
 
 /** next-auth's cookie name: the __Secure- prefix when the site is served over https. */
-export const sessionCookieName = (origin: string) => `${origin.startsWith("https://") ? "__Secure-" : ""}next-auth.session-token`;
+export const sessionCookieName = (origin: string) =>
+  `${origin.startsWith("https://") ? "__Secure-" : ""}next-auth.session-token`;
 
 type CookieJar = { get(name: string): { value: string } | undefined; getAll(): { name: string; value: string }[] };
 
@@ -57,12 +58,30 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
   // One query: the user, only while the token's session record is open — signed out (here or
   // everywhere) or expired means gone.
   const [row] = await db
-    .select({ id: users.id, organisationId: users.organisationId, role: users.role, name: users.name, email: users.email, active: users.active, passwordHash: users.passwordHash, expiresAt: userSessions.expiresAt })
+    .select({
+      id: users.id,
+      organisationId: users.organisationId,
+      role: users.role,
+      name: users.name,
+      email: users.email,
+      active: users.active,
+      passwordHash: users.passwordHash,
+      expiresAt: userSessions.expiresAt,
+    })
     .from(users)
-    .innerJoin(userSessions, and(eq(userSessions.userId, users.id), eq(userSessions.id, sessionId), gt(userSessions.expiresAt, new Date())))
+    .innerJoin(
+      userSessions,
+      and(eq(userSessions.userId, users.id), eq(userSessions.id, sessionId), gt(userSessions.expiresAt, new Date())),
+    )
     .where(eq(users.id, userId));
   if (!row || !row.active || !row.passwordHash) return null;
-  const actor: Actor = { id: row.id, organisationId: row.organisationId, role: row.role, name: row.name, email: row.email };
+  const actor: Actor = {
+    id: row.id,
+    organisationId: row.organisationId,
+    role: row.role,
+    name: row.name,
+    email: row.email,
+  };
   if (embedded) rememberSession(sessionId, actor, row.expiresAt, generation);
   return actor;
 }

@@ -12,14 +12,22 @@ export const SESSION_MAX_AGE_S = 12 * 60 * 60;
 
 export async function openSession(userId: string): Promise<string> {
   const db = await getDb();
-  const [row] = await db.insert(userSessions).values({ userId, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) }).returning({ id: userSessions.id });
+  const [row] = await db
+    .insert(userSessions)
+    .values({ userId, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) })
+    .returning({ id: userSessions.id });
   return row.id;
 }
 
 export async function sessionIsOpen(sessionId: string | undefined, userId: string): Promise<boolean> {
   if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return false;
   const db = await getDb();
-  const [row] = await db.select({ id: userSessions.id }).from(userSessions).where(and(eq(userSessions.id, sessionId), eq(userSessions.userId, userId), gt(userSessions.expiresAt, new Date())));
+  const [row] = await db
+    .select({ id: userSessions.id })
+    .from(userSessions)
+    .where(
+      and(eq(userSessions.id, sessionId), eq(userSessions.userId, userId), gt(userSessions.expiresAt, new Date())),
+    );
   return !!row;
 }
 

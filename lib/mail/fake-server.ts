@@ -26,7 +26,8 @@ export interface MailFake {
   close: () => Promise<void>;
 }
 
-const escape = (s: string) => s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
+const escape = (s: string) =>
+  s.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
 
 function inboxPage(messages: FakeMessage[]): string {
   const rows = [...messages]
@@ -59,7 +60,11 @@ export async function startMailFake({ smtpPort = 2525, httpPort = 1080 } = {}): 
             subject: mail.subject ?? "",
             text: mail.text ?? "",
             html: typeof mail.html === "string" ? mail.html : "",
-            attachments: mail.attachments.map((a) => ({ filename: a.filename ?? "", contentType: a.contentType, size: a.size })),
+            attachments: mail.attachments.map((a) => ({
+              filename: a.filename ?? "",
+              contentType: a.contentType,
+              size: a.size,
+            })),
             kind: (mail.headers.get("x-heftwise-kind") as string | undefined) ?? null,
           });
           callback();
@@ -82,7 +87,10 @@ export async function startMailFake({ smtpPort = 2525, httpPort = 1080 } = {}): 
     } else if (url.pathname.startsWith("/messages/")) {
       const message = messages.find((m) => m.id === Number(url.pathname.split("/")[2]));
       if (!message) res.writeHead(404).end("No such message");
-      else res.writeHead(200, { "content-type": "text/html; charset=utf-8" }).end(message.html || `<pre>${escape(message.text)}</pre>`);
+      else
+        res
+          .writeHead(200, { "content-type": "text/html; charset=utf-8" })
+          .end(message.html || `<pre>${escape(message.text)}</pre>`);
     } else if (url.pathname === "/") {
       res.writeHead(200, { "content-type": "text/html; charset=utf-8" }).end(inboxPage(messages));
     } else res.writeHead(404).end("Not found");

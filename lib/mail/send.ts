@@ -40,7 +40,9 @@ function transport(): Transporter {
       secure,
       // A plain smtp:// URL means a local or trusted relay: no opportunistic STARTTLS.
       ignoreTLS: !secure && url.searchParams.get("starttls") !== "1",
-      auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
+      auth: url.username
+        ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+        : undefined,
       connectionTimeout: 5_000,
       greetingTimeout: 5_000,
     });

@@ -40,7 +40,15 @@ export async function listUsers(actor: Actor | null): Promise<UserRow[]> {
     .from(users)
     .where(eq(users.organisationId, actor.organisationId))
     .orderBy(asc(users.name));
-  return rows.map((u) => ({ id: u.id, name: u.name, email: u.email, role: u.role, active: u.active, pending: !u.passwordHash, createdAt: u.createdAt }));
+  return rows.map((u) => ({
+    id: u.id,
+    name: u.name,
+    email: u.email,
+    role: u.role,
+    active: u.active,
+    pending: !u.passwordHash,
+    createdAt: u.createdAt,
+  }));
 }
 
 async function organisationUser(actor: Actor, userId: string) {
@@ -51,15 +59,27 @@ async function organisationUser(actor: Actor, userId: string) {
   return user;
 }
 
-
 /** Records a new invitation link for the user inside the caller's transaction; returns the token to e-mail. */
 async function recordInvite(tx: Tx, actor: Actor, user: { id: string; email: string; role: Role }): Promise<string> {
   const token = randomBytes(32).toString("base64url");
   const expiresAt = new Date(Date.now() + config().INVITE_TTL_HOURS * 3600_000);
   // A new link replaces any earlier one that was not used.
   await tx.delete(invites).where(and(eq(invites.userId, user.id), isNull(invites.usedAt)));
-  await tx.insert(invites).values({ organisationId: actor.organisationId, userId: user.id, tokenHash: hashToken(token), expiresAt, createdBy: actor.id });
-  await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.invited", entityType: "user", entityId: user.id, details: { email: user.email, role: user.role } });
+  await tx.insert(invites).values({
+    organisationId: actor.organisationId,
+    userId: user.id,
+    tokenHash: hashToken(token),
+    expiresAt,
+    createdBy: actor.id,
+  });
+  await recordAudit(tx, {
+    organisationId: actor.organisationId,
+    actorId: actor.id,
+    action: "user.invited",
+    entityType: "user",
+    entityId: user.id,
+    details: { email: user.email, role: user.role },
+  });
   return token;
 }
 
@@ -74,11 +94,21 @@ function sendElsewhereNotice(actor: Actor, email: string): Promise<SendOutcome> 
     ],
     footnote: "If you did not expect this, you can ignore this e-mail.",
   });
-  return sendMail({ organisationId: actor.organisationId, kind: "invite", to: email, subject: "Your Heftwise account", ...body });
+  return sendMail({
+    organisationId: actor.organisationId,
+    kind: "invite",
+    to: email,
+    subject: "Your Heftwise account",
+    ...body,
+  });
 }
 
 /** The invitation e-mail, sent after the transaction that recorded it has committed. */
-function sendInvite(actor: Actor, user: { name: string; email: string; role: Role }, token: string): Promise<SendOutcome> {
+function sendInvite(
+  actor: Actor,
+  user: { name: string; email: string; role: Role },
+  token: string,
+): Promise<SendOutcome> {
   const url = `${config().NEXTAUTH_URL.replace(/\/$/, "")}/invite/${token}`;
   const body = renderMail({
     heading: `${actor.name} has invited you to Heftwise`,
@@ -90,10 +120,19 @@ function sendInvite(actor: Actor, user: { name: string; email: string; role: Rol
     action: { label: "Set your password", url },
     footnote: "If you did not expect this invitation, ignore this e-mail: nothing happens until the link is used.",
   });
-  return sendMail({ organisationId: actor.organisationId, kind: "invite", to: user.email, subject: "Your Heftwise account", ...body });
+  return sendMail({
+    organisationId: actor.organisationId,
+    kind: "invite",
+    to: user.email,
+    subject: "Your Heftwise account",
+    ...body,
+  });
 }
 
-const alreadyHere = () => new AppError("validation", "Some fields need attention", [{ path: "email", message: "This person is already in your organisation" }]);
+const alreadyHere = () =>
+  new AppError("validation", "Some fields need attention", [
+    { path: "email", message: "This person is already in your organisation" },
+  ]);
 
 /**
  * Invites a person. An address already in the admin's own organisation is named on its field (the
@@ -101,7 +140,10 @@ const alreadyHere = () => new AppError("validation", "Some fields need attention
  * revealed: nothing is created, its owner is told by e-mail, and the admin sees what any invitation
  * shows — so `userId` is null only then, and only the server knows it.
  */
-export async function inviteUser(actor: Actor | null, input: unknown): Promise<{ userId: string | null; mail: SendOutcome }> {
+export async function inviteUser(
+  actor: Actor | null,
+  input: unknown,
+): Promise<{ userId: string | null; mail: SendOutcome }> {
   authorize(actor, "users:manage");
   const data = parseOrThrow(inviteSchema, input);
   const db = await getDb();
@@ -112,11 +154,17 @@ export async function inviteUser(actor: Actor | null, input: unknown): Promise<{
   // the same address that got there first answers like the check above.
   const { user, token } = await db
     .transaction(async (tx) => {
-      const [created] = await tx.insert(users).values({ organisationId: actor.organisationId, email: data.email, name: data.name, role: data.role }).returning();
+      const [created] = await tx
+        .insert(users)
+        .values({ organisationId: actor.organisationId, email: data.email, name: data.name, role: data.role })
+        .returning();
       return { user: created, token: await recordInvite(tx, actor, created) };
     })
     .catch((err) => {
-      if (isUniqueViolation(err)) throw new AppError("conflict", "Some fields need attention", [{ path: "email", message: "This person is already in your organisation" }]);
+      if (isUniqueViolation(err))
+        throw new AppError("conflict", "Some fields need attention", [
+          { path: "email", message: "This person is already in your organisation" },
+        ]);
       throw err;
     });
   const mail = await sendInvite(actor, user, token);
@@ -138,12 +186,20 @@ export async function changeRole(actor: Actor | null, input: unknown): Promise<v
   authorize(actor, "users:manage");
   const { userId, role } = parseOrThrow(changeRoleSchema, input);
   const user = await organisationUser(actor, userId);
-  if (user.id === actor.id) throw new AppError("conflict", "You cannot change your own role; ask another administrator");
+  if (user.id === actor.id)
+    throw new AppError("conflict", "You cannot change your own role; ask another administrator");
   if (user.role === role) return;
   const db = await getDb();
   await db.transaction(async (tx) => {
     await tx.update(users).set({ role, updatedAt: new Date() }).where(eq(users.id, user.id));
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: "user.role-changed", entityType: "user", entityId: user.id, details: { from: user.role, to: role } });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "user.role-changed",
+      entityType: "user",
+      entityId: user.id,
+      details: { from: user.role, to: role },
+    });
   });
   forgetSessions();
 }
@@ -159,14 +215,18 @@ export async function setActive(actor: Actor | null, input: unknown): Promise<vo
     await tx.update(users).set({ active, updatedAt: new Date() }).where(eq(users.id, user.id));
     // Deactivation ends every session; reactivation then has nothing old to revive.
     if (!active) await closeAllSessions(user.id, tx);
-    await recordAudit(tx, { organisationId: actor.organisationId, actorId: actor.id, action: active ? "user.reactivated" : "user.deactivated", entityType: "user", entityId: user.id });
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: active ? "user.reactivated" : "user.deactivated",
+      entityType: "user",
+      entityId: user.id,
+    });
   });
   forgetSessions();
 }
 
-export type InviteState =
-  | { state: "valid"; name: string; email: string }
-  | { state: "expired" | "used" | "unknown" };
+export type InviteState = { state: "valid"; name: string; email: string } | { state: "expired" | "used" | "unknown" };
 
 /** What an invite link is worth, without changing anything. */
 export async function inspectInvite(token: string): Promise<InviteState> {
@@ -196,8 +256,18 @@ export async function acceptInvite(token: string, input: unknown): Promise<{ ema
       .where(and(eq(invites.tokenHash, hashToken(token)), isNull(invites.usedAt), gt(invites.expiresAt, new Date())))
       .returning();
     if (!invite) throw new AppError("conflict", inviteStateMessage("used"));
-    const [user] = await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, invite.userId)).returning();
-    await recordAudit(tx, { organisationId: invite.organisationId, actorId: user.id, action: "user.password-set", entityType: "user", entityId: user.id });
+    const [user] = await tx
+      .update(users)
+      .set({ passwordHash, updatedAt: new Date() })
+      .where(eq(users.id, invite.userId))
+      .returning();
+    await recordAudit(tx, {
+      organisationId: invite.organisationId,
+      actorId: user.id,
+      action: "user.password-set",
+      entityType: "user",
+      entityId: user.id,
+    });
     return { email: user.email };
   });
   forgetSessions();

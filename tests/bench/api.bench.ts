@@ -34,7 +34,9 @@ const duration = Number(args.duration);
 const connections = Number(args.connections);
 const databaseUrl = args["database-url"];
 const dataDir = path.join(root, ".bench-data", `scale-${args.assessments}`);
-const where = databaseUrl ? `PostgreSQL server (${new URL(databaseUrl).host})` : `embedded database (${path.relative(root, dataDir)})`;
+const where = databaseUrl
+  ? `PostgreSQL server (${new URL(databaseUrl).host})`
+  : `embedded database (${path.relative(root, dataDir)})`;
 
 const env: NodeJS.ProcessEnv = {
   ...process.env,
@@ -54,12 +56,26 @@ if (!databaseUrl) delete env.DATABASE_URL;
 function seed() {
   if (!databaseUrl && existsSync(path.join(dataDir, "pglite"))) return;
   console.log(`Seeding ${args.assessments} assessments into the ${where}…`);
-  const result = spawnSync(process.execPath, ["--import", "tsx", "assessments/cli/seed-scale.ts", "--assessments", args.assessments!, ...(databaseUrl ? [] : ["--data-dir", dataDir])], { stdio: "inherit", env: { ...env, NODE_ENV: "development" } });
+  const result = spawnSync(
+    process.execPath,
+    [
+      "--import",
+      "tsx",
+      "assessments/cli/seed-scale.ts",
+      "--assessments",
+      args.assessments!,
+      ...(databaseUrl ? [] : ["--data-dir", dataDir]),
+    ],
+    { stdio: "inherit", env: { ...env, NODE_ENV: "development" } },
+  );
   if (result.status !== 0) process.exit(result.status ?? 1);
 }
 
 function startServer(): Promise<ChildProcess> {
-  const server = spawn(process.execPath, ["--import", "tsx", "server.ts"], { env, stdio: ["ignore", "pipe", "inherit"] });
+  const server = spawn(process.execPath, ["--import", "tsx", "server.ts"], {
+    env,
+    stdio: ["ignore", "pipe", "inherit"],
+  });
   return new Promise((resolve, reject) => {
     server.stdout!.on("data", (chunk: Buffer) => chunk.toString().includes("Ready") && resolve(server));
     server.on("exit", (code) => reject(new Error(`the server stopped (exit ${code})`)));
@@ -67,12 +83,16 @@ function startServer(): Promise<ChildProcess> {
 }
 
 /** Resident memory of the server process, in MB (Linux). */
-const rssMb = (pid: number) => Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, "utf8"))?.[1] ?? 0) / 1024;
+const rssMb = (pid: number) =>
+  Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, "utf8"))?.[1] ?? 0) / 1024;
 
 async function signIn(email: string): Promise<string> {
   const csrf = await fetch(`${origin}/api/auth/csrf`);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const cookie = csrf.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = csrf.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const res = await fetch(`${origin}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
@@ -106,7 +126,8 @@ interface Result {
   requests: number;
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
 
 async function load(endpoint: Endpoint, cookie: string, seconds: number): Promise<Result> {
   const latencies: number[] = [];
@@ -119,7 +140,10 @@ async function load(endpoint: Endpoint, cookie: string, seconds: number): Promis
         connections,
         duration: seconds,
         method: endpoint.method ?? "GET",
-        headers: { ...(endpoint.signedIn ? { cookie } : {}), ...(endpoint.method && endpoint.method !== "GET" ? { "content-type": "application/json" } : {}) },
+        headers: {
+          ...(endpoint.signedIn ? { cookie } : {}),
+          ...(endpoint.method && endpoint.method !== "GET" ? { "content-type": "application/json" } : {}),
+        },
         body: endpoint.body,
         requests: endpoint.perConnection ? [endpoint.perConnection()] : undefined,
         timeout: 10,
@@ -134,7 +158,10 @@ async function load(endpoint: Endpoint, cookie: string, seconds: number): Promis
       }
     });
   });
-  if (refused.size) console.log(`  ${endpoint.name}: answered ${[...refused].map(([status, n]) => `${n} × HTTP ${status}`).join(", ")}`);
+  if (refused.size)
+    console.log(
+      `  ${endpoint.name}: answered ${[...refused].map(([status, n]) => `${n} × HTTP ${status}`).join(", ")}`,
+    );
   const sorted = latencies.sort((a, b) => a - b);
   return {
     name: endpoint.name,
@@ -158,7 +185,8 @@ async function main() {
     const cookie = await signIn("adviser@brackenfold.example");
     const get = async <T>(p: string) => (await (await fetch(`${origin}${p}`, { headers: { cookie } })).json()) as T;
     const drafts = (await get<{ items: { revisionId: string }[] }>(`/api/v1/assessments?status=draft&limit=100`)).items;
-    if (drafts.length < connections + 1) throw new Error(`the dataset has ${drafts.length} drafts; the write test needs ${connections + 1}`);
+    if (drafts.length < connections + 1)
+      throw new Error(`the dataset has ${drafts.length} drafts; the write test needs ${connections + 1}`);
 
     // Saving a draft: each connection edits a draft of its own, with the version the last save returned.
     const saves = await Promise.all(
@@ -175,7 +203,11 @@ async function main() {
       setupRequest: (req, context) => {
         const draft = free.shift() ?? saves[0];
         (context as { draft?: (typeof saves)[number] }).draft = draft;
-        return { ...req, path: `/api/v1/revisions/${draft.revisionId}`, body: JSON.stringify({ version: draft.version, content: draft.content }) };
+        return {
+          ...req,
+          path: `/api/v1/revisions/${draft.revisionId}`,
+          body: JSON.stringify({ version: draft.version, content: draft.content }),
+        };
       },
       onResponse: (status, body, context) => {
         const draft = (context as { draft?: (typeof saves)[number] }).draft;
@@ -185,22 +217,51 @@ async function main() {
       },
     });
 
-    const score = JSON.stringify({ method: "niosh", units: "metric", load: 14, origin: { h: 30, v: 40, a: 0 }, destination: { h: 35, v: 110, a: 30 }, frequency: 1, durationHours: 1, coupling: "fair", controlAtDestination: false });
+    const score = JSON.stringify({
+      method: "niosh",
+      units: "metric",
+      load: 14,
+      origin: { h: 30, v: 40, a: 0 },
+      destination: { h: 35, v: 110, a: 30 },
+      frequency: 1,
+      durationHours: 1,
+      coupling: "fair",
+      controlAtDestination: false,
+    });
     const endpoints: Endpoint[] = [
       { name: "floor: minimal route handler", kind: "floor", path: "/api/health", signedIn: false },
       { name: "floor: signed in, reads no table", kind: "floor", path: "/api/v1/me", signedIn: true },
       { name: "floor: the framework's small page (sign-in)", kind: "floor", path: "/sign-in", signedIn: false },
       { name: "assessments list", kind: "list", path: "/api/v1/assessments?limit=20", signedIn: true },
-      { name: "filtered search", kind: "list", path: "/api/v1/assessments?limit=20&q=cabinet&status=approved", signedIn: true },
-      { name: "load register, by mass", kind: "list", path: "/api/v1/components?limit=20&sort=-massKg", signedIn: true },
+      {
+        name: "filtered search",
+        kind: "list",
+        path: "/api/v1/assessments?limit=20&q=cabinet&status=approved",
+        signedIn: true,
+      },
+      {
+        name: "load register, by mass",
+        kind: "list",
+        path: "/api/v1/components?limit=20&sort=-massKg",
+        signedIn: true,
+      },
       { name: "overview page", kind: "page", path: "/", signedIn: true },
       { name: "assessments page", kind: "page", path: "/assessments", signedIn: true },
       { name: "revision page (wizard)", kind: "page", path: `/revisions/${drafts[0].revisionId}`, signedIn: true },
-      { name: "save a draft", kind: "write", path: "/api/v1/revisions", method: "PUT", signedIn: true, perConnection: saveRequest },
+      {
+        name: "save a draft",
+        kind: "write",
+        path: "/api/v1/revisions",
+        method: "PUT",
+        signedIn: true,
+        perConnection: saveRequest,
+      },
       { name: "score a lift", kind: "write", path: "/api/v1/score", method: "POST", body: score, signedIn: true },
     ];
 
-    console.log(`\nHeftwise bench:api — ${args.assessments} assessments on the ${where}; ${connections} connections, ${duration} s each (after 2 s of warming)\n`);
+    console.log(
+      `\nHeftwise bench:api — ${args.assessments} assessments on the ${where}; ${connections} connections, ${duration} s each (after 2 s of warming)\n`,
+    );
     // Warm every route once under load, so that the first measured one does not pay for compiling.
     for (const e of endpoints) await load(e, cookie, 2);
     const memoryStart = rssMb(server.pid!);
@@ -208,7 +269,9 @@ async function main() {
     for (const e of endpoints) {
       const r = await load(e, cookie, duration);
       results.push(r);
-      console.log(`${r.name.padEnd(44)} p50 ${r.p50.toFixed(0).padStart(5)} ms  p95 ${r.p95.toFixed(0).padStart(5)} ms  p99 ${r.p99.toFixed(0).padStart(5)} ms  ${r.rps.toFixed(0).padStart(5)} req/s  ${r.errors} errors  ${rssMb(server.pid!).toFixed(0).padStart(5)} MB`);
+      console.log(
+        `${r.name.padEnd(44)} p50 ${r.p50.toFixed(0).padStart(5)} ms  p95 ${r.p95.toFixed(0).padStart(5)} ms  p99 ${r.p99.toFixed(0).padStart(5)} ms  ${r.rps.toFixed(0).padStart(5)} req/s  ${r.errors} errors  ${rssMb(server.pid!).toFixed(0).padStart(5)} MB`,
+      );
     }
     // Memory: the same run again. A leak grows with every request; a heap that has found its size does not.
     const afterFirst = rssMb(server.pid!);
@@ -220,15 +283,39 @@ async function main() {
     const signedFloor = byName("floor: signed in, reads no table");
     const smallPage = byName("floor: the framework's small page (sign-in)");
     const checks: [string, boolean][] = [
-      [`signed-in floor at least 2/3 of the minimal handler's throughput (${signedFloor.rps.toFixed(0)} vs ${minimal.rps.toFixed(0)} req/s)`, signedFloor.rps >= (2 / 3) * minimal.rps],
-      ...results.filter((r) => r.kind === "list").map((r): [string, boolean] => [`${r.name}: p95 within 2× the signed-in floor's (${r.p95.toFixed(0)} ≤ ${(2 * signedFloor.p95).toFixed(0)} ms)`, r.p95 <= 2 * signedFloor.p95]),
-      ...results.filter((r) => r.kind === "page").map((r): [string, boolean] => [`${r.name}: p95 within 2× the framework's small page (${r.p95.toFixed(0)} ≤ ${(2 * smallPage.p95).toFixed(0)} ms)`, r.p95 <= 2 * smallPage.p95]),
-      [`no errors (${results.reduce((n, r) => n + r.errors, 0)} in ${results.reduce((n, r) => n + r.requests, 0)} requests)`, results.every((r) => r.errors === 0)],
-      [`memory flat: a second run of every endpoint grows the server by at most 10 % (${memoryStart.toFixed(0)} MB after warming, ${afterFirst.toFixed(0)} MB after the run, ${afterSecond.toFixed(0)} MB after the second; peak ${Math.max(...memory).toFixed(0)} MB)`, afterSecond <= afterFirst * 1.1],
+      [
+        `signed-in floor at least 2/3 of the minimal handler's throughput (${signedFloor.rps.toFixed(0)} vs ${minimal.rps.toFixed(0)} req/s)`,
+        signedFloor.rps >= (2 / 3) * minimal.rps,
+      ],
+      ...results
+        .filter((r) => r.kind === "list")
+        .map((r): [string, boolean] => [
+          `${r.name}: p95 within 2× the signed-in floor's (${r.p95.toFixed(0)} ≤ ${(2 * signedFloor.p95).toFixed(0)} ms)`,
+          r.p95 <= 2 * signedFloor.p95,
+        ]),
+      ...results
+        .filter((r) => r.kind === "page")
+        .map((r): [string, boolean] => [
+          `${r.name}: p95 within 2× the framework's small page (${r.p95.toFixed(0)} ≤ ${(2 * smallPage.p95).toFixed(0)} ms)`,
+          r.p95 <= 2 * smallPage.p95,
+        ]),
+      [
+        `no errors (${results.reduce((n, r) => n + r.errors, 0)} in ${results.reduce((n, r) => n + r.requests, 0)} requests)`,
+        results.every((r) => r.errors === 0),
+      ],
+      [
+        `memory flat: a second run of every endpoint grows the server by at most 10 % (${memoryStart.toFixed(0)} MB after warming, ${afterFirst.toFixed(0)} MB after the run, ${afterSecond.toFixed(0)} MB after the second; peak ${Math.max(...memory).toFixed(0)} MB)`,
+        afterSecond <= afterFirst * 1.1,
+      ],
     ];
     console.log("\nTargets");
     for (const [text, met] of checks) console.log(`  ${met ? "met    " : "NOT MET"}  ${text}`);
-    console.log(`\nFor the record, pages against the signed-in floor: ${results.filter((r) => r.kind === "page").map((r) => `${r.name} ${(r.p95 / signedFloor.p95).toFixed(1)}×`).join(", ")} its p95.`);
+    console.log(
+      `\nFor the record, pages against the signed-in floor: ${results
+        .filter((r) => r.kind === "page")
+        .map((r) => `${r.name} ${(r.p95 / signedFloor.p95).toFixed(1)}×`)
+        .join(", ")} its p95.`,
+    );
     process.exitCode = checks.every(([, met]) => met) ? 0 : 1;
   } finally {
     clearInterval(sampler);

@@ -66,12 +66,44 @@ function measure(name: string, requests: ScoreRequest[], rounds: number, target:
  * the solver has work to do, plus hard cases (a lift outside the equation's range, a long carry).
  */
 function whatIfTasks(): [Task, RegisterEntry][] {
-  const part = (massKg: number): RegisterEntry => ({ id: "00000000-0000-4000-8000-000000000001", name: "Part", massKg, grip: "fair", massSource: "datasheet" });
+  const part = (massKg: number): RegisterEntry => ({
+    id: "00000000-0000-4000-8000-000000000001",
+    name: "Part",
+    massKg,
+    grip: "fair",
+    massSource: "datasheet",
+  });
   const out: [Task, RegisterEntry][] = [];
   for (const template of TEMPLATES)
-    for (const task of template.build(() => part(1).id).tasks) for (const kg of [12, 30, 60, 700]) out.push([task, part(kg)]);
-  const reach = { origin: { h: 70, v: -20, a: 140 }, destination: { h: 40, v: 120, a: 0 }, frequency: 9, durationHours: 4, coupling: "poor" as const, controlAtDestination: true };
-  out.push([{ id: "x", description: "", componentId: part(1).id, quantity: 3, operation: "lift", niosh: reach, filter: { sex: "female", zone: "below-standing-level", reach: "extended", frequency: 9, twistDeg: 140, teamSize: 1 } }, part(20)]);
+    for (const task of template.build(() => part(1).id).tasks)
+      for (const kg of [12, 30, 60, 700]) out.push([task, part(kg)]);
+  const reach = {
+    origin: { h: 70, v: -20, a: 140 },
+    destination: { h: 40, v: 120, a: 0 },
+    frequency: 9,
+    durationHours: 4,
+    coupling: "poor" as const,
+    controlAtDestination: true,
+  };
+  out.push([
+    {
+      id: "x",
+      description: "",
+      componentId: part(1).id,
+      quantity: 3,
+      operation: "lift",
+      niosh: reach,
+      filter: {
+        sex: "female",
+        zone: "below-standing-level",
+        reach: "extended",
+        frequency: 9,
+        twistDeg: 140,
+        teamSize: 1,
+      },
+    },
+    part(20),
+  ]);
   return out;
 }
 

@@ -10,12 +10,34 @@ const dir = mkdtempSync(path.join(tmpdir(), "heftwise-score-"));
 function run(input: string, viaStdin = false) {
   const file = path.join(dir, `${Math.random().toString(36).slice(2)}.json`);
   if (!viaStdin) writeFileSync(file, input);
-  const result = spawnSync("npm", ["run", "--silent", "score", "--", viaStdin ? "-" : file], { input: viaStdin ? input : undefined, encoding: "utf8" });
+  const result = spawnSync("npm", ["run", "--silent", "score", "--", viaStdin ? "-" : file], {
+    input: viaStdin ? input : undefined,
+    encoding: "utf8",
+  });
   return { status: result.status, json: result.stdout ? JSON.parse(result.stdout) : undefined, stderr: result.stderr };
 }
 
-const lift = { method: "niosh", units: "metric", load: 12, origin: { h: 25, v: 55, a: 0 }, destination: { h: 25, v: 150, a: 0 }, frequency: 3, durationHours: 0.75, coupling: "good", controlAtDestination: false };
-const filter = { method: "filter", sex: "male", zone: "knuckle-to-elbow", reach: "close", load: 20, frequency: 0.2, twistDeg: 0, teamSize: 1 };
+const lift = {
+  method: "niosh",
+  units: "metric",
+  load: 12,
+  origin: { h: 25, v: 55, a: 0 },
+  destination: { h: 25, v: 150, a: 0 },
+  frequency: 3,
+  durationHours: 0.75,
+  coupling: "good",
+  controlAtDestination: false,
+};
+const filter = {
+  method: "filter",
+  sex: "male",
+  zone: "knuckle-to-elbow",
+  reach: "close",
+  load: 20,
+  frequency: 0.2,
+  twistDeg: 0,
+  teamSize: 1,
+};
 
 describe("npm run score", () => {
   it("scores one request from a file and exits 0", () => {
@@ -24,7 +46,15 @@ describe("npm run score", () => {
     expect(json.method).toBe("niosh");
     expect(json.destination).toBeNull();
     expect(["clear", "watch", "act", "stop"]).toContain(json.band);
-    expect(json.origin).toEqual(expect.objectContaining({ hm: 1, vm: expect.any(Number), fm: expect.any(Number), rwl: expect.any(Number), li: expect.any(Number) }));
+    expect(json.origin).toEqual(
+      expect.objectContaining({
+        hm: 1,
+        vm: expect.any(Number),
+        fm: expect.any(Number),
+        rwl: expect.any(Number),
+        li: expect.any(Number),
+      }),
+    );
   });
 
   it("scores an array from standard input, in order, with errors in place and exit 2", () => {

@@ -10,7 +10,8 @@ async function sign(page: Page) {
   const box = (await pad.boundingBox())!;
   await page.mouse.move(box.x + 15, box.y + box.height / 2);
   await page.mouse.down();
-  for (let i = 1; i <= 12; i++) await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.sin(i) * 20, { steps: 2 });
+  for (let i = 1; i <= 12; i++)
+    await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.sin(i) * 20, { steps: 2 });
   await page.mouse.up();
 }
 
@@ -24,10 +25,15 @@ async function signOn(page: Page, name: string, employer: string, card: string) 
 
 async function axe(page: Page) {
   const results = await new AxeBuilder({ page }).analyze();
-  return results.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`);
+  return results.violations
+    .filter((v) => v.impact === "serious" || v.impact === "critical")
+    .map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`);
 }
 
-test("a foreman briefs from a phone: three operatives and the foreman sign, one of them while offline, each recorded once", async ({ page, context }) => {
+test("a foreman briefs from a phone: three operatives and the foreman sign, one of them while offline, each recorded once", async ({
+  page,
+  context,
+}) => {
   await signIn(page, "foreman@brackenfold.example");
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Briefings" }).click();
   expect(await axe(page)).toEqual([]);
@@ -51,7 +57,8 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await expect(page.getByText(/rest at least every 10 m/)).toBeVisible();
   expect(await axe(page)).toEqual([]);
   // Through the loads, hazards, PPE and emergency to sign-on.
-  while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible())) await page.getByRole("button", { name: "Next" }).click();
+  while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible()))
+    await page.getByRole("button", { name: "Next" }).click();
   expect(await axe(page)).toEqual([]);
 
   // Bad input: nothing signed on.
@@ -65,7 +72,9 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   // The signal drops: the next sign-on waits on the phone.
   await context.setOffline(true);
   await signOn(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
-  await expect(page.getByTestId("sign-on-list")).toContainText("Aled Menhenick (Tarnbrook Plant Hire) — waiting for signal");
+  await expect(page.getByTestId("sign-on-list")).toContainText(
+    "Aled Menhenick (Tarnbrook Plant Hire) — waiting for signal",
+  );
   await expect(page.getByTestId("sign-on-status")).toContainText("1 waiting to send");
   await page.getByRole("button", { name: "Next" }).click();
   await expect(page.getByText(/still waiting for signal/)).toBeVisible();
@@ -84,7 +93,11 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
     const key = Object.keys(localStorage).find((k) => k.startsWith("heftwise-sign-ons-"))!;
     const briefingId = key.replace("heftwise-sign-ons-", "");
     const first = JSON.parse(localStorage.getItem(key)!)[0];
-    const res = await fetch(`/api/v1/briefings/${briefingId}/attendees`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(first) });
+    const res = await fetch(`/api/v1/briefings/${briefingId}/attendees`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify(first),
+    });
     return { status: res.status, body: await res.json() };
   });
   expect(replay.status).toBe(200);
@@ -105,7 +118,9 @@ test("a foreman cannot see drafts or another organisation's work", async ({ page
   const adviserContext = await browser.newContext();
   const adviser = await adviserContext.newPage();
   await signIn(adviser, "adviser@brackenfold.example");
-  const drafts = await adviser.evaluate(async () => (await (await fetch("/api/v1/assessments?status=draft")).json()).items as { revisionId: string }[]);
+  const drafts = await adviser.evaluate(
+    async () => (await (await fetch("/api/v1/assessments?status=draft")).json()).items as { revisionId: string }[],
+  );
   await adviserContext.close();
   expect(drafts.length).toBeGreaterThan(0);
 
@@ -115,7 +130,10 @@ test("a foreman cannot see drafts or another organisation's work", async ({ page
   expect((await page.goto(`/briefings/${drafts[0].revisionId}`))?.status()).toBe(404);
   expect((await page.goto(`/revisions/${drafts[0].revisionId}`))?.status()).toBe(403);
   expect((await page.goto("/briefings/7b1e9c52-0d6f-4c1a-9a51-2f7d0f1e9a10"))?.status()).toBe(404);
-  const api = await page.evaluate(async (id) => (await fetch(`/api/v1/revisions/${id}/briefing-sheet`)).status, drafts[0].revisionId);
+  const api = await page.evaluate(
+    async (id) => (await fetch(`/api/v1/revisions/${id}/briefing-sheet`)).status,
+    drafts[0].revisionId,
+  );
   expect(api).toBe(404);
 });
 
@@ -135,5 +153,7 @@ test("a site change note reaches the adviser's inbox and warns the next briefing
   await page.goto("/briefings");
   await expect(page.getByText("Site change reported — needs review")).toBeVisible();
   await page.getByRole("link", { name: "Brief the gang" }).first().click();
-  await expect(page.getByRole("alert").filter({ hasText: "Site change reported" })).toContainText("carry distance now 60 m");
+  await expect(page.getByRole("alert").filter({ hasText: "Site change reported" })).toContainText(
+    "carry distance now 60 m",
+  );
 });

@@ -13,7 +13,9 @@ test("an adviser creates a job", async ({ page }) => {
   await form.getByLabel("Job name").fill("Tolgarth footbridge: new cable route");
   await form.getByLabel("Client", { exact: true }).fill("Wendmoor Railway Infrastructure");
   await form.getByLabel("Location").fill("Tolgarth, up cess");
-  await form.getByLabel("Nearest hospital with an emergency department").fill("Tolgarth Community Hospital, emergency department");
+  await form
+    .getByLabel("Nearest hospital with an emergency department")
+    .fill("Tolgarth Community Hospital, emergency department");
   await form.getByLabel("Emergency arrangements").fill("Meet the ambulance at the station car park.");
   await form.getByLabel("Site contact phone").fill("call me maybe");
   await form.getByRole("button", { name: "Save job" }).click();
@@ -27,12 +29,24 @@ test("an adviser imports a CSV: a bad file is refused row by row, a good one is 
   await signIn(page, "adviser@brackenfold.example");
   await page.goto("/load-register/import");
   const input = page.getByLabel("CSV file");
-  await input.setInputFiles({ name: "bad.csv", mimeType: "text/csv", buffer: Buffer.from("name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,-4,wobbly,weighed\n") });
+  await input.setInputFiles({
+    name: "bad.csv",
+    mimeType: "text/csv",
+    buffer: Buffer.from(
+      "name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,-4,wobbly,weighed\n",
+    ),
+  });
   await expect(page.getByTestId("import-summary")).toContainText("1 with problems");
   await expect(page.getByRole("cell", { name: /grip: Choose good, fair or poor/ })).toBeVisible();
   await expect(page.getByRole("button", { name: /^Import/ })).toBeDisabled();
 
-  await input.setInputFiles({ name: "good.csv", mimeType: "text/csv", buffer: Buffer.from("name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,4,good,estimated\n") });
+  await input.setInputFiles({
+    name: "good.csv",
+    mimeType: "text/csv",
+    buffer: Buffer.from(
+      "name,mass_kg,grip,mass_source\nCable drum stand,35,fair,weighed\nHandrail post,4,good,estimated\n",
+    ),
+  });
   await expect(page.getByTestId("import-summary")).toContainText("all ready to import");
   await page.getByRole("button", { name: "Import 2 components" }).click();
   await expect(page.getByText("2 components imported.")).toBeVisible();
@@ -55,7 +69,9 @@ test("an adviser builds an assessment through the wizard, watches the live score
 
   await page.getByLabel("Scope of the work").fill("Fit an axle counter head and lay two trough sections.");
   // A railway job starts near the line, with the job's access point.
-  await steps(page).getByRole("button", { name: /Near the line/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Near the line/ })
+    .click();
   await expect(page.getByLabel("Where is the work?")).toHaveValue("near");
   await expect(page.getByLabel("Access point", { exact: true })).toHaveValue(/Gorsey Lane access gate/);
   await page.getByLabel("Where is the work?").selectOption("on");
@@ -63,13 +79,17 @@ test("an adviser builds an assessment through the wizard, watches the live score
   await page.getByLabel("Person responsible for the safe system of work").fill("Nerys Caldwell");
   await page.getByLabel("Their competence reference").fill("SSOW-PL 3318");
   await page.getByLabel("Positions of safety").fill("Up cess beyond the cabinet, clear of the fence line");
-  await steps(page).getByRole("button", { name: /Sequence of work/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Sequence of work/ })
+    .click();
   await page.getByRole("button", { name: "Add a step" }).click();
   await page.getByLabel("Step 1", { exact: true }).fill("Brief the gang at the access point.");
   await page.getByRole("button", { name: "Add a step" }).click();
   await page.getByLabel("Step 2", { exact: true }).fill("Carry the kit to site and fit it.");
 
-  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
   // Task 1: a light lift, clear.
   await page.getByRole("button", { name: "Add a handling task" }).click();
   const t1 = page.getByTestId("task-0");
@@ -99,8 +119,13 @@ test("an adviser builds an assessment through the wizard, watches the live score
   // What would bring it to clear is re-scored, not promised: a third person only brings it to Watch
   // (3 × 20 kg × ½ = 30 kg against 42 kg), and the list says so with the band.
   const whatIf = t2.getByTestId("what-if");
-  await expect(whatIf.getByTestId("what-if-suggestion").filter({ hasText: "A team of 3 instead of 2" }).locator("[data-band]")).toHaveAttribute("data-band", "watch");
-  await expect(whatIf.getByTestId("what-if-suggestion").first().locator("[data-band]")).toHaveAttribute("data-band", "clear");
+  await expect(
+    whatIf.getByTestId("what-if-suggestion").filter({ hasText: "A team of 3 instead of 2" }).locator("[data-band]"),
+  ).toHaveAttribute("data-band", "watch");
+  await expect(whatIf.getByTestId("what-if-suggestion").first().locator("[data-band]")).toHaveAttribute(
+    "data-band",
+    "clear",
+  );
 
   // Task 3: carrying the battery set: watch.
   await page.getByRole("button", { name: "Add a handling task" }).click();
@@ -111,26 +136,37 @@ test("an adviser builds an assessment through the wizard, watches the live score
   await t3.getByLabel("Carried").fill("8");
   await expect(t3.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "watch");
 
-  await steps(page).getByRole("button", { name: /Hazards & controls/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Hazards & controls/ })
+    .click();
   await page.getByRole("button", { name: "Add a hazard" }).click();
   await page.getByLabel("Hazard", { exact: true }).fill("Trip on ballast while carrying");
   await page.getByLabel("Who is at risk").fill("Gang");
   await page.getByRole("button", { name: "Add a control" }).click();
   await page.getByLabel("Control 1", { exact: true }).fill("Walk the route first and clear it");
 
-  await steps(page).getByRole("button", { name: /People, plant & PPE/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /People, plant & PPE/ })
+    .click();
   await page.getByRole("button", { name: "Add a person" }).click();
   await page.getByLabel("Role", { exact: true }).fill("Person in charge");
   await page.getByLabel("Name", { exact: true }).fill("Dafydd Strand");
   await page.getByRole("button", { name: "Add PPE" }).click();
   await page.getByLabel("PPE 1", { exact: true }).fill("Hi-vis clothing");
 
-  await steps(page).getByRole("button", { name: /Emergency/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Emergency/ })
+    .click();
   await expect(page.getByLabel("Nearest hospital with an emergency department")).toHaveValue(/Hollin Vale General/);
 
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   await expect(page.getByText("Nothing required is missing.")).toBeVisible();
-  await expect(page.getByText("Worst band of the tasks:").locator("..").locator("[data-band]")).toHaveAttribute("data-band", "act");
+  await expect(page.getByText("Worst band of the tasks:").locator("..").locator("[data-band]")).toHaveAttribute(
+    "data-band",
+    "act",
+  );
   await page.getByRole("button", { name: "Submit for approval" }).click();
   await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
 });
@@ -155,7 +191,9 @@ test("a save over someone else's newer save shows the conflict and keeps what wa
   await other.close();
 });
 
-test("the engine's edges in the wizard: a long carry, a downhill trolley and a lift beyond the equation are never Clear", async ({ page }) => {
+test("the engine's edges in the wizard: a long carry, a downhill trolley and a lift beyond the equation are never Clear", async ({
+  page,
+}) => {
   await signIn(page, "adviser@brackenfold.example");
   await page.goto("/assessments/new");
   const form = page.getByRole("form", { name: "New assessment" });
@@ -163,8 +201,11 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   await form.getByLabel("Title").fill("Edges of the methods at Carrowby");
   await form.getByLabel(/A blank assessment/).check();
   await form.getByRole("button", { name: "Create and open" }).click();
-  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
-  const band = (task: ReturnType<Page["getByTestId"]>) => task.getByTestId("task-result").locator("[data-band]").first();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
+  const band = (task: ReturnType<Page["getByTestId"]>) =>
+    task.getByTestId("task-result").locator("[data-band]").first();
 
   // A 40 m carry of 31 kg: Watch; a pair alone is not offered as reaching Clear, and what is offered was re-scored.
   await page.getByRole("button", { name: "Add a handling task" }).click();
@@ -174,7 +215,9 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   await carry.getByLabel("Carried").fill("40");
   await expect(band(carry)).toHaveAttribute("data-band", "watch");
   await expect(carry.getByTestId("what-if-together").locator("[data-band]")).toHaveAttribute("data-band", "clear");
-  await expect(carry.getByTestId("what-if-suggestion").filter({ hasText: "A team of 2" }).locator('[data-band="clear"]')).toHaveCount(0);
+  await expect(
+    carry.getByTestId("what-if-suggestion").filter({ hasText: "A team of 2" }).locator('[data-band="clear"]'),
+  ).toHaveCount(0);
 
   // A trolley on rails, 1 in 0 is refused with a message and no band; 1 in 150 downhill, unbraked: Stop.
   await page.getByRole("button", { name: "Add a handling task" }).click();
@@ -199,5 +242,7 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   await lift.getByLabel("H at end").fill("70");
   await expect(band(lift)).toHaveAttribute("data-band", "stop");
   await expect(lift.getByTestId("task-result")).toContainText("H at the destination is 70 cm");
-  await expect(lift.getByTestId("what-if-suggestion").filter({ hasText: "H 63 cm" }).locator("[data-band]")).toHaveAttribute("data-band", "clear");
+  await expect(
+    lift.getByTestId("what-if-suggestion").filter({ hasText: "H 63 cm" }).locator("[data-band]"),
+  ).toHaveAttribute("data-band", "clear");
 });

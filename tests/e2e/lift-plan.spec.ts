@@ -6,11 +6,15 @@ import { signIn, steps, waitForMail } from "./helpers";
 // e-mail; the signed pack is downloaded and checked on /verify.
 test.describe.configure({ mode: "serial" });
 
-test("an adviser plans a lift: sling diagram, bad input refused, a complete plan lets the assessment be submitted", async ({ page }) => {
+test("an adviser plans a lift: sling diagram, bad input refused, a complete plan lets the assessment be submitted", async ({
+  page,
+}) => {
   await signIn(page, "adviser@brackenfold.example");
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Assessments" }).click();
   await page.getByRole("link", { name: "Cabinet and chamber ring by lorry-loader crane" }).click();
-  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
   await page.getByRole("link", { name: "Open the lift plan" }).first().click();
 
   const diagram = page.getByTestId("sling-diagram");
@@ -36,18 +40,24 @@ test("an adviser plans a lift: sling diagram, bad input refused, a complete plan
   await expect(result).toContainText("No appointed person");
 
   await page.getByRole("link", { name: "← Back to Loads & lifts" }).click();
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   await expect(page.getByTestId("missing")).toContainText("appointed person");
   await expect(page.getByRole("button", { name: "Submit for approval" })).toBeDisabled();
 
   // Put the appointed person back; then submit.
-  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
   await page.getByRole("link", { name: "Open the lift plan" }).first().click();
   await page.getByLabel("Appointed person").fill("Gwenllian Marsh");
   await page.getByRole("button", { name: "Save lift plan" }).click();
   await expect(page.getByText("Lift plan saved.")).toBeVisible();
   await page.getByRole("link", { name: "← Back to Loads & lifts" }).click();
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   await expect(page.getByText("Nothing required is missing.")).toBeVisible();
   await page.getByRole("button", { name: "Submit for approval" }).click();
   await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
@@ -55,7 +65,9 @@ test("an adviser plans a lift: sling diagram, bad input refused, a complete plan
   await expect(page.getByText("cannot be edited here")).toBeVisible();
 });
 
-test("the approver opens the e-mailed link, draws a signature and approves; the adviser downloads the signed pack", async ({ browser }) => {
+test("the approver opens the e-mailed link, draws a signature and approves; the adviser downloads the signed pack", async ({
+  browser,
+}) => {
   const mail = await waitForMail("approver@brackenfold.example");
   expect(mail.subject).toContain("Review requested: Cabinet and chamber ring");
   const link = mail.text.match(/https?:\/\/\S+\/reviews\/[0-9a-f-]+/)![0];
@@ -77,7 +89,8 @@ test("the approver opens the e-mailed link, draws a signature and approves; the 
   const box = (await pad.boundingBox())!;
   await approver.mouse.move(box.x + 20, box.y + box.height / 2);
   await approver.mouse.down();
-  for (let i = 1; i <= 20; i++) await approver.mouse.move(box.x + 20 + i * 12, box.y + box.height / 2 + Math.sin(i) * 25, { steps: 2 });
+  for (let i = 1; i <= 20; i++)
+    await approver.mouse.move(box.x + 20 + i * 12, box.y + box.height / 2 + Math.sin(i) * 25, { steps: 2 });
   await approver.mouse.up();
   await approver.getByRole("button", { name: "Countersign and approve…" }).click();
   const dialog = approver.getByRole("dialog");
@@ -120,7 +133,9 @@ test("the approver opens the e-mailed link, draws a signature and approves; the 
   await visitor.getByLabel("Pack (PDF, at most 20 MB)").setInputFiles(tamperedFile);
   await visitor.getByRole("button", { name: "Check" }).click();
   await expect(visitor.getByTestId("verify-answer")).toHaveAttribute("data-result", "altered");
-  await visitor.getByLabel("Pack (PDF, at most 20 MB)").setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("plain words, not a PDF") });
+  await visitor
+    .getByLabel("Pack (PDF, at most 20 MB)")
+    .setInputFiles({ name: "notes.pdf", mimeType: "application/pdf", buffer: Buffer.from("plain words, not a PDF") });
   await visitor.getByRole("button", { name: "Check" }).click();
   await expect(visitor.getByText("This file is not a PDF")).toBeVisible();
   await anyone.close();

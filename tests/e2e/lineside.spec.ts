@@ -1,10 +1,15 @@
 import { expect, test } from "@playwright/test";
 import { signIn, steps } from "./helpers";
 
-test("an admin keeps the hazard library; an adviser copies a hazard from it into an assessment", async ({ page, browser }) => {
+test("an admin keeps the hazard library; an adviser copies a hazard from it into an assessment", async ({
+  page,
+  browser,
+}) => {
   await signIn(page, "admin@brackenfold.example");
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Hazard library" }).click();
-  await expect(page.getByTestId("library-entry").filter({ hasText: "Striking a buried cable or pipe while digging" })).toBeVisible();
+  await expect(
+    page.getByTestId("library-entry").filter({ hasText: "Striking a buried cable or pipe while digging" }),
+  ).toBeVisible();
   await page.getByRole("link", { name: "New hazard" }).click();
   const form = page.getByRole("form", { name: "Library hazard" });
   await form.getByRole("button", { name: "Save to the library" }).click();
@@ -25,22 +30,32 @@ test("an admin keeps the hazard library; an adviser copies a hazard from it into
   await expect(adviser.getByRole("link", { name: "New hazard" })).toHaveCount(0);
   await adviser.goto("/assessments");
   await adviser.getByRole("link", { name: "Equipment base and cable chamber at Carrowby" }).click();
-  await steps(adviser).getByRole("button", { name: /Hazards & controls/ }).click();
+  await steps(adviser)
+    .getByRole("button", { name: /Hazards & controls/ })
+    .click();
   const before = await adviser.getByRole("article", { name: /^Hazard \d+$/ }).count();
-  await adviser.getByLabel("From the hazard library").selectOption({ label: "Striking a buried cable or pipe while digging" });
+  await adviser
+    .getByLabel("From the hazard library")
+    .selectOption({ label: "Striking a buried cable or pipe while digging" });
   await adviser.getByRole("button", { name: "Add with its controls" }).click();
   const added = adviser.getByRole("article", { name: `Hazard ${before + 1}` });
-  await expect(added.getByLabel("Hazard", { exact: true })).toHaveValue("Striking a buried cable or pipe while digging");
+  await expect(added.getByLabel("Hazard", { exact: true })).toHaveValue(
+    "Striking a buried cable or pipe while digging",
+  );
   await expect(added.getByLabel("Control 2", { exact: true })).toHaveValue(/cable locating tool/);
   await expect(adviser.getByText(/All changes saved/)).toBeVisible();
   await adviserContext.close();
 });
 
-test("the lineside template: a braked trolley on rails, parts passed into an excavation, and a crane lift on mats", async ({ page }) => {
+test("the lineside template: a braked trolley on rails, parts passed into an excavation, and a crane lift on mats", async ({
+  page,
+}) => {
   await signIn(page, "adviser@brackenfold.example");
   await page.goto("/assessments");
   await page.getByRole("link", { name: "Equipment base and cable chamber at Carrowby" }).click();
-  await steps(page).getByRole("button", { name: /Loads & lifts/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
   const band = (i: number) => page.getByTestId(`task-${i}`).getByTestId("task-result").locator("[data-band]").first();
 
   // Trolley: braked, so Watch until the brake's operator is named — and the result says it.
@@ -53,7 +68,9 @@ test("the lineside template: a braked trolley on rails, parts passed into an exc
 
   // Passing sections down into the excavation: never Clear; the what-if offers a receiver in the excavation.
   await expect(band(2)).toHaveAttribute("data-band", "act");
-  await expect(page.getByTestId("task-2").getByTestId("what-if-suggestion").first()).toContainText("second person standing in the excavation");
+  await expect(page.getByTestId("task-2").getByTestId("what-if-suggestion").first()).toContainText(
+    "second person standing in the excavation",
+  );
 
   // The crane lift on mats: ground bearing shown on the lift plan; bad input refused; soft ground stops it.
   await page.getByRole("link", { name: "Open the lift plan" }).click();
@@ -62,7 +79,12 @@ test("the lineside template: a braked trolley on rails, parts passed into an exc
   await expect(result).toContainText("Ground pressure (kPa)");
   await expect(result).toContainText("69 of 75");
   await expect(result.locator("[data-band]").first()).toHaveAttribute("data-band", "watch");
-  await expect(result.getByTestId("what-if-suggestion").filter({ hasText: "Outrigger mats of at least 1.3 m" }).locator("[data-band]")).toHaveAttribute("data-band", "clear");
+  await expect(
+    result
+      .getByTestId("what-if-suggestion")
+      .filter({ hasText: "Outrigger mats of at least 1.3 m" })
+      .locator("[data-band]"),
+  ).toHaveAttribute("data-band", "clear");
   await page.getByLabel("Mat length").fill("0");
   await expect(page.getByText("must be greater than 0")).toBeVisible();
   await page.getByLabel("Mat length").fill("1.2");
@@ -76,7 +98,9 @@ test("the lineside template: a braked trolley on rails, parts passed into an exc
   await expect(page.getByText("a basket or endless sling is one sling: 1 leg")).toBeVisible();
 });
 
-test("the review step blocks lineside gaps: no protection arrangement, no responsible person, a permit without its reference", async ({ page }) => {
+test("the review step blocks lineside gaps: no protection arrangement, no responsible person, a permit without its reference", async ({
+  page,
+}) => {
   await signIn(page, "adviser@brackenfold.example");
   await page.goto("/assessments/new");
   const form = page.getByRole("form", { name: "New assessment" });
@@ -85,7 +109,9 @@ test("the review step blocks lineside gaps: no protection arrangement, no respon
   await form.getByLabel(/Laying a cable trough route/).check();
   await form.getByRole("button", { name: "Create and open" }).click();
 
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   const missing = page.getByTestId("missing");
   await expect(missing).toContainText("Name the person responsible for the safe system of work.");
   await expect(missing).toContainText("Say where the positions of safety are.");
@@ -103,7 +129,9 @@ test("the review step blocks lineside gaps: no protection arrangement, no respon
   await page.getByLabel("Positions of safety").fill("The cess beyond the fence line, every 20 m");
 
   // A permit listed without its reference; its dates the wrong way round.
-  await steps(page).getByRole("button", { name: /Permits, services & digging/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Permits, services & digging/ })
+    .click();
   await page.getByRole("button", { name: "Add a permit" }).click();
   const permit = page.getByRole("group", { name: "Permit 1" });
   await permit.getByLabel("Permit", { exact: true }).selectOption("hot-work");
@@ -113,17 +141,25 @@ test("the review step blocks lineside gaps: no protection arrangement, no respon
   await expect(permit.getByText("Must be on or after the start date")).toBeVisible();
   await permit.getByLabel("Valid to").fill("2027-03-12");
 
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   await expect(missing).toContainText("Choose the protection arrangement for working on or near the line.");
   await expect(missing).toContainText("Hot work permit: the permit is listed as needed but has no reference.");
   await expect(missing).not.toContainText("Name the person responsible");
   await expect(page.getByRole("button", { name: "Submit for approval" })).toBeDisabled();
 
-  await steps(page).getByRole("button", { name: /Near the line/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Near the line/ })
+    .click();
   await page.getByLabel("Protection arrangement").selectOption("line-blockage");
-  await steps(page).getByRole("button", { name: /Permits, services & digging/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Permits, services & digging/ })
+    .click();
   await page.getByRole("group", { name: "Permit 1" }).getByLabel("Reference").fill("HW-0093");
-  await steps(page).getByRole("button", { name: /Review & submit/ }).click();
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
   await expect(missing).not.toContainText("protection arrangement");
   await expect(missing).not.toContainText("Hot work permit");
 });

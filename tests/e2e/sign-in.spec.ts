@@ -4,7 +4,10 @@ import { signIn, waitForMail } from "./helpers";
 
 const navigationByRole = {
   admin: { shows: ["Overview", "Jobs", "Load register", "People", "Sent e-mail"], hides: ["For review", "Briefings"] },
-  adviser: { shows: ["Overview", "Jobs", "Load register"], hides: ["People", "Sent e-mail", "For review", "Briefings"] },
+  adviser: {
+    shows: ["Overview", "Jobs", "Load register"],
+    hides: ["People", "Sent e-mail", "For review", "Briefings"],
+  },
   approver: { shows: ["Overview", "For review"], hides: ["Jobs", "Load register", "People", "Briefings"] },
   foreman: { shows: ["Overview", "Briefings"], hides: ["Jobs", "Load register", "People", "For review"] },
 } as const;
@@ -13,8 +16,10 @@ for (const user of DEMO_USERS) {
   test(`${user.role} signs in and sees the navigation for the role`, async ({ page }) => {
     await signIn(page, user.email);
     const nav = page.getByRole("navigation", { name: "Main" });
-    for (const label of navigationByRole[user.role].shows) await expect(nav.getByRole("link", { name: label, exact: true })).toBeVisible();
-    for (const label of navigationByRole[user.role].hides) await expect(nav.getByRole("link", { name: label, exact: true })).toHaveCount(0);
+    for (const label of navigationByRole[user.role].shows)
+      await expect(nav.getByRole("link", { name: label, exact: true })).toBeVisible();
+    for (const label of navigationByRole[user.role].hides)
+      await expect(nav.getByRole("link", { name: label, exact: true })).toHaveCount(0);
     await expect(page.getByRole("note")).toContainText("does not replace");
   });
 }
@@ -124,7 +129,10 @@ test("deactivating a user stops their session at once", async ({ page, browser }
   await other.close();
 });
 
-test("signing out ends the session: a copy of its cookie no longer works; 'everywhere' ends the other devices' too", async ({ page, browser }) => {
+test("signing out ends the session: a copy of its cookie no longer works; 'everywhere' ends the other devices' too", async ({
+  page,
+  browser,
+}) => {
   await signIn(page, "adviser@brackenfold.example");
   const copied = await page.context().cookies();
   await page.goto("/sign-out");
@@ -150,7 +158,10 @@ test("signing out ends the session: a copy of its cookie no longer works; 'every
   await office.close();
 });
 
-test("the server answers like a careful colleague: security headers on every page, 413 for an oversized form, 403 for a cross-site write", async ({ page, request }) => {
+test("the server answers like a careful colleague: security headers on every page, 413 for an oversized form, 403 for a cross-site write", async ({
+  page,
+  request,
+}) => {
   const blocked: string[] = [];
   page.on("console", (m) => {
     if (/Content Security Policy|Refused to (execute|load)/i.test(m.text())) blocked.push(m.text());
@@ -177,15 +188,28 @@ test("the server answers like a careful colleague: security headers on every pag
   expect(headers["x-powered-by"]).toBeUndefined();
 
   // A server action sent more than its limit: a clear 413, not an error from inside the framework.
-  const big = await request.post("/jobs/new", { headers: { "next-action": "0123456789abcdef", "content-type": "text/plain;charset=UTF-8" }, data: "x".repeat(1_100_000) });
+  const big = await request.post("/jobs/new", {
+    headers: { "next-action": "0123456789abcdef", "content-type": "text/plain;charset=UTF-8" },
+    data: "x".repeat(1_100_000),
+  });
   expect(big.status()).toBe(413);
   expect((await big.json()).error.code).toBe("payload_too_large");
 
   // A server action posted from another site's page.
-  const foreignAction = await request.post("/jobs/new", { headers: { "next-action": "0123456789abcdef", origin: "https://evil.example", "content-type": "text/plain;charset=UTF-8" }, data: "[]" });
+  const foreignAction = await request.post("/jobs/new", {
+    headers: {
+      "next-action": "0123456789abcdef",
+      origin: "https://evil.example",
+      "content-type": "text/plain;charset=UTF-8",
+    },
+    data: "[]",
+  });
   expect(foreignAction.status()).toBe(403);
 
   // A write from another site's page, with a simple content type a plain form can send.
-  const crossSite = await request.post("/api/v1/components/import", { headers: { origin: "https://evil.example", "content-type": "text/plain" }, data: "name,mass_kg,grip,mass_source\n" });
+  const crossSite = await request.post("/api/v1/components/import", {
+    headers: { origin: "https://evil.example", "content-type": "text/plain" },
+    data: "name,mass_kg,grip,mass_source\n",
+  });
   expect(crossSite.status()).toBe(403);
 });

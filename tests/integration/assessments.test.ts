@@ -23,7 +23,11 @@ beforeAll(async () => {
   foreman = await actorFor("foreman", organisationId);
 });
 
-const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
+const code = (p: Promise<unknown>) =>
+  p.then(
+    () => "ok",
+    (e) => (e instanceof AppError ? e.code : String(e)),
+  );
 
 describe("the demo scenario", () => {
   it("seeds a crane assessment with one standard and one complex lift, complete and scored", async () => {
@@ -41,7 +45,11 @@ describe("the demo scenario", () => {
 describe("drafts", () => {
   it("creates from a template with tasks scored, and the job's emergency details", async () => {
     const jobs = await (await import("@/assessments/jobs/queries")).listJobs(adviser);
-    const { revisionId } = await createAssessment(adviser, { jobId: jobs[0].id, title: "Trough route test", templateId: "trough-route" });
+    const { revisionId } = await createAssessment(adviser, {
+      jobId: jobs[0].id,
+      title: "Trough route test",
+      templateId: "trough-route",
+    });
     const { content, revision } = await getRevision(adviser, revisionId);
     expect(content.tasks.map((t) => t.operation)).toEqual(["push", "team-lift", "carry"]);
     expect(content.tasks.every((t) => t.componentId)).toBe(true);
@@ -58,24 +66,48 @@ describe("drafts", () => {
     const saved = await saveRevision(adviser, revisionId, { version: first.revision.version, content: edited });
     expect(saved.version).toBe(first.revision.version + 1);
     const stale = { ...first.content, scope: { ...first.content.scope, summary: "Second editor" } };
-    expect(await code(saveRevision(adviser, revisionId, { version: first.revision.version, content: stale }))).toBe("conflict");
+    expect(await code(saveRevision(adviser, revisionId, { version: first.revision.version, content: stale }))).toBe(
+      "conflict",
+    );
     expect((await getRevision(adviser, revisionId)).content.scope.summary).toBe("First editor");
   });
 
   it("invalid content answers 422 with the field path", async () => {
     const { revisionId } = (await listAssessments(adviser))[0];
     const current = await getRevision(adviser, revisionId);
-    const bad = { ...current.content, hazards: [{ id: "h", hazard: "", whoIsAtRisk: "", likelihoodBefore: 9, severityBefore: 1, controls: [], likelihoodAfter: 1, severityAfter: 1 }] };
-    const err = await saveRevision(adviser, revisionId, { version: current.revision.version, content: bad }).catch((e: AppError) => e);
+    const bad = {
+      ...current.content,
+      hazards: [
+        {
+          id: "h",
+          hazard: "",
+          whoIsAtRisk: "",
+          likelihoodBefore: 9,
+          severityBefore: 1,
+          controls: [],
+          likelihoodAfter: 1,
+          severityAfter: 1,
+        },
+      ],
+    };
+    const err = await saveRevision(adviser, revisionId, { version: current.revision.version, content: bad }).catch(
+      (e: AppError) => e,
+    );
     expect((err as AppError).code).toBe("validation");
-    expect((err as AppError).issues!.map((i) => i.path)).toEqual(expect.arrayContaining(["content.hazards.0.hazard", "content.hazards.0.likelihoodBefore"]));
+    expect((err as AppError).issues!.map((i) => i.path)).toEqual(
+      expect.arrayContaining(["content.hazards.0.hazard", "content.hazards.0.likelihoodBefore"]),
+    );
   });
 
   it("approvers and foremen cannot create or edit; another organisation gets 404", async () => {
     const { revisionId } = (await listAssessments(adviser))[0];
     const current = await getRevision(adviser, revisionId);
-    expect(await code(saveRevision(approver, revisionId, { version: current.revision.version, content: current.content }))).toBe("forbidden");
-    expect(await code(saveRevision(foreman, revisionId, { version: current.revision.version, content: current.content }))).toBe("forbidden");
+    expect(
+      await code(saveRevision(approver, revisionId, { version: current.revision.version, content: current.content })),
+    ).toBe("forbidden");
+    expect(
+      await code(saveRevision(foreman, revisionId, { version: current.revision.version, content: current.content })),
+    ).toBe("forbidden");
     const other = await otherOrganisation();
     expect(await code(getRevision(other.admin, revisionId))).toBe("not_found");
     expect(await code(getRevision(adviser, "not-a-uuid"))).toBe("not_found");
@@ -87,7 +119,11 @@ describe("submission", () => {
     const list = await listAssessments(adviser);
     const draft = list.find((a) => a.title === "Equipment base by hand at Carrowby")!;
     const current = await getRevision(adviser, draft.revisionId);
-    const err = await submitRevision(adviser, draft.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(180) }).catch((e: AppError) => e);
+    const err = await submitRevision(adviser, draft.revisionId, {
+      version: current.revision.version,
+      approverId: approver.id,
+      reviewDate: reviewDateIn(180),
+    }).catch((e: AppError) => e);
     expect((err as AppError).code).toBe("validation");
     expect((err as AppError).issues!.some((i) => /names? the people|Name the people/i.test(i.message))).toBe(true);
   });
@@ -96,7 +132,11 @@ describe("submission", () => {
     const crane = (await listAssessments(adviser)).find((a) => a.title.includes("lorry-loader"))!;
     const current = await getRevision(adviser, crane.revisionId);
     const problem = async (reviewDate: string) => {
-      const err = await submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate }).catch((e: AppError) => e);
+      const err = await submitRevision(adviser, crane.revisionId, {
+        version: current.revision.version,
+        approverId: approver.id,
+        reviewDate,
+      }).catch((e: AppError) => e);
       return (err as AppError).issues?.filter((i) => i.path === "reviewDate").map((i) => i.message);
     };
     expect(await problem(reviewDateIn(0))).toEqual(["The review date must be after today"]);
@@ -122,9 +162,16 @@ describe("submission", () => {
     const crane = list.find((a) => a.title.includes("lorry-loader"))!;
     const current = await getRevision(adviser, crane.revisionId);
     const content = structuredClone(current.content);
-    content.tasks[0].lift!.people = { ...content.tasks[0].lift!.people, appointedPerson: { name: "", competenceRef: "" } };
+    content.tasks[0].lift!.people = {
+      ...content.tasks[0].lift!.people,
+      appointedPerson: { name: "", competenceRef: "" },
+    };
     const saved = await saveRevision(adviser, crane.revisionId, { version: current.revision.version, content });
-    const err = await submitRevision(adviser, crane.revisionId, { version: saved.version, approverId: approver.id, reviewDate: reviewDateIn(180) }).catch((e: AppError) => e);
+    const err = await submitRevision(adviser, crane.revisionId, {
+      version: saved.version,
+      approverId: approver.id,
+      reviewDate: reviewDateIn(180),
+    }).catch((e: AppError) => e);
     expect((err as AppError).issues!.some((i) => i.message.includes("appointed person"))).toBe(true);
     // put it back
     await saveRevision(adviser, crane.revisionId, { version: saved.version, content: current.content });
@@ -134,12 +181,26 @@ describe("submission", () => {
     const list = await listAssessments(adviser);
     const crane = list.find((a) => a.title.includes("lorry-loader"))!;
     const current = await getRevision(adviser, crane.revisionId);
-    expect(await code(submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: foreman.id, reviewDate: reviewDateIn(180) }))).toBe("validation");
-    await submitRevision(adviser, crane.revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(180) });
+    expect(
+      await code(
+        submitRevision(adviser, crane.revisionId, {
+          version: current.revision.version,
+          approverId: foreman.id,
+          reviewDate: reviewDateIn(180),
+        }),
+      ),
+    ).toBe("validation");
+    await submitRevision(adviser, crane.revisionId, {
+      version: current.revision.version,
+      approverId: approver.id,
+      reviewDate: reviewDateIn(180),
+    });
     const db = await getDb();
     const [row] = await db.select().from(revisions).where(eq(revisions.id, crane.revisionId));
     expect(row.status).toBe("submitted");
     expect(row.contentHash).toMatch(/^[0-9a-f]{64}$/);
-    expect(await code(saveRevision(adviser, crane.revisionId, { version: row.version, content: current.content }))).toBe("conflict");
+    expect(
+      await code(saveRevision(adviser, crane.revisionId, { version: row.version, content: current.content })),
+    ).toBe("conflict");
   });
 });

@@ -10,7 +10,17 @@ import path from "node:path";
 import { count } from "drizzle-orm";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
-import { assessments, auditEvents, briefings, components, hazardLibrary, jobs, revisions, userSessions, users } from "@/db/schema";
+import {
+  assessments,
+  auditEvents,
+  briefings,
+  components,
+  hazardLibrary,
+  jobs,
+  revisions,
+  userSessions,
+  users,
+} from "@/db/schema";
 import { PERMISSIONS, type Action, type Actor } from "@/lib/permissions";
 import type { Role } from "@/db/schema";
 import { actorFor, demoOrganisation, otherOrganisation } from "./helpers";
@@ -21,10 +31,12 @@ vi.mock("@/lib/auth/session", () => ({ getActor: async () => session.actor, requ
 /** Routes that name no permission on purpose, and what they answer instead. */
 const SELF_CHECKED: Record<string, string> = {
   "app/api/auth/[...nextauth]/route.ts": "next-auth's own sign-in, sign-out and CSRF endpoints",
-  "app/api/verify/route.ts": "public: anyone holding a pack may check it; names only revisions Heftwise issued a pack of",
+  "app/api/verify/route.ts":
+    "public: anyone holding a pack may check it; names only revisions Heftwise issued a pack of",
   "app/api/v1/openapi.json/route.ts": "public: the API's description",
   "app/api/health/route.ts": "public: liveness only, reads nothing and names nothing",
-  "app/api/v1/revisions/[id]/pack/route.ts": "signed-in callers; getPackFile applies the per-revision rule (author's organisation, named approver, assigned foreman)",
+  "app/api/v1/revisions/[id]/pack/route.ts":
+    "signed-in callers; getPackFile applies the per-revision rule (author's organisation, named approver, assigned foreman)",
 };
 
 const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
@@ -35,7 +47,9 @@ interface Entry {
 }
 
 function routeFiles(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((d) => (d.isDirectory() ? routeFiles(path.join(dir, d.name)) : d.name === "route.ts" ? [path.join(dir, d.name)] : []));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((d) =>
+    d.isDirectory() ? routeFiles(path.join(dir, d.name)) : d.name === "route.ts" ? [path.join(dir, d.name)] : [],
+  );
 }
 
 /** Each exported method of each route file, with the permission its own code names. */
@@ -51,7 +65,9 @@ function entries(): Entry[] {
       }
       const at = source.search(new RegExp(`export (const|async function|function) ${method}\\b`));
       if (at < 0) continue;
-      const next = METHODS.map((m) => source.slice(at + 1).search(new RegExp(`export (const|async function|function) ${m}\\b`))).filter((i) => i >= 0);
+      const next = METHODS.map((m) =>
+        source.slice(at + 1).search(new RegExp(`export (const|async function|function) ${m}\\b`)),
+      ).filter((i) => i >= 0);
       const body = source.slice(at, next.length ? at + 1 + Math.min(...next) : undefined);
       const action = body.match(/requireApiActor\("([a-z-]+:[a-z-]+)"\)/)?.[1] as Action | undefined;
       out.push({ file, method, action: action ?? null });
@@ -89,31 +105,66 @@ function paramsFor(file: string): Record<string, string> {
 
 function request(file: string, method: string): Request {
   const url = `http://localhost/${file.replace(/^app\//, "").replace(/\/route\.ts$/, "")}`;
-  if (method === "GET" || method === "DELETE") return new Request(url, { method, ...(method === "DELETE" ? { headers: { "content-type": "application/json" }, body: "{}" } : {}) });
-  if (file.includes("components/import")) return new Request(url, { method, headers: { "content-type": "text/csv" }, body: "name,mass_kg,grip,mass_source\n" });
+  if (method === "GET" || method === "DELETE")
+    return new Request(url, {
+      method,
+      ...(method === "DELETE" ? { headers: { "content-type": "application/json" }, body: "{}" } : {}),
+    });
+  if (file.includes("components/import"))
+    return new Request(url, {
+      method,
+      headers: { "content-type": "text/csv" },
+      body: "name,mass_kg,grip,mass_source\n",
+    });
   if (/attachments\/route|site-changes|verify/.test(file)) return new Request(url, { method, body: new FormData() });
   return new Request(url, { method, headers: { "content-type": "application/json" }, body: "{}" });
 }
 
 async function call(entry: Entry, actor: Actor | null): Promise<number> {
   session.actor = actor;
-  const mod = (await import(`@/${entry.file.replace(/\.ts$/, "")}`)) as Record<string, (r: Request, c: { params: Promise<Record<string, string>> }) => Promise<Response>>;
-  const res = await mod[entry.method](request(entry.file, entry.method), { params: Promise.resolve(paramsFor(entry.file)) });
+  const mod = (await import(`@/${entry.file.replace(/\.ts$/, "")}`)) as Record<
+    string,
+    (r: Request, c: { params: Promise<Record<string, string>> }) => Promise<Response>
+  >;
+  const res = await mod[entry.method](request(entry.file, entry.method), {
+    params: Promise.resolve(paramsFor(entry.file)),
+  });
   return res.status;
 }
 
 async function tableCounts() {
   const db = await getDb();
-  const tables = { jobs, components, assessments, revisions, briefings, hazardLibrary, auditEvents, users, userSessions };
-  return Object.fromEntries(await Promise.all(Object.entries(tables).map(async ([name, t]) => [name, (await db.select({ n: count() }).from(t))[0].n])));
+  const tables = {
+    jobs,
+    components,
+    assessments,
+    revisions,
+    briefings,
+    hazardLibrary,
+    auditEvents,
+    users,
+    userSessions,
+  };
+  return Object.fromEntries(
+    await Promise.all(
+      Object.entries(tables).map(async ([name, t]) => [name, (await db.select({ n: count() }).from(t))[0].n]),
+    ),
+  );
 }
 
 describe("the authorization matrix, from the route files", () => {
   it("finds the routes, and every method either names its permission or is on the documented list", () => {
     expect(ENTRIES.length).toBeGreaterThan(25);
     const unnamed = ENTRIES.filter((e) => !e.action && !SELF_CHECKED[e.file]).map((e) => `${e.method} ${e.file}`);
-    expect(unnamed, "these handlers name no permission: add requireApiActor(…) or document them in SELF_CHECKED").toEqual([]);
-    for (const file of Object.keys(SELF_CHECKED)) expect(ENTRIES.some((e) => e.file === file), `${file} no longer exists`).toBe(true);
+    expect(
+      unnamed,
+      "these handlers name no permission: add requireApiActor(…) or document them in SELF_CHECKED",
+    ).toEqual([]);
+    for (const file of Object.keys(SELF_CHECKED))
+      expect(
+        ENTRIES.some((e) => e.file === file),
+        `${file} no longer exists`,
+      ).toBe(true);
   });
 
   it("anonymous, refused roles and another organisation are answered 401, 403 and 404 — and nothing changes", async () => {
@@ -128,9 +179,14 @@ describe("the authorization matrix, from the route files", () => {
         if (status !== 403) wrong.push(`${entry.method} ${entry.file} as ${role} → ${status}, expected 403`);
       }
       // Another organisation's user whose role is allowed: this organisation's record is "not found".
-      if (Object.keys(paramsFor(entry.file)).some((p) => p === "id") && PERMISSIONS.admin.includes(entry.action!) && /\/(components|jobs|revisions)\/\[id\]/.test(entry.file)) {
+      if (
+        Object.keys(paramsFor(entry.file)).some((p) => p === "id") &&
+        PERMISSIONS.admin.includes(entry.action!) &&
+        /\/(components|jobs|revisions)\/\[id\]/.test(entry.file)
+      ) {
         const status = await call(entry, stranger);
-        if (status !== 404) wrong.push(`${entry.method} ${entry.file} from another organisation → ${status}, expected 404`);
+        if (status !== 404)
+          wrong.push(`${entry.method} ${entry.file} from another organisation → ${status}, expected 404`);
       }
     }
     for (const entry of ENTRIES.filter((e) => e.file.endsWith("revisions/[id]/pack/route.ts"))) {
@@ -146,7 +202,8 @@ describe("the authorization matrix, from the route files", () => {
     for (const entry of ENTRIES.filter((e) => e.action)) {
       for (const role of ROLES.filter((r) => PERMISSIONS[r].includes(entry.action!))) {
         const status = await call(entry, actors[role]);
-        if (status === 401 || status === 403 || status >= 500) wrong.push(`${entry.method} ${entry.file} as ${role} → ${status}`);
+        if (status === 401 || status === 403 || status >= 500)
+          wrong.push(`${entry.method} ${entry.file} as ${role} → ${status}`);
       }
     }
     expect(wrong).toEqual([]);

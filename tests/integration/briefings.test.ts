@@ -5,7 +5,18 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
-import { briefingSheetPdf, completeBriefing, createSiteChangeNote, getBriefingRecord, getBriefingScript, listForemanJobs, listForemen, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
+import {
+  briefingSheetPdf,
+  completeBriefing,
+  createSiteChangeNote,
+  getBriefingRecord,
+  getBriefingScript,
+  listForemanJobs,
+  listForemen,
+  recordAttendee,
+  setJobForemen,
+  startBriefing,
+} from "@/assessments/briefing/service";
 import { listAssessments } from "@/assessments/revisions/service";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
@@ -26,8 +37,19 @@ async function pdfText(data: Uint8Array): Promise<string> {
   return execFileSync("pdftotext", [file, "-"], { encoding: "utf8" });
 }
 
-const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
-const attendee = (key: string, name = "Kieran Lusk") => ({ key, name, employer: "Brackenfold Lineside", cardNumber: "PTS 77120", signature, signedAt: new Date().toISOString() });
+const code = (p: Promise<unknown>) =>
+  p.then(
+    () => "ok",
+    (e) => (e instanceof AppError ? e.code : String(e)),
+  );
+const attendee = (key: string, name = "Kieran Lusk") => ({
+  key,
+  name,
+  employer: "Brackenfold Lineside",
+  cardNumber: "PTS 77120",
+  signature,
+  signedAt: new Date().toISOString(),
+});
 
 beforeAll(async () => {
   process.env.SMTP_URL = "smtp://127.0.0.1:9";
@@ -70,7 +92,9 @@ describe("what a foreman sees", () => {
 
   it("a file that merely contains a draft's id learns nothing about it at /verify", async () => {
     const draft = (await listAssessments(adviser)).find((a) => a.status === "draft")!;
-    expect(await verifyPack(Buffer.from(`%PDF-1.4 heftwise-revision:${draft.revisionId}`))).toEqual({ result: "unknown" });
+    expect(await verifyPack(Buffer.from(`%PDF-1.4 heftwise-revision:${draft.revisionId}`))).toEqual({
+      result: "unknown",
+    });
   });
 });
 
@@ -83,11 +107,23 @@ describe("a briefing", () => {
     const again = await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"));
     expect(again).toEqual({ id: first.id, duplicate: true });
     await recordAttendee(foreman, briefingId, attendee("key-bbbbbbbbbbbbbbbb", "Aled Menhenick"));
-    expect(await code(recordAttendee(foreman, briefingId, { ...attendee("key-cccccccccccccccc"), cardNumber: "" }))).toBe("validation");
-    expect(await code(recordAttendee(foreman, briefingId, { ...attendee("key-dddddddddddddddd"), signature: "data:image/png;base64,AAAA" }))).toBe("validation");
+    expect(
+      await code(recordAttendee(foreman, briefingId, { ...attendee("key-cccccccccccccccc"), cardNumber: "" })),
+    ).toBe("validation");
+    expect(
+      await code(
+        recordAttendee(foreman, briefingId, {
+          ...attendee("key-dddddddddddddddd"),
+          signature: "data:image/png;base64,AAAA",
+        }),
+      ),
+    ).toBe("validation");
     await completeBriefing(foreman, briefingId, { signature });
     expect(await code(recordAttendee(foreman, briefingId, attendee("key-eeeeeeeeeeeeeeee")))).toBe("conflict");
-    expect(await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"))).toEqual({ id: first.id, duplicate: true });
+    expect(await recordAttendee(foreman, briefingId, attendee("key-aaaaaaaaaaaaaaaa"))).toEqual({
+      id: first.id,
+      duplicate: true,
+    });
     const record = await getBriefingRecord(foreman, briefingId);
     expect(record.attendees.map((a) => a.name).sort()).toEqual(["Aled Menhenick", "Kieran Lusk"]);
     expect(record.briefing.completedAt).not.toBeNull();
@@ -118,20 +154,29 @@ describe("a briefing", () => {
     ]);
     expect([a.status, b.status].sort()).toEqual(["fulfilled", "rejected"]);
     expect(((a.status === "rejected" ? a : b) as PromiseRejectedResult).reason).toMatchObject({ code: "conflict" });
-    expect((await db.select().from(issuedPacks).where(eq(issuedPacks.revisionId, approvedId))).length).toBe(packsBefore + 1);
+    expect((await db.select().from(issuedPacks).where(eq(issuedPacks.revisionId, approvedId))).length).toBe(
+      packsBefore + 1,
+    );
     const pack = await getPackFile(adviser, approvedId);
-    const inPack = Buffer.from(pack.data).toString("latin1").includes("Late Arrival") || (await pdfText(pack.data)).includes("Late Arrival");
+    const inPack =
+      Buffer.from(pack.data).toString("latin1").includes("Late Arrival") ||
+      (await pdfText(pack.data)).includes("Late Arrival");
     if (late.status === "fulfilled") expect(inPack).toBe(true);
     else expect((late as PromiseRejectedResult).reason).toMatchObject({ code: "conflict" });
   });
 
   it("a site change note marks the revision and shows on the next briefing, even when the e-mail fails", async () => {
-    const { mail } = await createSiteChangeNote(foreman, { revisionId: approvedId, text: "Access point moved: carry now 60 m." });
+    const { mail } = await createSiteChangeNote(foreman, {
+      revisionId: approvedId,
+      text: "Access point moved: carry now 60 m.",
+    });
     expect(mail.status).toBe("failed");
     const { revision, siteChanges } = await getBriefingScript(foreman, approvedId);
     expect(revision.needsReview).toBe(true);
     expect(siteChanges[0].text).toBe("Access point moved: carry now 60 m.");
     expect(await code(createSiteChangeNote(foreman, { revisionId: approvedId, text: "short" }))).toBe("validation");
-    expect(await code(createSiteChangeNote(adviser, { revisionId: approvedId, text: "Access point moved again." }))).toBe("forbidden");
+    expect(
+      await code(createSiteChangeNote(adviser, { revisionId: approvedId, text: "Access point moved again." })),
+    ).toBe("forbidden");
   });
 });

@@ -1,6 +1,13 @@
 /** The hazard library: read by advisers, kept by admins, organisations apart, a starter set that can be added again safely. */
 import { beforeAll, describe, expect, it } from "vitest";
-import { createEntry, deleteEntry, getEntry, listLibrary, restoreStarter, updateEntry } from "@/assessments/hazard-library/service";
+import {
+  createEntry,
+  deleteEntry,
+  getEntry,
+  listLibrary,
+  restoreStarter,
+  updateEntry,
+} from "@/assessments/hazard-library/service";
 import { STARTER_HAZARDS } from "@/assessments/hazard-library/starter";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
@@ -21,8 +28,20 @@ beforeAll(async () => {
   other = (await otherOrganisation()).admin;
 });
 
-const code = (p: Promise<unknown>) => p.then(() => "ok", (e) => (e instanceof AppError ? e.code : String(e)));
-const entry = (hazard: string) => ({ hazard, whoIsAtRisk: "Gang", likelihoodBefore: 3, severityBefore: 4, controls: [{ text: "Barrier round the work", level: "engineering" }], likelihoodAfter: 1, severityAfter: 4 });
+const code = (p: Promise<unknown>) =>
+  p.then(
+    () => "ok",
+    (e) => (e instanceof AppError ? e.code : String(e)),
+  );
+const entry = (hazard: string) => ({
+  hazard,
+  whoIsAtRisk: "Gang",
+  likelihoodBefore: 3,
+  severityBefore: 4,
+  controls: [{ text: "Barrier round the work", level: "engineering" }],
+  likelihoodAfter: 1,
+  severityAfter: 4,
+});
 
 describe("the hazard library", () => {
   it("the demo organisation starts with the starter hazards; advisers read them, foremen and approvers do not", async () => {

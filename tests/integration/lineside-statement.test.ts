@@ -21,7 +21,11 @@ beforeAll(async () => {
   adviser = await actorFor("adviser", organisationId);
   approver = await actorFor("approver", organisationId);
   const jobs = await (await import("@/assessments/jobs/queries")).listJobs(adviser);
-  ({ revisionId } = await createAssessment(adviser, { jobId: jobs[1].id, title: "Lineside statement test", templateId: "lineside-base" }));
+  ({ revisionId } = await createAssessment(adviser, {
+    jobId: jobs[1].id,
+    title: "Lineside statement test",
+    templateId: "lineside-base",
+  }));
   template = (await getRevision(adviser, revisionId)).content;
 });
 
@@ -57,15 +61,23 @@ describe("what blocks submission", () => {
   it("a load lowered below the standing surface needs the excavation described", () => {
     const c = completeLineside(template);
     c.excavation.present = false;
-    expect(messages(c)).toContain("A task lowers a load below the standing surface: describe the excavation it goes into.");
+    expect(messages(c)).toContain(
+      "A task lowers a load below the standing surface: describe the excavation it goes into.",
+    );
   });
 
   it("the server refuses submission with each gap named, and nothing changes", async () => {
     const current = await getRevision(adviser, revisionId);
-    const err = await submitRevision(adviser, revisionId, { version: current.revision.version, approverId: approver.id, reviewDate: reviewDateIn(120) }).catch((e: AppError) => e);
+    const err = await submitRevision(adviser, revisionId, {
+      version: current.revision.version,
+      approverId: approver.id,
+      reviewDate: reviewDateIn(120),
+    }).catch((e: AppError) => e);
     expect(err).toBeInstanceOf(AppError);
     expect((err as AppError).code).toBe("validation");
-    expect((err as AppError).issues!.map((i) => i.message)).toContain("Name the person responsible for the safe system of work.");
+    expect((err as AppError).issues!.map((i) => i.message)).toContain(
+      "Name the person responsible for the safe system of work.",
+    );
     expect((await getRevision(adviser, revisionId)).revision.status).toBe("draft");
   });
 
@@ -82,13 +94,29 @@ describe("what blocks submission", () => {
 
 describe("dates and references are validated", () => {
   it.each([
-    [{ permits: [{ kind: "dig", reference: "PTD 1", issuedBy: "x", validFrom: "2027-03-10", validTo: "2027-03-01" }] }, "permits.0.validTo", "Must be on or after the start date"],
-    [{ permits: [{ kind: "dig", reference: "PTD <1>", issuedBy: "x" }] }, "permits.0.reference", "Use letters, digits, spaces and - / . _ : # only"],
+    [
+      { permits: [{ kind: "dig", reference: "PTD 1", issuedBy: "x", validFrom: "2027-03-10", validTo: "2027-03-01" }] },
+      "permits.0.validTo",
+      "Must be on or after the start date",
+    ],
+    [
+      { permits: [{ kind: "dig", reference: "PTD <1>", issuedBy: "x" }] },
+      "permits.0.reference",
+      "Use letters, digits, spaces and - / . _ : # only",
+    ],
     [{ buriedServices: { scanDate: "2027-02-30" } }, "buriedServices.scanDate", "Use a real date"],
     [{ lineside: { protection: "lookout-only" } }, "lineside.protection", undefined],
     [{ excavation: { present: true, depthM: -1 } }, "excavation.depthM", "At least 0.05 m"],
   ])("%o → %s", (patch, path, message) => {
-    const parsed = contentSchema.safeParse({ ...template, ...Object.fromEntries(Object.entries(patch).map(([k, v]) => [k, Array.isArray(v) ? v : { ...(template as Record<string, object>)[k], ...v }])) });
+    const parsed = contentSchema.safeParse({
+      ...template,
+      ...Object.fromEntries(
+        Object.entries(patch).map(([k, v]) => [
+          k,
+          Array.isArray(v) ? v : { ...(template as Record<string, object>)[k], ...v },
+        ]),
+      ),
+    });
     expect(parsed.success).toBe(false);
     const issue = parsed.error!.issues.find((i) => i.path.join(".") === path);
     expect(issue, JSON.stringify(parsed.error!.issues)).toBeDefined();

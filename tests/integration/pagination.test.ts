@@ -25,7 +25,11 @@ interface Listed {
 }
 
 /** Every page of a list, following nextCursor; fails on a page that repeats or a cursor that loops. */
-async function walk(list: (query: Record<string, unknown>) => Promise<Listed>, query: Record<string, unknown>, limit: number) {
+async function walk(
+  list: (query: Record<string, unknown>) => Promise<Listed>,
+  query: Record<string, unknown>,
+  limit: number,
+) {
   const rows: Record<string, unknown>[] = [];
   let cursor: string | undefined;
   const totals = new Set<number>();
@@ -56,11 +60,22 @@ beforeAll(async () => {
   firstJobId = jobs[0].id;
   // Thirty assessments over two jobs; titles repeat, so ties must be broken the same way on every page.
   for (let i = 0; i < 30; i++) {
-    await createAssessment(adviser, { jobId: jobs[i % 2].id, title: `Paged assessment ${String(i % 7).padStart(2, "0")}` });
+    await createAssessment(adviser, {
+      jobId: jobs[i % 2].id,
+      title: `Paged assessment ${String(i % 7).padStart(2, "0")}`,
+    });
   }
   // Components with equal masses: the mass sort's ties too.
   const db = await getDb();
-  await db.insert(components).values(Array.from({ length: 25 }, (_, i) => ({ organisationId, name: `Paged component ${i}`, massKg: 10 + (i % 3), grip: "fair" as const, massSource: "weighed" as const })));
+  await db.insert(components).values(
+    Array.from({ length: 25 }, (_, i) => ({
+      organisationId,
+      name: `Paged component ${i}`,
+      massKg: 10 + (i % 3),
+      grip: "fair" as const,
+      massSource: "weighed" as const,
+    })),
+  );
 });
 
 describe("keyset pagination", () => {
@@ -77,7 +92,8 @@ describe("keyset pagination", () => {
         expect([...totals]).toEqual([reference.total]);
       }
       // The order is the one asked for (ids break ties in the same direction).
-      const key = (r: (typeof reference.items)[number]) => (sort.endsWith("title") ? r.title : r.updatedAt.toISOString());
+      const key = (r: (typeof reference.items)[number]) =>
+        sort.endsWith("title") ? r.title : r.updatedAt.toISOString();
       for (let i = 1; i < reference.items.length; i++) {
         const [a, b] = [key(reference.items[i - 1]), key(reference.items[i])];
         if (sort.endsWith("updatedAt")) expect(sort.startsWith("-") ? a >= b : a <= b).toBe(true);
@@ -112,10 +128,14 @@ describe("keyset pagination", () => {
     expect(wrongSort.status).toBe(422);
     expect(wrongSort.issues?.[0].path).toBe("cursor");
     const forged = Buffer.from(JSON.stringify(["title", "x", "not-a-uuid"])).toString("base64url");
-    expect((await refusal(listAssessmentsPage(adviser, { sort: "title", cursor: forged }))).issues?.[0].path).toBe("cursor");
+    expect((await refusal(listAssessmentsPage(adviser, { sort: "title", cursor: forged }))).issues?.[0].path).toBe(
+      "cursor",
+    );
     expect((await refusal(listAssessmentsPage(adviser, { cursor: "bm90IGpzb24" }))).status).toBe(422);
     // A timestamp cursor whose value is not a timestamp: refused as input, never a server error.
-    const badValue = Buffer.from(JSON.stringify(["-updatedAt", "yesterday-ish", "00000000-0000-4000-8000-000000000000"])).toString("base64url");
+    const badValue = Buffer.from(
+      JSON.stringify(["-updatedAt", "yesterday-ish", "00000000-0000-4000-8000-000000000000"]),
+    ).toString("base64url");
     expect((await refusal(listAssessmentsPage(adviser, { cursor: badValue }))).status).toBe(422);
   });
 
@@ -134,11 +154,20 @@ describe("the latest revision of each assessment", () => {
     const next = await startNewRevision(adviser, approved.revisionId);
     const title = approved.title;
 
-    const listed = (await listAssessmentsPage(adviser, { q: title, limit: 100 })).items.filter((r) => r.assessmentId === approved.assessmentId);
+    const listed = (await listAssessmentsPage(adviser, { q: title, limit: 100 })).items.filter(
+      (r) => r.assessmentId === approved.assessmentId,
+    );
     expect(listed).toHaveLength(1);
     expect(listed[0]).toMatchObject({ revisionId: next.revisionId, number: 2, status: "draft" });
     // The approved revision stays approved, and is not listed beside its successor.
-    expect((await getRevision(adviser, approved.revisionId)).revision).toMatchObject({ status: "approved", isLatest: false });
-    expect((await listAssessmentsPage(adviser, { q: title, status: "approved", limit: 100 })).items.filter((r) => r.assessmentId === approved.assessmentId)).toEqual([]);
+    expect((await getRevision(adviser, approved.revisionId)).revision).toMatchObject({
+      status: "approved",
+      isLatest: false,
+    });
+    expect(
+      (await listAssessmentsPage(adviser, { q: title, status: "approved", limit: 100 })).items.filter(
+        (r) => r.assessmentId === approved.assessmentId,
+      ),
+    ).toEqual([]);
   });
 });

@@ -42,7 +42,13 @@ describe("kept answers", () => {
   it("a row written straight to a table, and a raw statement, are seen at once", async () => {
     const count = (await countComponents(adviser)).total;
     const db = await getDb();
-    await db.insert(components).values({ organisationId: adviser.organisationId, name: "Written straight in", massKg: 3, grip: "good", massSource: "weighed" });
+    await db.insert(components).values({
+      organisationId: adviser.organisationId,
+      name: "Written straight in",
+      massKg: 3,
+      grip: "good",
+      massSource: "weighed",
+    });
     expect((await countComponents(adviser)).total).toBe(count + 1);
     expect((await listComponentsPage(adviser, { q: "Written straight" })).total).toBe(1);
     await db.execute(sql`delete from components where name = 'Written straight in'`);
@@ -58,7 +64,12 @@ describe("kept answers", () => {
       await gate;
       return value;
     });
-    await createJob(adviser, { name: "Written during a read", client: "Invented Client Ltd", location: "Nowhere", siteContactPhone: "07700 900111" });
+    await createJob(adviser, {
+      name: "Written during a read",
+      client: "Invented Client Ltd",
+      location: "Nowhere",
+      siteContactPhone: "07700 900111",
+    });
     release();
     expect(await slow).toBe(jobsBefore);
     const version = dataVersion();

@@ -47,7 +47,15 @@ beforeAll(async () => {
       componentId: id("Axle counter head kit"),
       quantity: 1,
       operation: "lift",
-      niosh: { origin: { h: 30, v: 40, a: 0 }, destination: { h: 70, v: 100, a: 0 }, frequency: 0.5, durationHours: 1, recoveryHours: 2, coupling: "good", controlAtDestination: false },
+      niosh: {
+        origin: { h: 30, v: 40, a: 0 },
+        destination: { h: 70, v: 100, a: 0 },
+        frequency: 0.5,
+        durationHours: 1,
+        recoveryHours: 2,
+        coupling: "good",
+        controlAtDestination: false,
+      },
       filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1 },
     },
     {
@@ -56,7 +64,16 @@ beforeAll(async () => {
       componentId: id("Galvanised walkway panel"),
       quantity: 2,
       operation: "carry",
-      filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 1, twistDeg: 0, teamSize: 2, carryDistanceM: 40, durationHours: 6 },
+      filter: {
+        sex: "male",
+        zone: "knuckle-to-elbow",
+        reach: "close",
+        frequency: 1,
+        twistDeg: 0,
+        teamSize: 2,
+        carryDistanceM: 40,
+        durationHours: 6,
+      },
     },
     {
       id: "downhill-trolley",
@@ -64,7 +81,15 @@ beforeAll(async () => {
       componentId: id("Concrete cable trough"),
       quantity: 6,
       operation: "push",
-      push: { mass: 6 * 42 + 60, gradient: -1 / 150, sex: "male", teamSize: 2, distanceM: 15, surface: "rail", braked: false },
+      push: {
+        mass: 6 * 42 + 60,
+        gradient: -1 / 150,
+        sex: "male",
+        teamSize: 2,
+        distanceM: 15,
+        surface: "rail",
+        braked: false,
+      },
     },
     {
       id: "twisting-lift",
@@ -72,7 +97,15 @@ beforeAll(async () => {
       componentId: id("Route marker post"),
       quantity: 1,
       operation: "lift",
-      niosh: { origin: { h: 25, v: 75, a: 90 }, destination: { h: 25, v: 75, a: 0 }, frequency: 6, durationHours: 1, recoveryHours: 2, coupling: "good", controlAtDestination: false },
+      niosh: {
+        origin: { h: 25, v: 75, a: 90 },
+        destination: { h: 25, v: 75, a: 0 },
+        frequency: 6,
+        durationHours: 1,
+        recoveryHours: 2,
+        coupling: "good",
+        controlAtDestination: false,
+      },
       filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1 },
     },
     {
@@ -106,10 +139,18 @@ describe("one band for one task, wherever it is scored", () => {
   it("the scoring API gives each method's stored band, and the task's band is the worst of them", async () => {
     for (const [i, task] of tasks.entries()) {
       const requests = Object.values(methodRequests(task, stored[i].load));
-      const res = await POST(new Request("http://localhost/api/v1/score", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(requests) }));
+      const res = await POST(
+        new Request("http://localhost/api/v1/score", {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          body: JSON.stringify(requests),
+        }),
+      );
       expect(res.status, task.id).toBe(200);
       const results = (await res.json()) as { method: string; band: Band }[];
-      const storedBands = results.map((r) => (stored[i].results as Record<string, { band: Band }>)[r.method === "lift" ? "lift" : r.method].band);
+      const storedBands = results.map(
+        (r) => (stored[i].results as Record<string, { band: Band }>)[r.method === "lift" ? "lift" : r.method].band,
+      );
       expect(bands(results), task.id).toEqual(storedBands);
       expect(worstBand(bands(results)), task.id).toBe(stored[i].band);
     }

@@ -7,11 +7,27 @@ vi.mock("@/lib/auth/session", () => ({ getActor: async () => session.actor }));
 
 const { POST } = await import("@/app/api/v1/score/route");
 
-const filter = { method: "filter", sex: "female", zone: "knuckle-to-elbow", reach: "close", load: 12, frequency: 1, twistDeg: 0, teamSize: 1 };
-const post = (body: string, type = "application/json") => POST(new Request("http://localhost/api/v1/score", { method: "POST", headers: { "content-type": type }, body }));
+const filter = {
+  method: "filter",
+  sex: "female",
+  zone: "knuckle-to-elbow",
+  reach: "close",
+  load: 12,
+  frequency: 1,
+  twistDeg: 0,
+  teamSize: 1,
+};
+const post = (body: string, type = "application/json") =>
+  POST(new Request("http://localhost/api/v1/score", { method: "POST", headers: { "content-type": type }, body }));
 
 beforeEach(() => {
-  session.actor = { id: "00000000-0000-4000-8000-000000000001", organisationId: "00000000-0000-4000-8000-000000000002", role: "foreman", name: "F", email: "f@x.example" };
+  session.actor = {
+    id: "00000000-0000-4000-8000-000000000001",
+    organisationId: "00000000-0000-4000-8000-000000000002",
+    role: "foreman",
+    name: "F",
+    email: "f@x.example",
+  };
 });
 
 describe("POST /api/v1/score", () => {
@@ -51,7 +67,19 @@ describe("POST /api/v1/score", () => {
       JSON.stringify([
         { ...filter, zone: "below-standing-level", conditions: ["uneven-ground", "poor-light"] },
         { method: "push", mass: 300, gradient: -0.005, sex: "male", teamSize: 2, surface: "rail", braked: false },
-        { method: "niosh", units: "metric", load: 10, origin: { h: 30, v: -40, a: 0 }, destination: { h: 30, v: 60, a: 0 }, frequency: 0.2, durationHours: 1, recoveryHours: 2, coupling: "fair", controlAtDestination: true, conditions: ["wind-on-panels"] },
+        {
+          method: "niosh",
+          units: "metric",
+          load: 10,
+          origin: { h: 30, v: -40, a: 0 },
+          destination: { h: 30, v: 60, a: 0 },
+          frequency: 0.2,
+          durationHours: 1,
+          recoveryHours: 2,
+          coupling: "fair",
+          controlAtDestination: true,
+          conditions: ["wind-on-panels"],
+        },
       ]),
     );
     expect(res.status).toBe(200);
@@ -64,7 +92,12 @@ describe("POST /api/v1/score", () => {
   });
 
   it("an unknown condition or surface answers 422 naming the field", async () => {
-    const res = await post(JSON.stringify([{ ...filter, conditions: ["fog"] }, { method: "push", mass: 300, gradient: 0, sex: "male", teamSize: 1, surface: "ice" }]));
+    const res = await post(
+      JSON.stringify([
+        { ...filter, conditions: ["fog"] },
+        { method: "push", mass: 300, gradient: 0, sex: "male", teamSize: 1, surface: "ice" },
+      ]),
+    );
     expect(res.status).toBe(422);
     const [a, b] = await res.json();
     expect(a.error.issues[0].path).toBe("conditions.0");

@@ -28,7 +28,10 @@ const cookieName = () => sessionCookieName(config().NEXTAUTH_URL);
 
 async function signedIn(user: Actor, secret = config().secret) {
   const sessionId = await openSession(user.id);
-  const token = await encode({ token: { userId: user.id, sessionId, role: user.role, organisationId: user.organisationId, name: user.name }, secret });
+  const token = await encode({
+    token: { userId: user.id, sessionId, role: user.role, organisationId: user.organisationId, name: user.name },
+    secret,
+  });
   jar.cookies = new Map([[cookieName(), token]]);
   return { sessionId, token };
 }
@@ -42,10 +45,21 @@ beforeAll(async () => {
 describe("reading the session cookie", () => {
   it("a token made by next-auth's format names its user and session; forged, foreign or missing names nobody", async () => {
     const { sessionId, token } = await signedIn(adviser);
-    expect(await readSessionClaims(await (await import("next/headers")).cookies())).toEqual({ userId: adviser.id, sessionId });
+    expect(await readSessionClaims(await (await import("next/headers")).cookies())).toEqual({
+      userId: adviser.id,
+      sessionId,
+    });
     jar.cookies = new Map([[cookieName(), `${token.slice(0, -4)}AAAA`]]);
     expect(await getActor()).toBeNull();
-    jar.cookies = new Map([[cookieName(), await encode({ token: { userId: adviser.id, sessionId, role: adviser.role, organisationId: adviser.organisationId }, secret: "another-secret-of-at-least-thirty-two-chars" })]]);
+    jar.cookies = new Map([
+      [
+        cookieName(),
+        await encode({
+          token: { userId: adviser.id, sessionId, role: adviser.role, organisationId: adviser.organisationId },
+          secret: "another-secret-of-at-least-thirty-two-chars",
+        }),
+      ],
+    ]);
     expect(await getActor()).toBeNull();
     jar.cookies = new Map();
     expect(await getActor()).toBeNull();

@@ -17,7 +17,10 @@ describe("configuration", () => {
     try {
       production({});
     } catch (e) {
-      expect((e as ConfigError).problems).toEqual(["NEXTAUTH_SECRET is required in production", "SMTP_URL is required in production"]);
+      expect((e as ConfigError).problems).toEqual([
+        "NEXTAUTH_SECRET is required in production",
+        "SMTP_URL is required in production",
+      ]);
     }
   });
   it("names a secret that is too short and a database URL with the wrong scheme", () => {
@@ -37,7 +40,11 @@ describe("configuration", () => {
     expect(c.secret.length).toBeGreaterThanOrEqual(32);
   });
   it("a valid production configuration passes", () => {
-    const c = production({ NEXTAUTH_SECRET: "s".repeat(40), SMTP_URL: "smtp://mail.example:587", HEFTWISE_DATA_DIR: "/var/lib/heftwise/" });
+    const c = production({
+      NEXTAUTH_SECRET: "s".repeat(40),
+      SMTP_URL: "smtp://mail.example:587",
+      HEFTWISE_DATA_DIR: "/var/lib/heftwise/",
+    });
     expect(c.pgliteDir).toBe("/var/lib/heftwise/pglite");
   });
 });

@@ -35,7 +35,7 @@ describe("numbers in CSV cells", () => {
 });
 
 describe("spreadsheet formula cells", () => {
-  it.each(["=HYPERLINK(\"x\")", "+44 7700", "-1", "@SUM(A1)"])("%j is noted and neutralised for export", (text) => {
+  it.each(['=HYPERLINK("x")', "+44 7700", "-1", "@SUM(A1)"])("%j is noted and neutralised for export", (text) => {
     expect(formulaNote(text)).toMatch(/formula/);
     expect(neutraliseFormula(text)).toBe(`'${text}`);
   });

@@ -19,7 +19,11 @@ afterAll(() => {
 
 /** Another process holding the lock, as a running Heftwise would. */
 async function holder(): Promise<ChildProcess> {
-  const child = spawn(process.execPath, ["-e", "require('net').createServer((s) => s.destroy()).listen(process.argv[1]); setInterval(() => {}, 1000)", lockFile]);
+  const child = spawn(process.execPath, [
+    "-e",
+    "require('net').createServer((s) => s.destroy()).listen(process.argv[1]); setInterval(() => {}, 1000)",
+    lockFile,
+  ]);
   children.push(child);
   for (let i = 0; i < 100 && !existsSync(lockFile); i++) await new Promise((r) => setTimeout(r, 20));
   return child;

@@ -8,8 +8,10 @@ const dataUrl = (png: Buffer) => `data:image/png;base64,${png.toString("base64")
 const accepted = async (png: Buffer) => (await schema.safeParseAsync(dataUrl(png))).success;
 
 describe("a drawn signature", () => {
-  it("a phone-sized drawing is accepted", async () => expect(await accepted(drawnSignaturePng(3, 780, 240))).toBe(true));
-  it("a blank one is refused", async () => expect(await accepted(encodePng(200, 80, new Uint8Array(200 * 80 * 4)))).toBe(false));
+  it("a phone-sized drawing is accepted", async () =>
+    expect(await accepted(drawnSignaturePng(3, 780, 240))).toBe(true));
+  it("a blank one is refused", async () =>
+    expect(await accepted(encodePng(200, 80, new Uint8Array(200 * 80 * 4)))).toBe(false));
   it("a damaged one is refused", async () => {
     const png = drawnSignaturePng(3, 240, 80);
     png.fill(0, 40, 60);

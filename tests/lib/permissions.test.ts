@@ -3,7 +3,13 @@ import { ROLES } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import { ACTIONS, authorize, can, PERMISSIONS, type Actor } from "@/lib/permissions";
 
-const actor = (role: Actor["role"], organisationId = "org-a"): Actor => ({ id: "u", organisationId, role, name: "N", email: "n@x.example" });
+const actor = (role: Actor["role"], organisationId = "org-a"): Actor => ({
+  id: "u",
+  organisationId,
+  role,
+  name: "N",
+  email: "n@x.example",
+});
 
 describe("permission table (DESIGN.md, Roles)", () => {
   it("admin may manage users and do all an adviser may", () => {
@@ -16,7 +22,8 @@ describe("permission table (DESIGN.md, Roles)", () => {
     expect(can(actor("adviser"), "briefings:run")).toBe(false);
   });
   it("an approver never edits content", () => {
-    for (const action of ["assessments:write", "jobs:write", "components:write"] as const) expect(can(actor("approver"), action)).toBe(false);
+    for (const action of ["assessments:write", "jobs:write", "components:write"] as const)
+      expect(can(actor("approver"), action)).toBe(false);
     expect(can(actor("approver"), "reviews:decide")).toBe(true);
   });
   it("a foreman briefs and records site changes, and edits nothing", () => {

@@ -1,13 +1,23 @@
 /** The sign-in throttle's policy and the client's address (pure parts; the database side is in tests/integration/users.test.ts). */
 import { describe, expect, it } from "vitest";
-import { BASE_WAIT_MS, FREE_ADDRESS_FAILURES, FREE_PAIR_FAILURES, MAX_SLOWDOWN_MS, slowdownAfter, waitAfter, WINDOW_MS } from "@/lib/auth/throttle";
+import {
+  BASE_WAIT_MS,
+  FREE_ADDRESS_FAILURES,
+  FREE_PAIR_FAILURES,
+  MAX_SLOWDOWN_MS,
+  slowdownAfter,
+  waitAfter,
+  WINDOW_MS,
+} from "@/lib/auth/throttle";
 import { cleanForwardedHeaders, clientAddressFrom } from "@/lib/client-address";
 
 describe("waiting after failures", () => {
   it("the first five failures of an account from one address are free; then each attempt waits, doubling", () => {
     expect(waitAfter({ failures: FREE_PAIR_FAILURES - 1, lastFailure: 0 }, FREE_PAIR_FAILURES, 0)).toBe(0);
     expect(waitAfter({ failures: FREE_PAIR_FAILURES, lastFailure: 0 }, FREE_PAIR_FAILURES, 0)).toBe(BASE_WAIT_MS);
-    expect(waitAfter({ failures: FREE_PAIR_FAILURES + 1, lastFailure: 0 }, FREE_PAIR_FAILURES, 0)).toBe(2 * BASE_WAIT_MS);
+    expect(waitAfter({ failures: FREE_PAIR_FAILURES + 1, lastFailure: 0 }, FREE_PAIR_FAILURES, 0)).toBe(
+      2 * BASE_WAIT_MS,
+    );
     expect(waitAfter({ failures: FREE_PAIR_FAILURES, lastFailure: 0 }, FREE_PAIR_FAILURES, BASE_WAIT_MS)).toBe(0);
   });
   it("an address trying many accounts waits after twenty", () => {
@@ -26,7 +36,12 @@ describe("waiting after failures", () => {
 
 describe("the client's address", () => {
   it("forwarded headers from an untrusted connection are removed: the socket's address stands", () => {
-    const headers: Record<string, string | undefined> = { "x-forwarded-for": "203.0.113.9", "x-real-ip": "203.0.113.9", forwarded: "for=203.0.113.9", host: "heftwise" };
+    const headers: Record<string, string | undefined> = {
+      "x-forwarded-for": "203.0.113.9",
+      "x-real-ip": "203.0.113.9",
+      forwarded: "for=203.0.113.9",
+      host: "heftwise",
+    };
     cleanForwardedHeaders(headers, "198.51.100.4", []);
     expect(headers).toEqual({ host: "heftwise" });
   });

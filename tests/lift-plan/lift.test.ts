@@ -33,11 +33,14 @@ describe("mode factors, uniform-load method — EN 818-4 as in suppliers' tables
     [3, 60, "straight", 1.5],
     [4, 30, "straight", 2.1],
     [4, 50, "straight", 1.5],
-  ] as const)("%i leg(s) at %i°, %s: %f", (legs, angle, hitch, factor) => expect(modeFactor(legs, angle, hitch)).toBeCloseTo(factor, 10));
+  ] as const)("%i leg(s) at %i°, %s: %f", (legs, angle, hitch, factor) =>
+    expect(modeFactor(legs, angle, hitch)).toBeCloseTo(factor, 10),
+  );
 
   it("grade 8 chain, 10 mm (single leg 3.15 t): the factors give the published 2-leg 4.25 / 3.15 t and 3–4-leg 6.70 / 4.75 t within the tables' rounding to preferred numbers (4 %)", () => {
     const single = 3150;
-    const within = (computed: number, published: number) => expect(Math.abs(computed - published) / published).toBeLessThan(0.04);
+    const within = (computed: number, published: number) =>
+      expect(Math.abs(computed - published) / published).toBeLessThan(0.04);
     within(single * modeFactor(2, 45, "straight"), 4250);
     expect(single * modeFactor(2, 60, "straight")).toBe(3150);
     within(single * modeFactor(4, 45, "straight"), 6700);
@@ -95,13 +98,18 @@ describe("a lift plan", () => {
 
   it("utilisation above 50 % makes a lift standard; above 90 % complex", () => {
     expect(scoreLift(plan({ load: 700 })).category).toBe("standard");
-    expect(scoreLift(plan({ load: 1100, sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 2000 } })).category).toBe("complex");
+    expect(scoreLift(plan({ load: 1100, sling: { legs: 4, angleFromVerticalDeg: 30, legWll: 2000 } })).category).toBe(
+      "complex",
+    );
   });
 
   it("any complicating answer makes a lift complex, with the reasons listed", () => {
     const r = scoreLift(plan({ factors: { nearOverheadLines: true, overPeople: true } }));
     expect(r.category).toBe("complex");
-    expect(r.categoryReasons).toEqual(["load passes over people or occupied areas", "near overhead lines or overhead line equipment"]);
+    expect(r.categoryReasons).toEqual([
+      "load passes over people or occupied areas",
+      "near overhead lines or overhead line equipment",
+    ]);
   });
 
   it("a sling leg over its WLL fails the accessories and stops the lift", () => {
@@ -119,7 +127,9 @@ describe("a lift plan", () => {
     expect(scoreLift(plan({ wind: { inServiceLimitMs: 9, forecastMs: 10 } })).band).toBe("stop");
     const near = scoreLift(plan({ wind: { inServiceLimitMs: 9, forecastMs: 8, largeSailArea: true } }));
     expect(near.band).toBe("watch");
-    expect(near.warnings.map((w) => w.field)).toEqual(expect.arrayContaining(["wind.forecastMs", "wind.largeSailArea"]));
+    expect(near.warnings.map((w) => w.field)).toEqual(
+      expect.arrayContaining(["wind.forecastMs", "wind.largeSailArea"]),
+    );
   });
 
   it("without an appointed person the plan lists it as missing and warns it cannot be approved", () => {
@@ -131,9 +141,15 @@ describe("a lift plan", () => {
 
 describe("thorough examination — LOLER 1998 reg. 9: 12 months for equipment, 6 for accessories and equipment lifting people [from memory]", () => {
   it("due dates", () => {
-    expect(checkExamination({ item: "crane", kind: "equipment", lastExamined: "2026-03-15" }, "2026-06-01").dueDate).toBe("2027-03-15");
-    expect(checkExamination({ item: "sling", kind: "accessory", lastExamined: "2026-03-15" }, "2026-06-01").dueDate).toBe("2026-09-15");
-    expect(checkExamination({ item: "MEWP", kind: "lifts-people", lastExamined: "2026-08-31" }, "2026-09-01").dueDate).toBe("2027-02-28");
+    expect(
+      checkExamination({ item: "crane", kind: "equipment", lastExamined: "2026-03-15" }, "2026-06-01").dueDate,
+    ).toBe("2027-03-15");
+    expect(
+      checkExamination({ item: "sling", kind: "accessory", lastExamined: "2026-03-15" }, "2026-06-01").dueDate,
+    ).toBe("2026-09-15");
+    expect(
+      checkExamination({ item: "MEWP", kind: "lifts-people", lastExamined: "2026-08-31" }, "2026-09-01").dueDate,
+    ).toBe("2027-02-28");
     expect(addMonths("2027-08-31", 6)).toBe("2028-02-29");
   });
   it("an examination expired on the lift date stops the lift", () => {
@@ -147,7 +163,12 @@ describe("thorough examination — LOLER 1998 reg. 9: 12 months for equipment, 6
     expect(r.band).toBe("watch");
   });
   it("an examination scheme's due date overrides the interval", () => {
-    expect(checkExamination({ item: "crane", kind: "equipment", lastExamined: "2026-01-01", schemeDueDate: "2026-04-01" }, "2026-05-01").status).toBe("expired");
+    expect(
+      checkExamination(
+        { item: "crane", kind: "equipment", lastExamined: "2026-01-01", schemeDueDate: "2026-04-01" },
+        "2026-05-01",
+      ).status,
+    ).toBe("expired");
   });
 });
 
@@ -159,7 +180,10 @@ describe("bad input gets a clear error", () => {
   };
   it("β above 60° is refused", () => {
     expect(bad({ sling: { legs: 2, angleFromVerticalDeg: 65, legWll: 1000 } })).toEqual([
-      { path: "sling.angleFromVerticalDeg", message: "must be at most 60° from vertical: wider angles are not permitted" },
+      {
+        path: "sling.angleFromVerticalDeg",
+        message: "must be at most 60° from vertical: wider angles are not permitted",
+      },
     ]);
   });
   it("negative masses and zero legs are refused, each by name", () => {
@@ -176,6 +200,23 @@ describe("properties", () => {
   const legs = fc.integer({ min: 1, max: 4 });
   const load = fc.double({ min: 1, max: 50_000, noNaN: true });
   it("tension grows as the angle widens", () =>
-    fc.assert(fc.property(load, legs, angle, angle, (w, n, a, b) => void expect(legTension(w, n, Math.max(a, b))).toBeGreaterThanOrEqual(legTension(w, n, Math.min(a, b)) - 1e-9))));
-  it("tension is never below W / n", () => fc.assert(fc.property(load, legs, angle, (w, n, a) => void expect(legTension(w, n, a)).toBeGreaterThanOrEqual(w / n - 1e-9))));
+    fc.assert(
+      fc.property(
+        load,
+        legs,
+        angle,
+        angle,
+        (w, n, a, b) =>
+          void expect(legTension(w, n, Math.max(a, b))).toBeGreaterThanOrEqual(legTension(w, n, Math.min(a, b)) - 1e-9),
+      ),
+    ));
+  it("tension is never below W / n", () =>
+    fc.assert(
+      fc.property(
+        load,
+        legs,
+        angle,
+        (w, n, a) => void expect(legTension(w, n, a)).toBeGreaterThanOrEqual(w / n - 1e-9),
+      ),
+    ));
 });

@@ -10,7 +10,13 @@ import { demoLiftSchedule, DEMO_COMPONENTS, DEMO_LIFT_TEAM } from "@/assessments
 import { drawnSignaturePng } from "@/lib/png";
 
 export function packInput(taskCount: number, overrides: Partial<PackInput> = {}): PackInput {
-  const register: RegisterEntry[] = DEMO_COMPONENTS.map((c, i) => ({ id: `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`, name: c.name, massKg: c.massKg, grip: c.grip, massSource: c.massSource }));
+  const register: RegisterEntry[] = DEMO_COMPONENTS.map((c, i) => ({
+    id: `00000000-0000-4000-8000-${String(i).padStart(12, "0")}`,
+    name: c.name,
+    massKg: c.massKg,
+    grip: c.grip,
+    massSource: c.massSource,
+  }));
   const byName = (name: string) => register.find((c) => c.name === name)?.id ?? null;
   const base = TEMPLATES.map((t) => t.build(byName));
   const content = { ...base[2], tasks: [] as (typeof base)[number]["tasks"], hazards: base.flatMap((b) => b.hazards) };
@@ -25,12 +31,38 @@ export function packInput(taskCount: number, overrides: Partial<PackInput> = {})
   return {
     organisation: "Brackenfold Lineside Ltd",
     title: `Pack of ${taskCount} handling tasks`,
-    job: { name: "Hollin Vale loop", client: "Wendmoor Railway Infrastructure", location: "Hollin Vale", lineReference: "WHV", mileage: "14m 22ch", accessPoint: "Gorsey Lane", siteContactName: "Tamsin Greyholt", siteContactPhone: "07700 900418" },
-    revision: { id: "00000000-0000-4000-8000-00000000beef", number: 1, status: "approved", authorName: "Idris Pennock", approverName: "Ruth Okonjo-Vale", submittedAt: new Date("2027-01-10T09:30:00Z"), approvedAt: new Date("2027-01-11T14:05:00Z"), reviewDate: "2027-07-20", contentHash: "9f2c".repeat(16) },
+    job: {
+      name: "Hollin Vale loop",
+      client: "Wendmoor Railway Infrastructure",
+      location: "Hollin Vale",
+      lineReference: "WHV",
+      mileage: "14m 22ch",
+      accessPoint: "Gorsey Lane",
+      siteContactName: "Tamsin Greyholt",
+      siteContactPhone: "07700 900418",
+    },
+    revision: {
+      id: "00000000-0000-4000-8000-00000000beef",
+      number: 1,
+      status: "approved",
+      authorName: "Idris Pennock",
+      approverName: "Ruth Okonjo-Vale",
+      submittedAt: new Date("2027-01-10T09:30:00Z"),
+      approvedAt: new Date("2027-01-11T14:05:00Z"),
+      reviewDate: "2027-07-20",
+      contentHash: "9f2c".repeat(16),
+    },
     content,
     scores: reviewContent(content, register).scores,
     componentNames: Object.fromEntries(register.map((c) => [c.id, c.name])),
-    signatures: [{ name: "Ruth Okonjo-Vale", role: "Contracts manager", signedAt: new Date("2027-01-11T14:05:00Z"), png: drawnSignaturePng(2) }],
+    signatures: [
+      {
+        name: "Ruth Okonjo-Vale",
+        role: "Contracts manager",
+        signedAt: new Date("2027-01-11T14:05:00Z"),
+        png: drawnSignaturePng(2),
+      },
+    ],
     briefings: [],
     verifyUrl: "http://localhost:3000/verify",
     ...overrides,

@@ -66,7 +66,9 @@ describe("the pack PDF", () => {
     const file = write("qr.pdf", await savePack(await buildPack(packInput(1, { verifyUrl }), fonts)));
     execFileSync("pdftoppm", ["-png", "-r", "110", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "cover")]);
     const { width, height, data } = PNG.sync.read(readFileSync(path.join(dir, "cover.png")));
-    expect(jsQR(new Uint8ClampedArray(data.buffer, data.byteOffset, data.byteLength), width, height)?.data).toBe(verifyUrl);
+    expect(jsQR(new Uint8ClampedArray(data.buffer, data.byteOffset, data.byteLength), width, height)?.data).toBe(
+      verifyUrl,
+    );
   });
 
   it("wraps a word wider than the column (a content hash) instead of running off the page", async () => {
@@ -92,25 +94,62 @@ describe("the pack PDF", () => {
     const opaque = encodePng(120, 40, opaqueRgba);
     const grey = PNG.sync.write(PNG.sync.read(opaque), { colorType: 0, inputHasAlpha: true });
     const wide = Buffer.from(Uint16Array.from(stroke(120, 40, 255), (v) => v * 257).buffer);
-    const sixteen = PNG.sync.write(Object.assign(new PNG({ width: 120, height: 40 }), { data: wide }), { bitDepth: 16 });
+    const sixteen = PNG.sync.write(Object.assign(new PNG({ width: 120, height: 40 }), { data: wide }), {
+      bitDepth: 16,
+    });
     expect([grey[25], sixteen[24]]).toEqual([0, 16]); // colour type grey; bit depth 16
-    const signatures = [transparent, opaque, grey, sixteen].map((png, i) => ({ name: `Signer ${i + 1}`, role: "Approver", signedAt: new Date("2027-01-11T14:05:00Z"), png }));
+    const signatures = [transparent, opaque, grey, sixteen].map((png, i) => ({
+      name: `Signer ${i + 1}`,
+      role: "Approver",
+      signedAt: new Date("2027-01-11T14:05:00Z"),
+      png,
+    }));
     const pdf = await savePack(await buildPack(packInput(1, { signatures }), fonts));
     const all = flat(text(write("signatures.pdf", pdf)));
     for (let i = 1; i <= 4; i++) expect(all).toContain(`Signer ${i}, Approver`);
     const images = execFileSync("pdfimages", ["-list", path.join(dir, "signatures.pdf")], { encoding: "utf8" });
     // Four images; the two with transparency carry a soft mask, the opaque and grey ones none.
-    const types = images.split("\n").slice(2).filter(Boolean).map((line) => line.trim().split(/\s+/)[2]);
+    const types = images
+      .split("\n")
+      .slice(2)
+      .filter(Boolean)
+      .map((line) => line.trim().split(/\s+/)[2]);
     expect(types).toEqual(["image", "smask", "image", "image", "image", "smask"]);
   });
 
   it("prints the lineside method statement: protection from trains, permits, buried services, the excavation, environment and welfare", async () => {
     const base = packInput(2);
     const content = structuredClone(base.content);
-    Object.assign(content.lineside, { nearLine: "near", protection: "possession", responsibleName: "Nerys Caldwell", responsibleCompetence: "SSOW-PL 3318", positionsOfSafety: "Behind the fence at the base" });
-    content.permits = [{ kind: "dig", description: "", reference: "PTD-HV-0142", issuedBy: "Permit office", validFrom: "2027-01-04", validTo: "2027-02-28" }];
-    Object.assign(content.buriedServices, { recordsObtained: true, scanned: true, scannedBy: "Kieran Lusk", scanDate: "2027-01-02", rule: "Hand tools only within 0.5 m" });
-    Object.assign(content.excavation, { present: true, depthM: 1.2, support: "trench-box", inspection: "Supervisor, before each shift" });
+    Object.assign(content.lineside, {
+      nearLine: "near",
+      protection: "possession",
+      responsibleName: "Nerys Caldwell",
+      responsibleCompetence: "SSOW-PL 3318",
+      positionsOfSafety: "Behind the fence at the base",
+    });
+    content.permits = [
+      {
+        kind: "dig",
+        description: "",
+        reference: "PTD-HV-0142",
+        issuedBy: "Permit office",
+        validFrom: "2027-01-04",
+        validTo: "2027-02-28",
+      },
+    ];
+    Object.assign(content.buriedServices, {
+      recordsObtained: true,
+      scanned: true,
+      scannedBy: "Kieran Lusk",
+      scanDate: "2027-01-02",
+      rule: "Hand tools only within 0.5 m",
+    });
+    Object.assign(content.excavation, {
+      present: true,
+      depthM: 1.2,
+      support: "trench-box",
+      inspection: "Supervisor, before each shift",
+    });
     content.environment.welfare = "Welfare van at the access point";
     const all = flat(text(write("lineside.pdf", await savePack(await buildPack({ ...base, content }, fonts)))));
     for (const expected of [

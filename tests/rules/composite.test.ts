@@ -7,7 +7,12 @@ import { describe, expect, it } from "vitest";
 import { scoreComposite, type CompositeTaskRequest } from "@/assessments/rules/niosh-composite";
 
 const at = { h: 25, v: 75, a: 0 };
-const task = (id: string, load: number, frequency: number, over: Partial<CompositeTaskRequest> = {}): CompositeTaskRequest => ({
+const task = (
+  id: string,
+  load: number,
+  frequency: number,
+  over: Partial<CompositeTaskRequest> = {},
+): CompositeTaskRequest => ({
   id,
   load,
   origin: at,
@@ -23,7 +28,13 @@ describe("composite lifting index [pub procedure, calc values]", () => {
   // A: 10 kg at 1/min → FM .94, STRWL 21.62, STLI .4625, FILI .4348
   // B: 5 kg at 2/min → FM .91, STRWL 20.93, STLI .2389, FILI .2174
   // CLI = .4625 + .2174 × (1/FM(3/min) − 1/FM(1/min)) = .4625 + .2174 × (1/.88 − 1/.94) = .4783
-  const result = scoreComposite({ method: "niosh-composite", units: "metric", durationHours: 1, recoveryHours: 1.2, tasks: [task("B", 5, 2), task("A", 10, 1)] });
+  const result = scoreComposite({
+    method: "niosh-composite",
+    units: "metric",
+    durationHours: 1,
+    recoveryHours: 1.2,
+    tasks: [task("B", 5, 2), task("A", 10, 1)],
+  });
 
   it("computes FIRWL, STRWL, FILI and STLI per task", () => {
     const a = result.tasks.find((t) => t.id === "A")!;
@@ -62,7 +73,12 @@ describe("composite lifting index [pub procedure, calc values]", () => {
   });
 
   it("a combined frequency where FM is 0 gives CLI null with a warning", () => {
-    const r = scoreComposite({ method: "niosh-composite", units: "metric", durationHours: 4, tasks: [task("A", 5, 6), task("B", 5, 6)] });
+    const r = scoreComposite({
+      method: "niosh-composite",
+      units: "metric",
+      durationHours: 4,
+      tasks: [task("A", 5, 6), task("B", 5, 6)],
+    });
     expect(r.cli).toBeNull();
     expect(r.warnings.some((w) => w.field === "tasks" && /combined frequency/.test(w.message))).toBe(true);
   });

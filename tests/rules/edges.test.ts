@@ -44,11 +44,17 @@ describe("1. the lifting equation outside its range is never Clear (NIOSH Pub. 9
     expect(w?.cannotJudge).toBe(true);
     expect(w?.message).toContain(`${multiplier} is 0`);
     expect(w?.message).toMatch(field.startsWith("origin") ? /origin/ : /destination/);
-    expect(r.reasons.some((x) => x.text.includes(multiplier) && x.text.includes(field.startsWith("origin") ? "origin" : "destination"))).toBe(true);
+    expect(
+      r.reasons.some(
+        (x) => x.text.includes(multiplier) && x.text.includes(field.startsWith("origin") ? "origin" : "destination"),
+      ),
+    ).toBe(true);
   });
 
   it("US units: V at the destination above 70 in is outside the equation (NIOSH Pub. 94-110, US customary)", () => {
-    const r = scoreNiosh(lift({ units: "us", load: 10, origin: { h: 10, v: 30, a: 0 }, destination: { h: 10, v: 72, a: 0 } }));
+    const r = scoreNiosh(
+      lift({ units: "us", load: 10, origin: { h: 10, v: 30, a: 0 }, destination: { h: 10, v: 72, a: 0 } }),
+    );
     expect(r.band).not.toBe("clear");
     expect(cannotJudge(r)).toBe(true);
   });
@@ -62,7 +68,9 @@ describe("1. the lifting equation outside its range is never Clear (NIOSH Pub. 9
 
 describe("2. a frequency multiplier of 0 names the frequency and the Table 5 cell (NIOSH Pub. 94-110, Table 5)", () => {
   it("9 lifts a minute for 4 h with the hands below 75 cm: FM 0, Stop, a warning naming the cell", () => {
-    const r = scoreNiosh(lift({ frequency: 9, durationHours: 4, origin: { h: 25, v: 40, a: 0 }, destination: { h: 25, v: 40, a: 0 } }));
+    const r = scoreNiosh(
+      lift({ frequency: 9, durationHours: 4, origin: { h: 25, v: 40, a: 0 }, destination: { h: 25, v: 40, a: 0 } }),
+    );
     expect(r.origin.fm).toBe(0);
     expect(r.band).toBe("stop");
     const w = r.warnings.find((x) => x.field === "frequency");
@@ -76,7 +84,15 @@ describe("2. a frequency multiplier of 0 names the frequency and the Table 5 cel
   it("between the last non-zero row (8/min, .18) and a zero cell (9/min, 0) the table ends: FM is taken as 0 and the warning says so (Heftwise policy)", () => {
     expect(frequencyMultiplier(8, "long", false)).toBeCloseTo(0.18, 10);
     expect(frequencyMultiplier(8.5, "long", false)).toBe(0);
-    const r = scoreNiosh(lift({ load: 1, frequency: 8.5, durationHours: 4, origin: { h: 25, v: 40, a: 0 }, destination: { h: 25, v: 40, a: 0 } }));
+    const r = scoreNiosh(
+      lift({
+        load: 1,
+        frequency: 8.5,
+        durationHours: 4,
+        origin: { h: 25, v: 40, a: 0 },
+        destination: { h: 25, v: 40, a: 0 },
+      }),
+    );
     expect(r.band).not.toBe("clear");
     expect(r.warnings.find((w) => w.field === "frequency")?.message).toMatch(/table ends/i);
   });
@@ -87,8 +103,24 @@ describe("3. the composite index keeps a task the single-task method stops (NIOS
   // Task A: 9 lifts/min for 4 h. At the origin (V 30 cm, below 75) FM is 0 (Table 5); at the
   // destination (V 80 cm) FM is .15 and FIRWL is lower (H 50 cm). Choosing the end by FIRWL alone
   // dropped the zero cell and the job came back Watch.
-  const a: CompositeTaskRequest = { id: "A", load: 3, origin: at(25, 30), destination: at(50, 80), frequency: 9, coupling: "good", controlAtDestination: true };
-  const b: CompositeTaskRequest = { id: "B", load: 1, origin: at(25, 75), destination: at(25, 75), frequency: 0.2, coupling: "good", controlAtDestination: false };
+  const a: CompositeTaskRequest = {
+    id: "A",
+    load: 3,
+    origin: at(25, 30),
+    destination: at(50, 80),
+    frequency: 9,
+    coupling: "good",
+    controlAtDestination: true,
+  };
+  const b: CompositeTaskRequest = {
+    id: "B",
+    load: 1,
+    origin: at(25, 75),
+    destination: at(25, 75),
+    frequency: 0.2,
+    coupling: "good",
+    controlAtDestination: false,
+  };
   const r = scoreComposite({ method: "niosh-composite", units: "metric", durationHours: 4, tasks: [a, b] });
 
   it("the single-task method stops task A", () => {
@@ -101,7 +133,16 @@ describe("3. the composite index keeps a task the single-task method stops (NIOS
 });
 
 describe("4. pushing or holding back downhill (HSE L23 guideline forces; F = m·g·(sin θ − C_rr·cos θ), REFERENCES.md §7)", () => {
-  const push = (over: Partial<PushRequest> = {}): PushRequest => ({ method: "push", mass: 400, gradient: -0.1, sex: "male", teamSize: 1, surface: "hard", braked: false, ...over });
+  const push = (over: Partial<PushRequest> = {}): PushRequest => ({
+    method: "push",
+    mass: 400,
+    gradient: -0.1,
+    sex: "male",
+    teamSize: 1,
+    surface: "hard",
+    braked: false,
+    ...over,
+  });
 
   it("400 kg down 1 in 10 on hard ground, unbraked: the hold-back force exceeds 200 N, never Clear", () => {
     const r = scorePush(push());
@@ -128,7 +169,18 @@ describe("4. pushing or holding back downhill (HSE L23 guideline forces; F = m·
 
 describe("5. cumulative mass in team carrying is counted per person (ISO 11228-1, from memory)", () => {
   it("40 kg carried by two, once a minute for 8 h: 9 600 kg each, not 19 200", () => {
-    const r = scoreFilter({ method: "filter", sex: "male", zone: "knuckle-to-elbow", reach: "close", load: 40, frequency: 1, twistDeg: 0, teamSize: 2, carryDistanceM: 8, durationHours: 8 });
+    const r = scoreFilter({
+      method: "filter",
+      sex: "male",
+      zone: "knuckle-to-elbow",
+      reach: "close",
+      load: 40,
+      frequency: 1,
+      twistDeg: 0,
+      teamSize: 2,
+      carryDistanceM: 8,
+      durationHours: 8,
+    });
     expect(r.cumulativeMassKg).toBe(9_600);
     expect(r.warnings.some((w) => /cumulative/i.test(w.message))).toBe(false);
   });
@@ -167,9 +219,12 @@ describe("6. lift plan: examinations and the sling's marked limit", () => {
     [1, 0, "endless-choked", 1.28],
     [2, 30, "choked", 1.4 * 0.8],
     [4, 30, "choked", 2.1 * 0.8],
-  ] as const)("mode factor, %i leg(s) at %i°, %s hitch: %f (uniform load method, EN 1492-1 / EN 818-4 suppliers' tables, from memory)", (legs, angle, hitch, factor) => {
-    expect(modeFactor(legs, angle, hitch)).toBeCloseTo(factor, 10);
-  });
+  ] as const)(
+    "mode factor, %i leg(s) at %i°, %s hitch: %f (uniform load method, EN 1492-1 / EN 818-4 suppliers' tables, from memory)",
+    (legs, angle, hitch, factor) => {
+      expect(modeFactor(legs, angle, hitch)).toBeCloseTo(factor, 10);
+    },
+  );
 });
 
 describe("7. every input a method uses reaches it (HSE L23 reductions for frequency and twisting)", () => {
@@ -180,7 +235,15 @@ describe("7. every input a method uses reaches it (HSE L23 reductions for freque
       componentId: "00000000-0000-4000-8000-000000000001",
       quantity: 1,
       operation: "lift",
-      niosh: { origin: { h: 25, v: 75, a: 90 }, destination: { h: 25, v: 75, a: 0 }, frequency: 6, durationHours: 1, recoveryHours: 2, coupling: "good", controlAtDestination: false },
+      niosh: {
+        origin: { h: 25, v: 75, a: 90 },
+        destination: { h: 25, v: 75, a: 0 },
+        frequency: 6,
+        durationHours: 1,
+        recoveryHours: 2,
+        coupling: "good",
+        controlAtDestination: false,
+      },
       filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1 },
     };
     const s = scoreTask(task, { id: task.componentId!, name: "Kit", massKg: 12, grip: "good", massSource: "weighed" });
@@ -195,10 +258,14 @@ describe("7. every input a method uses reaches it (HSE L23 reductions for freque
 
 describe("8. duration categories need their recovery time (NIOSH Pub. 94-110: ≤ 1 h needs ≥ 1.2 × the work time, 1–2 h ≥ 0.3 ×; ratios from memory)", () => {
   const at5 = (over: Partial<NioshRequest>) => scoreNiosh(lift({ frequency: 5, ...over }));
-  it("1 h with 1.2 h of recovery stays short: FM .80", () => expect(at5({ durationHours: 1, recoveryHours: 1.2 }).origin.fm).toBeCloseTo(0.8, 10));
-  it("1 h with 0.5 h of recovery is moderate: FM .60", () => expect(at5({ durationHours: 1, recoveryHours: 0.5 }).origin.fm).toBeCloseTo(0.6, 10));
-  it("1 h with 0.2 h of recovery is long: FM .35", () => expect(at5({ durationHours: 1, recoveryHours: 0.2 }).origin.fm).toBeCloseTo(0.35, 10));
-  it("1.5 h with 0.3 h of recovery is long: FM .35", () => expect(at5({ durationHours: 1.5, recoveryHours: 0.3 }).origin.fm).toBeCloseTo(0.35, 10));
+  it("1 h with 1.2 h of recovery stays short: FM .80", () =>
+    expect(at5({ durationHours: 1, recoveryHours: 1.2 }).origin.fm).toBeCloseTo(0.8, 10));
+  it("1 h with 0.5 h of recovery is moderate: FM .60", () =>
+    expect(at5({ durationHours: 1, recoveryHours: 0.5 }).origin.fm).toBeCloseTo(0.6, 10));
+  it("1 h with 0.2 h of recovery is long: FM .35", () =>
+    expect(at5({ durationHours: 1, recoveryHours: 0.2 }).origin.fm).toBeCloseTo(0.35, 10));
+  it("1.5 h with 0.3 h of recovery is long: FM .35", () =>
+    expect(at5({ durationHours: 1.5, recoveryHours: 0.3 }).origin.fm).toBeCloseTo(0.35, 10));
   it("no recovery given: the long column, with a warning that says so", () => {
     const r = at5({ durationHours: 1, recoveryHours: undefined });
     expect(r.origin.fm).toBeCloseTo(0.35, 10);
@@ -217,7 +284,15 @@ describe("9. infrequent tasks in a composite job count at 0.2 a minute (NIOSH Pu
       recoveryHours: 2,
       tasks: [
         { id: "A", load: 10, origin: at, destination: at, frequency: 1, coupling: "good", controlAtDestination: false },
-        { id: "B", load: 5, origin: at, destination: at, frequency: 0.1, coupling: "good", controlAtDestination: false },
+        {
+          id: "B",
+          load: 5,
+          origin: at,
+          destination: at,
+          frequency: 0.1,
+          coupling: "good",
+          controlAtDestination: false,
+        },
       ],
     });
     // CLI = 10/(23×.94) + 5/23 × (1/FM(1.2) − 1/FM(1)); FM(1.2, short) = .94 + .2 × (.91 − .94) = .934 [calc, Table 5 rows 1 and 2]
@@ -227,14 +302,30 @@ describe("9. infrequent tasks in a composite job count at 0.2 a minute (NIOSH Pu
 });
 
 describe("what would bring it to clear: computed by re-scoring, never promised", () => {
-  const part = { id: "00000000-0000-4000-8000-000000000001", name: "Panel", massKg: 30, grip: "fair" as const, massSource: "weighed" as const };
+  const part = {
+    id: "00000000-0000-4000-8000-000000000001",
+    name: "Panel",
+    massKg: 30,
+    grip: "fair" as const,
+    massSource: "weighed" as const,
+  };
   const carry = (over: Partial<NonNullable<Task["filter"]>> = {}): Task => ({
     id: "t1",
     description: "",
     componentId: part.id,
     quantity: 1,
     operation: "carry",
-    filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 40, durationHours: 1, ...over },
+    filter: {
+      sex: "male",
+      zone: "knuckle-to-elbow",
+      reach: "close",
+      frequency: 0.5,
+      twistDeg: 0,
+      teamSize: 1,
+      carryDistanceM: 40,
+      durationHours: 1,
+      ...over,
+    },
   });
 
   it("a 40 m carry of 30 kg: a pair alone does not reach Clear (the long carry keeps Watch), so it is not offered as doing so", () => {
@@ -256,7 +347,23 @@ describe("what would bring it to clear: computed by re-scoring, never promised",
   it("where nothing reaches Clear it says so and gives the best band reached", () => {
     // A braked trolley whose push-pull gauge read 900 N, already pushed by four: no change Heftwise can
     // score lowers a measured force, and four is the largest team the guidance allows (HSE L23).
-    const task: Task = { id: "t1", description: "", componentId: part.id, quantity: 1, operation: "push", push: { mass: 800, gradient: 0.02, sex: "male", teamSize: 4, surface: "rail", braked: true, brakeOperator: "Ganger", measuredForceN: 900 } };
+    const task: Task = {
+      id: "t1",
+      description: "",
+      componentId: part.id,
+      quantity: 1,
+      operation: "push",
+      push: {
+        mass: 800,
+        gradient: 0.02,
+        sex: "male",
+        teamSize: 4,
+        surface: "rail",
+        braked: true,
+        brakeOperator: "Ganger",
+        measuredForceN: 900,
+      },
+    };
     const s = scoreTask(task, part);
     expect(s.band).not.toBe("clear");
     expect(s.whatIf!.reachesClear).toBe(false);
@@ -266,16 +373,60 @@ describe("what would bring it to clear: computed by re-scoring, never promised",
 
 describe("what-if lines for the pack and the briefing", () => {
   it("a combination that reaches Clear is printed even when no single change does", () => {
-    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Battery", massKg: 31, grip: "good" as const, massSource: "datasheet" as const };
-    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 40, durationHours: 1 } };
+    const part = {
+      id: "00000000-0000-4000-8000-000000000001",
+      name: "Battery",
+      massKg: 31,
+      grip: "good" as const,
+      massSource: "datasheet" as const,
+    };
+    const task: Task = {
+      id: "t",
+      description: "",
+      componentId: part.id,
+      quantity: 1,
+      operation: "carry",
+      filter: {
+        sex: "male",
+        zone: "knuckle-to-elbow",
+        reach: "close",
+        frequency: 0.5,
+        twistDeg: 0,
+        teamSize: 1,
+        carryDistanceM: 40,
+        durationHours: 1,
+      },
+    };
     const s = scoreTask(task, part);
     expect(s.whatIf!.suggestions).toHaveLength(0);
     const lines = whatIfLines(s.whatIf);
     expect(lines.some((l) => l.startsWith("Together") && l.endsWith("Clear."))).toBe(true);
   });
   it("a task Clear already has nothing to print", () => {
-    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Kit", massKg: 6, grip: "good" as const, massSource: "datasheet" as const };
-    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 5, durationHours: 1 } };
+    const part = {
+      id: "00000000-0000-4000-8000-000000000001",
+      name: "Kit",
+      massKg: 6,
+      grip: "good" as const,
+      massSource: "datasheet" as const,
+    };
+    const task: Task = {
+      id: "t",
+      description: "",
+      componentId: part.id,
+      quantity: 1,
+      operation: "carry",
+      filter: {
+        sex: "male",
+        zone: "knuckle-to-elbow",
+        reach: "close",
+        frequency: 0.5,
+        twistDeg: 0,
+        teamSize: 1,
+        carryDistanceM: 5,
+        durationHours: 1,
+      },
+    };
     expect(whatIfLines(scoreTask(task, part).whatIf)).toEqual([]);
   });
 });
@@ -286,23 +437,67 @@ describe("working conditions (HSE L23: the working environment is part of every 
     expect(clear.band).toBe("clear");
     const r = scoreNiosh(lift({ conditions: ["uneven-ground", "poor-light"] }));
     expect(r.band).toBe("watch");
-    expect(r.reasons.some((x) => x.text.includes("uneven or unstable ground") && x.text.includes("walkway boards"))).toBe(true);
+    expect(
+      r.reasons.some((x) => x.text.includes("uneven or unstable ground") && x.text.includes("walkway boards")),
+    ).toBe(true);
     expect(r.reasons.some((x) => x.text.includes("poor light") && x.text.includes("lighting"))).toBe(true);
   });
   it("the what-if offers each condition's remedy, re-scored", () => {
-    const part = { id: "00000000-0000-4000-8000-000000000001", name: "Kit", massKg: 6, grip: "good" as const, massSource: "datasheet" as const };
-    const task: Task = { id: "t", description: "", componentId: part.id, quantity: 1, operation: "carry", conditions: ["wind-on-panels"], filter: { sex: "male", zone: "knuckle-to-elbow", reach: "close", frequency: 0.5, twistDeg: 0, teamSize: 1, carryDistanceM: 5, durationHours: 1 } };
+    const part = {
+      id: "00000000-0000-4000-8000-000000000001",
+      name: "Kit",
+      massKg: 6,
+      grip: "good" as const,
+      massSource: "datasheet" as const,
+    };
+    const task: Task = {
+      id: "t",
+      description: "",
+      componentId: part.id,
+      quantity: 1,
+      operation: "carry",
+      conditions: ["wind-on-panels"],
+      filter: {
+        sex: "male",
+        zone: "knuckle-to-elbow",
+        reach: "close",
+        frequency: 0.5,
+        twistDeg: 0,
+        teamSize: 1,
+        carryDistanceM: 5,
+        durationHours: 1,
+      },
+    };
     const s = scoreTask(task, part);
     expect(s.band).toBe("watch");
-    expect(s.whatIf!.suggestions[0]).toMatchObject({ change: { kind: "condition", condition: "wind-on-panels" }, band: "clear" });
+    expect(s.whatIf!.suggestions[0]).toMatchObject({
+      change: { kind: "condition", condition: "wind-on-panels" },
+      band: "clear",
+    });
   });
 });
 
 describe("working conditions from a form", () => {
   it("a checkbox group with nothing ticked (false) is read as no conditions, never scored as something else", async () => {
     const { taskSchema } = await import("@/assessments/method-statement/content");
-    const parsed = taskSchema.parse({ id: "t", description: "", componentId: null, quantity: 1, operation: "carry", conditions: false });
+    const parsed = taskSchema.parse({
+      id: "t",
+      description: "",
+      componentId: null,
+      quantity: 1,
+      operation: "carry",
+      conditions: false,
+    });
     expect(parsed.conditions).toEqual([]);
-    expect(taskSchema.safeParse({ id: "t", description: "", componentId: null, quantity: 1, operation: "carry", conditions: ["fog"] }).success).toBe(false);
+    expect(
+      taskSchema.safeParse({
+        id: "t",
+        description: "",
+        componentId: null,
+        quantity: 1,
+        operation: "carry",
+        conditions: ["fog"],
+      }).success,
+    ).toBe(false);
   });
 });

@@ -18,13 +18,27 @@ const request = (over: Partial<FilterRequest> = {}): FilterRequest => ({
 });
 
 describe("guideline weights — HSE L23 filter table (men [pub, reproduction]; women [memory])", () => {
-  const men = { "shoulder-to-reach": [10, 5], "elbow-to-shoulder": [20, 10], "knuckle-to-elbow": [25, 15], "lower-leg-to-knuckle": [20, 10], "floor-to-lower-leg": [10, 5] };
-  const women = { "shoulder-to-reach": [7, 3], "elbow-to-shoulder": [13, 7], "knuckle-to-elbow": [16, 10], "lower-leg-to-knuckle": [13, 7], "floor-to-lower-leg": [7, 3] };
+  const men = {
+    "shoulder-to-reach": [10, 5],
+    "elbow-to-shoulder": [20, 10],
+    "knuckle-to-elbow": [25, 15],
+    "lower-leg-to-knuckle": [20, 10],
+    "floor-to-lower-leg": [10, 5],
+  };
+  const women = {
+    "shoulder-to-reach": [7, 3],
+    "elbow-to-shoulder": [13, 7],
+    "knuckle-to-elbow": [16, 10],
+    "lower-leg-to-knuckle": [13, 7],
+    "floor-to-lower-leg": [7, 3],
+  };
   it.each(TABLE_ZONES)("men, %s: close and extended [pub]", (zone) => {
     expect([guidelineWeight("male", zone, "close"), guidelineWeight("male", zone, "extended")]).toEqual(men[zone]);
   });
   it.each(TABLE_ZONES)("women, %s: close and extended [from memory]", (zone) => {
-    expect([guidelineWeight("female", zone, "close"), guidelineWeight("female", zone, "extended")]).toEqual(women[zone]);
+    expect([guidelineWeight("female", zone, "close"), guidelineWeight("female", zone, "extended")]).toEqual(
+      women[zone],
+    );
   });
   it("25 kg, men, knuckle to elbow, close: the one-person design figure of the trade (common practice, no published source) matches the table", () => {
     expect(scoreFilter(request({ load: 25 })).guideline).toBe(25);
@@ -41,8 +55,10 @@ describe("reductions — HSE L23 [pub] and Heftwise's documented policy for the 
   });
   it("50 % at 5–8 a minute [pub]", () => expect(g({ frequency: 6 })).toBeCloseTo(12.5, 10));
   it("80 % above about 12 a minute [pub]", () => expect(g({ frequency: 13 })).toBeCloseTo(5, 10));
-  it("3–4 a minute takes the 5–8 figure, 50 % (Heftwise policy, conservative)", () => expect(g({ frequency: 3.5 })).toBeCloseTo(12.5, 10));
-  it("9–12 a minute takes the above-12 figure, 80 % (Heftwise policy, conservative)", () => expect(g({ frequency: 10 })).toBeCloseTo(5, 10));
+  it("3–4 a minute takes the 5–8 figure, 50 % (Heftwise policy, conservative)", () =>
+    expect(g({ frequency: 3.5 })).toBeCloseTo(12.5, 10));
+  it("9–12 a minute takes the above-12 figure, 80 % (Heftwise policy, conservative)", () =>
+    expect(g({ frequency: 10 })).toBeCloseTo(5, 10));
   it("twisting beyond 45°: 10 %; beyond 90°: 20 % [pub]", () => {
     expect(g({ twistDeg: 45 })).toBe(25);
     expect(g({ twistDeg: 60 })).toBeCloseTo(22.5, 10);

@@ -13,5 +13,10 @@ describe("fmt", () => {
     [1e12, "1000000000000"],
   ])("%f → %s", (x, s) => expect(fmt(x)).toBe(s));
   it("agrees with rounding to 2 dp for any number", () =>
-    fc.assert(fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), (x) => void expect(Number(fmt(x))).toBeCloseTo(Math.round(x * 100) / 100, 9))));
+    fc.assert(
+      fc.property(
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        (x) => void expect(Number(fmt(x))).toBeCloseTo(Math.round(x * 100) / 100, 9),
+      ),
+    ));
 });

@@ -23,7 +23,8 @@ import { applyChange } from "@/assessments/method-statement/what-if";
 import { taskSchema, type Task } from "@/assessments/method-statement/content";
 
 const rank = (b: Band | null) => BANDS.indexOf(b ?? "stop");
-const notBetter = (after: Band, before: Band) => expect(rank(after), `${after} after, ${before} before`).toBeGreaterThanOrEqual(rank(before));
+const notBetter = (after: Band, before: Band) =>
+  expect(rank(after), `${after} after, ${before} before`).toBeGreaterThanOrEqual(rank(before));
 const num = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
 const coupling = fc.constantFrom("good" as const, "fair" as const, "poor" as const);
 const sex = fc.constantFrom("male" as const, "female" as const);
@@ -86,7 +87,13 @@ const lift: fc.Arbitrary<LiftRequest> = fc
     examinedOffset: fc.option(fc.integer({ min: -500, max: 30 }), { nil: undefined }),
     wind: fc.option(fc.record({ inServiceLimitMs: num(5, 20), forecastMs: num(0, 25) }), { nil: undefined }),
     groundBearing: fc.option(
-      fc.record({ outriggerForceKn: num(5, 300), matLengthM: num(0.3, 2.5), matWidthM: num(0.3, 2.5), ground: fc.constantFrom(...GROUND_TYPE_KEYS), allowableKpa: fc.option(num(30, 800), { nil: undefined }) }),
+      fc.record({
+        outriggerForceKn: num(5, 300),
+        matLengthM: num(0.3, 2.5),
+        matWidthM: num(0.3, 2.5),
+        ground: fc.constantFrom(...GROUND_TYPE_KEYS),
+        allowableKpa: fc.option(num(30, 800), { nil: undefined }),
+      }),
       { nil: undefined },
     ),
     accessoryWll: fc.option(num(50, 6000), { nil: undefined }),
@@ -97,12 +104,24 @@ const lift: fc.Arbitrary<LiftRequest> = fc
     riggingMass: x.riggingMass,
     hookBlockMass: x.hookBlockMass,
     ratedCapacity: x.ratedCapacity,
-    sling: { legs: x.hitch === "basket" || x.hitch.startsWith("endless") ? 1 : x.legs, angleFromVerticalDeg: x.angle, legWll: x.legWll, hitch: x.hitch, markedWll: x.markedWll },
+    sling: {
+      legs: x.hitch === "basket" || x.hitch.startsWith("endless") ? 1 : x.legs,
+      angleFromVerticalDeg: x.angle,
+      legWll: x.legWll,
+      hitch: x.hitch,
+      markedWll: x.markedWll,
+    },
     liftDate: isoDay(0),
-    examinations: x.examinedOffset === undefined ? [] : [{ item: "Crane", kind: "equipment" as const, lastExamined: isoDay(x.examinedOffset) }],
+    examinations:
+      x.examinedOffset === undefined
+        ? []
+        : [{ item: "Crane", kind: "equipment" as const, lastExamined: isoDay(x.examinedOffset) }],
     wind: x.wind,
     groundBearing: x.groundBearing,
-    accessories: x.accessoryWll === undefined ? undefined : [{ item: "Shackle", kind: "shackle" as const, wllKg: x.accessoryWll, carries: "whole-load" as const }],
+    accessories:
+      x.accessoryWll === undefined
+        ? undefined
+        : [{ item: "Shackle", kind: "shackle" as const, wllKg: x.accessoryWll, carries: "whole-load" as const }],
   }));
 
 describe("a worse input never gives a better band", () => {
@@ -123,7 +142,10 @@ describe("a worse input never gives a better band", () => {
         notBetter(scoreFilter({ ...r, load: r.load + extra }).band, before);
         notBetter(scoreFilter({ ...r, frequency: r.frequency + df }).band, before);
         notBetter(scoreFilter({ ...r, twistDeg: Math.min(180, r.twistDeg + da) }).band, before);
-        notBetter(scoreFilter({ ...r, carryDistanceM: (r.carryDistanceM ?? 0) + dc }).band, scoreFilter({ ...r, carryDistanceM: r.carryDistanceM ?? 0 }).band);
+        notBetter(
+          scoreFilter({ ...r, carryDistanceM: (r.carryDistanceM ?? 0) + dc }).band,
+          scoreFilter({ ...r, carryDistanceM: r.carryDistanceM ?? 0 }).band,
+        );
       }),
     ));
   it("push: heavier, a steeper gradient in the same direction (up or down), further", () =>
@@ -132,8 +154,14 @@ describe("a worse input never gives a better band", () => {
         const before = scorePush(r).band;
         notBetter(scorePush({ ...r, mass: r.mass + extra }).band, before);
         const g = r.gradient;
-        notBetter(scorePush({ ...r, gradient: g >= 0 ? Math.min(1, g + steeper) : Math.max(-1, g - steeper) }).band, before);
-        notBetter(scorePush({ ...r, distanceM: (r.distanceM ?? 0) + further }).band, scorePush({ ...r, distanceM: r.distanceM ?? 0 }).band);
+        notBetter(
+          scorePush({ ...r, gradient: g >= 0 ? Math.min(1, g + steeper) : Math.max(-1, g - steeper) }).band,
+          before,
+        );
+        notBetter(
+          scorePush({ ...r, distanceM: (r.distanceM ?? 0) + further }).band,
+          scorePush({ ...r, distanceM: r.distanceM ?? 0 }).band,
+        );
       }),
     ));
   it("lift plan: a larger utilisation (heavier load or a smaller rated capacity)", () =>
@@ -146,13 +174,29 @@ describe("a worse input never gives a better band", () => {
     ));
   it("composite: a heavier or more frequent task", () =>
     fc.assert(
-      fc.property(fc.array(niosh, { minLength: 2, maxLength: 5 }), num(0.1, 9), fc.option(num(0, 4), { nil: undefined }), num(0, 20), num(0, 4), (tasks, durationHours, recoveryHours, extra, df) => {
-        const req: CompositeRequest = { method: "niosh-composite", units: "metric", durationHours, recoveryHours, tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })) };
-        const before = scoreComposite(req).band;
-        const bump = (f: (t: CompositeRequest["tasks"][number]) => CompositeRequest["tasks"][number]) => ({ ...req, tasks: [f(req.tasks[0]), ...req.tasks.slice(1)] });
-        notBetter(scoreComposite(bump((t) => ({ ...t, load: t.load + extra }))).band, before);
-        notBetter(scoreComposite(bump((t) => ({ ...t, frequency: t.frequency + df }))).band, before);
-      }),
+      fc.property(
+        fc.array(niosh, { minLength: 2, maxLength: 5 }),
+        num(0.1, 9),
+        fc.option(num(0, 4), { nil: undefined }),
+        num(0, 20),
+        num(0, 4),
+        (tasks, durationHours, recoveryHours, extra, df) => {
+          const req: CompositeRequest = {
+            method: "niosh-composite",
+            units: "metric",
+            durationHours,
+            recoveryHours,
+            tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })),
+          };
+          const before = scoreComposite(req).band;
+          const bump = (f: (t: CompositeRequest["tasks"][number]) => CompositeRequest["tasks"][number]) => ({
+            ...req,
+            tasks: [f(req.tasks[0]), ...req.tasks.slice(1)],
+          });
+          notBetter(scoreComposite(bump((t) => ({ ...t, load: t.load + extra }))).band, before);
+          notBetter(scoreComposite(bump((t) => ({ ...t, frequency: t.frequency + df }))).band, before);
+        },
+      ),
     ));
 });
 
@@ -162,7 +206,10 @@ describe("lineside: a deeper excavation or an added working condition never give
       fc.property(niosh, num(0, 100), fc.boolean(), (r, deeper, atOrigin) => {
         const end = atOrigin ? "origin" : "destination";
         const below = { ...r, [end]: { ...r[end], v: -Math.abs(r[end].v) - 1 } };
-        notBetter(scoreNiosh({ ...below, [end]: { ...below[end], v: below[end].v - deeper } }).band, scoreNiosh(below).band);
+        notBetter(
+          scoreNiosh({ ...below, [end]: { ...below[end], v: below[end].v - deeper } }).band,
+          scoreNiosh(below).band,
+        );
         expect(scoreNiosh(below).band).not.toBe("clear");
       }),
     ));
@@ -189,7 +236,14 @@ describe("a result that says the method cannot judge the operation is never Clea
   it("composite", () =>
     fc.assert(
       fc.property(fc.array(niosh, { minLength: 2, maxLength: 5 }), num(0.1, 9), (tasks, durationHours) =>
-        check(scoreComposite({ method: "niosh-composite", units: "metric", durationHours, tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })) })),
+        check(
+          scoreComposite({
+            method: "niosh-composite",
+            units: "metric",
+            durationHours,
+            tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })),
+          }),
+        ),
       ),
     ));
 });
@@ -216,7 +270,13 @@ const filterInputs = fc.record({
 });
 const task: fc.Arbitrary<Task> = fc
   .record({
-    operation: fc.constantFrom("lift" as const, "team-lift" as const, "carry" as const, "push" as const, "equipment" as const),
+    operation: fc.constantFrom(
+      "lift" as const,
+      "team-lift" as const,
+      "carry" as const,
+      "push" as const,
+      "equipment" as const,
+    ),
     quantity: fc.integer({ min: 1, max: 4 }),
     niosh: fc.record({
       origin: metricPosition,
@@ -269,7 +329,11 @@ describe("tasks", () => {
           for (const change of s.whatIf.together.changes) applied = applyChange(...applied, change);
           expect(rateTask(...applied).band).toBe(s.whatIf.together.band);
         }
-        expect(s.whatIf.reachesClear).toBe(s.band === "clear" || s.whatIf.suggestions.some((x) => x.band === "clear") || s.whatIf.together?.band === "clear");
+        expect(s.whatIf.reachesClear).toBe(
+          s.band === "clear" ||
+            s.whatIf.suggestions.some((x) => x.band === "clear") ||
+            s.whatIf.together?.band === "clear",
+        );
       }),
       { numRuns: 200 },
     ));

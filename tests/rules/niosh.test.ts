@@ -237,7 +237,13 @@ describe("bands and range — NIOSH interpretation (LI 1 and 3 [pub]; 2 is Heftw
 
   it("warns for each out-of-range variable by name", () => {
     const r = scoreNiosh(
-      ideal({ origin: { h: 30, v: 0, a: 140 }, destination: { h: 30, v: 180, a: 0 }, frequency: 16, durationHours: 9, controlAtDestination: true }),
+      ideal({
+        origin: { h: 30, v: 0, a: 140 },
+        destination: { h: 30, v: 180, a: 0 },
+        frequency: 16,
+        durationHours: 9,
+        controlAtDestination: true,
+      }),
     );
     const fields = r.warnings.map((w) => w.field);
     expect(fields).toEqual(expect.arrayContaining(["origin.a", "destination.v", "frequency", "durationHours"]));

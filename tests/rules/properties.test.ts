@@ -50,7 +50,8 @@ function assertSaneNumbers(value: unknown, path = "result"): void {
   if (typeof value === "number") {
     expect(Number.isFinite(value), `${path} is ${value}`).toBe(true);
     if (!path.endsWith("gradient") && !path.endsWith("slopeAngleDeg")) expect(value, path).toBeGreaterThanOrEqual(0);
-  } else if (value && typeof value === "object") for (const [k, v] of Object.entries(value)) assertSaneNumbers(v, `${path}.${k}`);
+  } else if (value && typeof value === "object")
+    for (const [k, v] of Object.entries(value)) assertSaneNumbers(v, `${path}.${k}`);
 }
 
 describe("no NaN, infinity or negative number for any valid input", () => {
@@ -59,10 +60,18 @@ describe("no NaN, infinity or negative number for any valid input", () => {
   it("push", () => fc.assert(fc.property(push, (r) => void assertSaneNumbers(score(r)))));
   it("composite", () =>
     fc.assert(
-      fc.property(fc.array(niosh, { minLength: 2, maxLength: 10 }), num(0.1, 12), (tasks, durationHours) =>
-        void assertSaneNumbers(
-          scoreComposite({ method: "niosh-composite", units: "metric", durationHours, tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })) }),
-        ),
+      fc.property(
+        fc.array(niosh, { minLength: 2, maxLength: 10 }),
+        num(0.1, 12),
+        (tasks, durationHours) =>
+          void assertSaneNumbers(
+            scoreComposite({
+              method: "niosh-composite",
+              units: "metric",
+              durationHours,
+              tasks: tasks.map((t, i) => ({ ...t, id: `t${i}` })),
+            }),
+          ),
       ),
     ));
 });
@@ -71,30 +80,100 @@ const index = (r: { index: number | null }) => r.index ?? Infinity;
 
 describe("a heavier load never lowers an index", () => {
   it("niosh", () =>
-    fc.assert(fc.property(niosh, num(0, 100), (r, extra) => void expect(index(scoreNiosh({ ...r, load: r.load + extra }))).toBeGreaterThanOrEqual(index(scoreNiosh(r))))));
+    fc.assert(
+      fc.property(
+        niosh,
+        num(0, 100),
+        (r, extra) =>
+          void expect(index(scoreNiosh({ ...r, load: r.load + extra }))).toBeGreaterThanOrEqual(index(scoreNiosh(r))),
+      ),
+    ));
   it("filter", () =>
-    fc.assert(fc.property(filter, num(0, 100), (r, extra) => void expect(index(scoreFilter({ ...r, load: r.load + extra }))).toBeGreaterThanOrEqual(index(scoreFilter(r))))));
+    fc.assert(
+      fc.property(
+        filter,
+        num(0, 100),
+        (r, extra) =>
+          void expect(index(scoreFilter({ ...r, load: r.load + extra }))).toBeGreaterThanOrEqual(index(scoreFilter(r))),
+      ),
+    ));
   it("push", () =>
     fc.assert(
-      fc.property(push, num(0, 500), (r, extra) =>
-        void expect(scorePush({ ...r, mass: r.mass + extra, gradient: Math.abs(r.gradient) }).index).toBeGreaterThanOrEqual(scorePush({ ...r, gradient: Math.abs(r.gradient) }).index),
+      fc.property(
+        push,
+        num(0, 500),
+        (r, extra) =>
+          void expect(
+            scorePush({ ...r, mass: r.mass + extra, gradient: Math.abs(r.gradient) }).index,
+          ).toBeGreaterThanOrEqual(scorePush({ ...r, gradient: Math.abs(r.gradient) }).index),
       ),
     ));
 });
 
 describe("more frequent, further, more twisted or longer never raises a limit", () => {
   const rwl = (r: NioshRequest) => scoreNiosh(r).origin.rwl;
-  it("niosh: frequency", () => fc.assert(fc.property(niosh, num(0, 10), (r, d) => void expect(rwl({ ...r, frequency: r.frequency + d })).toBeLessThanOrEqual(rwl(r) + 1e-12))));
+  it("niosh: frequency", () =>
+    fc.assert(
+      fc.property(
+        niosh,
+        num(0, 10),
+        (r, d) => void expect(rwl({ ...r, frequency: r.frequency + d })).toBeLessThanOrEqual(rwl(r) + 1e-12),
+      ),
+    ));
   it("niosh: horizontal reach", () =>
-    fc.assert(fc.property(niosh, num(0, 30), (r, d) => void expect(rwl({ ...r, origin: { ...r.origin, h: r.origin.h + d } })).toBeLessThanOrEqual(rwl(r) + 1e-12))));
+    fc.assert(
+      fc.property(
+        niosh,
+        num(0, 30),
+        (r, d) =>
+          void expect(rwl({ ...r, origin: { ...r.origin, h: r.origin.h + d } })).toBeLessThanOrEqual(rwl(r) + 1e-12),
+      ),
+    ));
   it("niosh: twist", () =>
-    fc.assert(fc.property(niosh, num(0, 90), (r, d) => void expect(rwl({ ...r, origin: { ...r.origin, a: Math.min(180, r.origin.a + d) } })).toBeLessThanOrEqual(rwl(r) + 1e-12))));
-  it("niosh: duration", () => fc.assert(fc.property(niosh, num(0, 8), (r, d) => void expect(rwl({ ...r, durationHours: r.durationHours + d })).toBeLessThanOrEqual(rwl(r) + 1e-12))));
+    fc.assert(
+      fc.property(
+        niosh,
+        num(0, 90),
+        (r, d) =>
+          void expect(rwl({ ...r, origin: { ...r.origin, a: Math.min(180, r.origin.a + d) } })).toBeLessThanOrEqual(
+            rwl(r) + 1e-12,
+          ),
+      ),
+    ));
+  it("niosh: duration", () =>
+    fc.assert(
+      fc.property(
+        niosh,
+        num(0, 8),
+        (r, d) => void expect(rwl({ ...r, durationHours: r.durationHours + d })).toBeLessThanOrEqual(rwl(r) + 1e-12),
+      ),
+    ));
   const guideline = (r: Parameters<typeof scoreFilter>[0]) => scoreFilter(r).guideline;
-  it("filter: frequency", () => fc.assert(fc.property(filter, num(0, 10), (r, d) => void expect(guideline({ ...r, frequency: r.frequency + d })).toBeLessThanOrEqual(guideline(r)))));
-  it("filter: reach", () => fc.assert(fc.property(filter, (r) => void expect(guideline({ ...r, reach: "extended" })).toBeLessThanOrEqual(guideline({ ...r, reach: "close" })))));
+  it("filter: frequency", () =>
+    fc.assert(
+      fc.property(
+        filter,
+        num(0, 10),
+        (r, d) => void expect(guideline({ ...r, frequency: r.frequency + d })).toBeLessThanOrEqual(guideline(r)),
+      ),
+    ));
+  it("filter: reach", () =>
+    fc.assert(
+      fc.property(
+        filter,
+        (r) =>
+          void expect(guideline({ ...r, reach: "extended" })).toBeLessThanOrEqual(guideline({ ...r, reach: "close" })),
+      ),
+    ));
   it("filter: twist", () =>
-    fc.assert(fc.property(filter, num(0, 90), (r, d) => void expect(guideline({ ...r, twistDeg: Math.min(180, r.twistDeg + d) })).toBeLessThanOrEqual(guideline(r)))));
+    fc.assert(
+      fc.property(
+        filter,
+        num(0, 90),
+        (r, d) =>
+          void expect(guideline({ ...r, twistDeg: Math.min(180, r.twistDeg + d) })).toBeLessThanOrEqual(guideline(r)),
+      ),
+    ));
 });
 
 describe("metric and US results of the same task agree within rounding", () => {
@@ -105,12 +184,40 @@ describe("metric and US results of the same task agree within rounding", () => {
   const inRange = fc.record({ h: num(26, 60), v: num(0, 74), a: num(0, 130) });
   it("lifting indices within 6 %", () =>
     fc.assert(
-      fc.property(inRange, num(0, 100), num(1, 40), num(0.2, 8), num(0.1, 8), coupling, (origin, rise, load, frequency, durationHours, c) => {
-        const destination = { ...origin, v: Math.min(74, origin.v + rise) };
-        const metric = scoreNiosh({ method: "niosh", units: "metric", load, origin, destination, frequency, durationHours, coupling: c, controlAtDestination: true });
-        const toIn = (p: typeof origin) => ({ h: p.h / CM_PER_IN, v: p.v / CM_PER_IN, a: p.a });
-        const us = scoreNiosh({ method: "niosh", units: "us", load: load * LB_PER_KG, origin: toIn(origin), destination: toIn(destination), frequency, durationHours, coupling: c, controlAtDestination: true });
-        expect(Math.abs(us.li! - metric.li!) / metric.li!).toBeLessThan(0.06);
-      }),
+      fc.property(
+        inRange,
+        num(0, 100),
+        num(1, 40),
+        num(0.2, 8),
+        num(0.1, 8),
+        coupling,
+        (origin, rise, load, frequency, durationHours, c) => {
+          const destination = { ...origin, v: Math.min(74, origin.v + rise) };
+          const metric = scoreNiosh({
+            method: "niosh",
+            units: "metric",
+            load,
+            origin,
+            destination,
+            frequency,
+            durationHours,
+            coupling: c,
+            controlAtDestination: true,
+          });
+          const toIn = (p: typeof origin) => ({ h: p.h / CM_PER_IN, v: p.v / CM_PER_IN, a: p.a });
+          const us = scoreNiosh({
+            method: "niosh",
+            units: "us",
+            load: load * LB_PER_KG,
+            origin: toIn(origin),
+            destination: toIn(destination),
+            frequency,
+            durationHours,
+            coupling: c,
+            controlAtDestination: true,
+          });
+          expect(Math.abs(us.li! - metric.li!) / metric.li!).toBeLessThan(0.06);
+        },
+      ),
     ));
 });

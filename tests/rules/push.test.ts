@@ -2,7 +2,14 @@
 import { describe, expect, it } from "vitest";
 import { GRAVITY, scorePush, type PushRequest } from "@/assessments/rules/push";
 
-const request = (over: Partial<PushRequest> = {}): PushRequest => ({ method: "push", mass: 400, gradient: 0, sex: "male", teamSize: 1, ...over });
+const request = (over: Partial<PushRequest> = {}): PushRequest => ({
+  method: "push",
+  mass: 400,
+  gradient: 0,
+  sex: "male",
+  teamSize: 1,
+  ...over,
+});
 
 describe("force from mass and gradient", () => {
   it("a well-maintained aid on level ground needs 2 % of the load: 400 kg → 8 kg [pub, HSE L23]", () => {
@@ -14,7 +21,10 @@ describe("force from mass and gradient", () => {
     expect(kgf).toBeCloseTo(41.2, 1);
   });
   it("the slope alone is 33.2 kgf (400 × sin(atan(1/12))) [calc]", () => {
-    expect(scorePush(request({ gradient: 1 / 12, rollingCoefficient: 0 })).sustainedForceN / GRAVITY).toBeCloseTo(33.2, 1);
+    expect(scorePush(request({ gradient: 1 / 12, rollingCoefficient: 0 })).sustainedForceN / GRAVITY).toBeCloseTo(
+      33.2,
+      1,
+    );
   });
   it("starting takes more than keeping moving (Heftwise policy: twice the rolling resistance)", () => {
     const r = scorePush(request());

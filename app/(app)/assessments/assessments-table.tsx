@@ -46,7 +46,9 @@ const columns: ColumnDef<Row, unknown>[] = [
       return (
         <>
           <span className="whitespace-nowrap">{reviewDate}</span>{" "}
-          <span className="inline-block whitespace-nowrap rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">Review due</span>
+          <span className="inline-block whitespace-nowrap rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">
+            Review due
+          </span>
         </>
       );
     },
@@ -54,11 +56,21 @@ const columns: ColumnDef<Row, unknown>[] = [
   { id: "updatedAt", header: "Last saved", cell: ({ row }) => row.original.updatedAt.slice(0, 16).replace("T", " ") },
 ];
 
-export function AssessmentsTable({ jobs, authors }: { jobs: { id: string; name: string }[]; authors: { id: string; name: string }[] }) {
+export function AssessmentsTable({
+  jobs,
+  authors,
+}: {
+  jobs: { id: string; name: string }[];
+  authors: { id: string; name: string }[];
+}) {
   const filters: FilterSpec[] = [
     { key: "status", label: "Status", options: Object.entries(STATUS).map(([value, label]) => ({ value, label })) },
     { key: "jobId", label: "Job", options: jobs.map((j) => ({ value: j.id, label: j.name })) },
-    { key: "worstBand", label: "Worst band", options: ["clear", "watch", "act", "stop"].map((b) => ({ value: b, label: b[0].toUpperCase() + b.slice(1) })) },
+    {
+      key: "worstBand",
+      label: "Worst band",
+      options: ["clear", "watch", "act", "stop"].map((b) => ({ value: b, label: b[0].toUpperCase() + b.slice(1) })),
+    },
     { key: "authorId", label: "Author", options: authors.map((a) => ({ value: a.id, label: a.name })) },
     { key: "reviewDue", label: "Review", options: [{ value: "30", label: "Due within 30 days" }] },
   ];

@@ -13,7 +13,9 @@ export default async function AssessmentsPage() {
   const [jobs, authors] = await Promise.all([listJobs(actor), listAuthors(actor)]);
   return (
     <div className="space-y-4">
-      <PageHeader title="Assessments">{can(actor, "assessments:write") && <ActionLink href="/assessments/new">New assessment</ActionLink>}</PageHeader>
+      <PageHeader title="Assessments">
+        {can(actor, "assessments:write") && <ActionLink href="/assessments/new">New assessment</ActionLink>}
+      </PageHeader>
       <AssessmentsTable jobs={jobs.map((j) => ({ id: j.id, name: j.name }))} authors={authors} />
     </div>
   );

@@ -8,8 +8,13 @@ export function EmailSheetButton({ revisionId }: { revisionId: string }) {
   const send = async () => {
     setState("Sending…");
     try {
-      const body = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/briefing-sheet/email`, { method: "POST" });
-      setState(body.mail?.status === "sent" ? "Sent to your e-mail." : "Could not send: try again when the signal is better.");
+      const body = await apiRequest<{ mail?: { status: string } }>(
+        `/api/v1/revisions/${revisionId}/briefing-sheet/email`,
+        { method: "POST" },
+      );
+      setState(
+        body.mail?.status === "sent" ? "Sent to your e-mail." : "Could not send: try again when the signal is better.",
+      );
     } catch (err) {
       setState(messageOf(err));
     }

@@ -23,9 +23,15 @@ export default async function BriefingsPage() {
             {job.accessPoint ? `Access: ${job.accessPoint}. ` : ""}
             {job.siteContactName ? `Site contact: ${job.siteContactName} ${job.siteContactPhone ?? ""}` : ""}
           </p>
-          {revisions.length === 0 && <p className="text-muted">No approved assessment for this job yet: there is nothing to brief from.</p>}
+          {revisions.length === 0 && (
+            <p className="text-muted">No approved assessment for this job yet: there is nothing to brief from.</p>
+          )}
           {revisions.map((r) => (
-            <article key={r.revisionId} className="space-y-2 rounded border border-rule bg-paper p-3" data-testid={`briefable-${r.revisionId}`}>
+            <article
+              key={r.revisionId}
+              className="space-y-2 rounded border border-rule bg-paper p-3"
+              data-testid={`briefable-${r.revisionId}`}
+            >
               <div className="flex flex-wrap items-center gap-2">
                 <h3 className="text-lg font-bold">{r.title}</h3>
                 <BandChip band={r.worstBand as Band | null} />
@@ -38,7 +44,11 @@ export default async function BriefingsPage() {
                 <p className="text-sm">
                   Briefed today:{" "}
                   {r.briefingsToday.map((b) => (
-                    <Link key={b.id} href={`/briefings/record/${b.id}`} className="mr-2 font-bold text-accent underline">
+                    <Link
+                      key={b.id}
+                      href={`/briefings/record/${b.id}`}
+                      className="mr-2 font-bold text-accent underline"
+                    >
                       {b.startedAt.toISOString().slice(11, 16)} at {b.place}
                       {b.completedAt ? "" : " (not signed off)"}
                     </Link>
@@ -46,13 +56,22 @@ export default async function BriefingsPage() {
                 </p>
               )}
               <div className="flex flex-wrap gap-2">
-                <Link href={`/briefings/${r.revisionId}`} className="rounded bg-accent px-5 py-3 text-lg font-bold text-white">
+                <Link
+                  href={`/briefings/${r.revisionId}`}
+                  className="rounded bg-accent px-5 py-3 text-lg font-bold text-white"
+                >
                   Brief the gang
                 </Link>
-                <Link href={`/briefings/${r.revisionId}/site-change`} className="rounded border border-band-act bg-white px-4 py-3 font-bold text-band-act">
+                <Link
+                  href={`/briefings/${r.revisionId}/site-change`}
+                  className="rounded border border-band-act bg-white px-4 py-3 font-bold text-band-act"
+                >
                   Report a site change
                 </Link>
-                <a href={`/api/v1/revisions/${r.revisionId}/briefing-sheet`} className="rounded border border-rule bg-white px-4 py-3 font-bold">
+                <a
+                  href={`/api/v1/revisions/${r.revisionId}/briefing-sheet`}
+                  className="rounded border border-rule bg-white px-4 py-3 font-bold"
+                >
                   Briefing sheet (PDF)
                 </a>
                 <EmailSheetButton revisionId={r.revisionId} />

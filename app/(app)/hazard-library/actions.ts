@@ -26,6 +26,10 @@ export async function restoreStarterAction() {
   return runAction(async () => {
     const added = await restoreStarter(await getActor());
     revalidatePath("/hazard-library");
-    return { message: added ? `${added} starter hazard${added === 1 ? "" : "s"} added.` : "Every starter hazard is already in the library." };
+    return {
+      message: added
+        ? `${added} starter hazard${added === 1 ? "" : "s"} added.`
+        : "Every starter hazard is already in the library.",
+    };
   });
 }

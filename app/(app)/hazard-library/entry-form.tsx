@@ -13,12 +13,24 @@ import { deleteEntryAction, saveEntryAction } from "./actions";
 const RATINGS = [1, 2, 3, 4, 5];
 
 /** Likelihood and severity, before or after the controls, with their product. */
-function RatingPair({ when, register, rating }: { when: "before" | "after"; register: UseFormRegister<LibraryEntryInput>; rating: number }) {
+function RatingPair({
+  when,
+  register,
+  rating,
+}: {
+  when: "before" | "after";
+  register: UseFormRegister<LibraryEntryInput>;
+  rating: number;
+}) {
   const field = (kind: "likelihood" | "severity") => `${kind}${when === "before" ? "Before" : "After"}` as const;
   return (
     <div className="grid grid-cols-3 gap-3 sm:max-w-lg">
       {(["likelihood", "severity"] as const).map((kind) => (
-        <SelectField key={kind} label={`${kind === "likelihood" ? "Likelihood" : "Severity"} ${when}`} {...register(field(kind), { valueAsNumber: true })}>
+        <SelectField
+          key={kind}
+          label={`${kind === "likelihood" ? "Likelihood" : "Severity"} ${when}`}
+          {...register(field(kind), { valueAsNumber: true })}
+        >
           {RATINGS.map((r) => (
             <option key={r}>{r}</option>
           ))}
@@ -38,7 +50,15 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
   const [confirm, setConfirm] = useState(false);
   const { register, handleSubmit, setError, control, formState } = useForm<LibraryEntryInput>({
     resolver: zodResolver(libraryEntrySchema) as Resolver<LibraryEntryInput>,
-    defaultValues: initial ?? { hazard: "", whoIsAtRisk: "", likelihoodBefore: 3, severityBefore: 3, controls: [{ text: "", level: "engineering" }], likelihoodAfter: 2, severityAfter: 3 },
+    defaultValues: initial ?? {
+      hazard: "",
+      whoIsAtRisk: "",
+      likelihoodBefore: 3,
+      severityBefore: 3,
+      controls: [{ text: "", level: "engineering" }],
+      likelihoodAfter: 2,
+      severityAfter: 3,
+    },
   });
   const controls = useFieldArray({ control, name: "controls" });
   const values = useWatch({ control });
@@ -52,7 +72,8 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
       router.refresh();
       return;
     }
-    for (const issue of result.issues ?? []) setError(issue.path as keyof LibraryEntryInput, { message: issue.message });
+    for (const issue of result.issues ?? [])
+      setError(issue.path as keyof LibraryEntryInput, { message: issue.message });
     setFailure(result.message);
   });
   const onDelete = async () => {
@@ -65,7 +86,12 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
   const rating = (l?: number, s?: number) => riskRating(Number(l), Number(s));
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Library hazard" className="space-y-4 rounded-lg border border-rule bg-white p-4">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label="Library hazard"
+      className="space-y-4 rounded-lg border border-rule bg-white p-4"
+    >
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
       <div className="grid gap-3 md:grid-cols-2">
         <TextField label="Hazard" error={e.hazard?.message} {...register("hazard")} />
@@ -74,10 +100,16 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
       <RatingPair when="before" register={register} rating={rating(values.likelihoodBefore, values.severityBefore)} />
       <fieldset className="space-y-2">
         <legend className="font-bold">Controls, by the hierarchy of control</legend>
-        {e.controls?.root?.message || e.controls?.message ? <FormMessage tone="error">{e.controls?.root?.message ?? e.controls?.message}</FormMessage> : null}
+        {e.controls?.root?.message || e.controls?.message ? (
+          <FormMessage tone="error">{e.controls?.root?.message ?? e.controls?.message}</FormMessage>
+        ) : null}
         {controls.fields.map((field, j) => (
           <div key={field.id} className="grid grid-cols-[1fr_12rem_auto] items-end gap-2">
-            <TextField label={`Control ${j + 1}`} error={e.controls?.[j]?.text?.message} {...register(`controls.${j}.text`)} />
+            <TextField
+              label={`Control ${j + 1}`}
+              error={e.controls?.[j]?.text?.message}
+              {...register(`controls.${j}.text`)}
+            />
             <SelectField label="Level" {...register(`controls.${j}.level`)}>
               {CONTROL_LEVELS.map((l) => (
                 <option key={l} value={l}>
@@ -108,7 +140,9 @@ export function EntryForm({ entryId, initial }: { entryId: string | null; initia
               <Dialog.Overlay className="fixed inset-0 bg-black/40" />
               <Dialog.Content className="fixed left-1/2 top-1/2 w-[min(28rem,92vw)] -translate-x-1/2 -translate-y-1/2 space-y-3 rounded-lg bg-white p-5 shadow-lg">
                 <Dialog.Title className="text-lg font-bold">Remove this hazard from the library?</Dialog.Title>
-                <Dialog.Description className="text-sm">Assessments that already copied it keep their own copy.</Dialog.Description>
+                <Dialog.Description className="text-sm">
+                  Assessments that already copied it keep their own copy.
+                </Dialog.Description>
                 <div className="flex justify-end gap-2">
                   <Dialog.Close asChild>
                     <SecondaryButton type="button">Keep it</SecondaryButton>

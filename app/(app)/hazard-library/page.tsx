@@ -15,13 +15,18 @@ export default async function HazardLibraryPage() {
   const manage = can(actor, "hazard-library:manage");
   return (
     <div className="space-y-4">
-      <PageHeader title="Hazard library">{manage && <ActionLink href="/hazard-library/new">New hazard</ActionLink>}</PageHeader>
+      <PageHeader title="Hazard library">
+        {manage && <ActionLink href="/hazard-library/new">New hazard</ActionLink>}
+      </PageHeader>
       <p className="max-w-3xl text-sm text-muted">
-        Hazards of lineside work with suggested controls by the hierarchy of control. Advisers copy them into an assessment&rsquo;s hazards step and change them there
-        for the job; {manage ? "you maintain the library for the organisation." : "admins maintain the library."}
+        Hazards of lineside work with suggested controls by the hierarchy of control. Advisers copy them into an
+        assessment&rsquo;s hazards step and change them there for the job;{" "}
+        {manage ? "you maintain the library for the organisation." : "admins maintain the library."}
       </p>
       {manage && <RestoreStarterButton />}
-      {entries.length === 0 && <p className="rounded border border-dashed border-rule bg-white p-4 text-muted">The library is empty.</p>}
+      {entries.length === 0 && (
+        <p className="rounded border border-dashed border-rule bg-white p-4 text-muted">The library is empty.</p>
+      )}
       <ul className="grid gap-3 lg:grid-cols-2">
         {entries.map((e) => (
           <li key={e.id} className="space-y-2 rounded-lg border border-rule bg-white p-4" data-testid="library-entry">
@@ -34,7 +39,8 @@ export default async function HazardLibraryPage() {
               )}
             </div>
             <p className="text-sm text-muted">
-              {e.whoIsAtRisk} · rating {riskRating(e.likelihoodBefore, e.severityBefore)} before, {riskRating(e.likelihoodAfter, e.severityAfter)} after
+              {e.whoIsAtRisk} · rating {riskRating(e.likelihoodBefore, e.severityBefore)} before,{" "}
+              {riskRating(e.likelihoodAfter, e.severityAfter)} after
             </p>
             <ul className="space-y-0.5 text-sm">
               {e.controls.map((c, i) => (

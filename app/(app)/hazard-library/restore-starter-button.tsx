@@ -10,10 +10,16 @@ export function RestoreStarterButton() {
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
   return (
     <div className="space-y-2">
-      <SecondaryButton type="button" disabled={pending} onClick={() => start(async () => {
-        const result = await restoreStarterAction();
-        setMessage({ ok: result.ok, text: result.message ?? "" });
-      })}>
+      <SecondaryButton
+        type="button"
+        disabled={pending}
+        onClick={() =>
+          start(async () => {
+            const result = await restoreStarterAction();
+            setMessage({ ok: result.ok, text: result.message ?? "" });
+          })
+        }
+      >
         {pending ? "Adding…" : "Add the starter hazards"}
       </SecondaryButton>
       {message && <FormMessage tone={message.ok ? "success" : "error"}>{message.text}</FormMessage>}

@@ -8,11 +8,20 @@ import { FormMessage, PrimaryButton, TextField } from "@/app/_components/form";
 import { jobSchema, type JobInput } from "@/assessments/jobs/schemas";
 import { saveJobAction } from "./actions";
 
-export function JobForm({ jobId, initial }: { jobId: string | null; initial?: Partial<Record<keyof JobInput, string | null>> }) {
+export function JobForm({
+  jobId,
+  initial,
+}: {
+  jobId: string | null;
+  initial?: Partial<Record<keyof JobInput, string | null>>;
+}) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
   const defaults = Object.fromEntries(Object.entries(initial ?? {}).map(([k, v]) => [k, v ?? ""])) as JobInput;
-  const { register, handleSubmit, setError, formState } = useForm<JobInput>({ resolver: zodResolver(jobSchema) as unknown as Resolver<JobInput>, defaultValues: defaults });
+  const { register, handleSubmit, setError, formState } = useForm<JobInput>({
+    resolver: zodResolver(jobSchema) as unknown as Resolver<JobInput>,
+    defaultValues: defaults,
+  });
   const e = formState.errors;
 
   const onSubmit = handleSubmit(async (values) => {
@@ -28,7 +37,12 @@ export function JobForm({ jobId, initial }: { jobId: string | null; initial?: Pa
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Job" className="space-y-4 rounded-lg border border-rule bg-white p-4">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label="Job"
+      className="space-y-4 rounded-lg border border-rule bg-white p-4"
+    >
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
       <div className="grid gap-3 md:grid-cols-2">
         <TextField label="Job name" error={e.name?.message} {...register("name")} />
@@ -43,10 +57,23 @@ export function JobForm({ jobId, initial }: { jobId: string | null; initial?: Pa
       </fieldset>
       <fieldset className="grid gap-3 md:grid-cols-2">
         <legend className="font-bold">Emergency</legend>
-        <TextField label="Nearest hospital with an emergency department" error={e.nearestHospital?.message} {...register("nearestHospital")} />
-        <TextField label="Emergency arrangements" error={e.emergencyArrangements?.message} {...register("emergencyArrangements")} />
+        <TextField
+          label="Nearest hospital with an emergency department"
+          error={e.nearestHospital?.message}
+          {...register("nearestHospital")}
+        />
+        <TextField
+          label="Emergency arrangements"
+          error={e.emergencyArrangements?.message}
+          {...register("emergencyArrangements")}
+        />
         <TextField label="Site contact" error={e.siteContactName?.message} {...register("siteContactName")} />
-        <TextField label="Site contact phone" type="tel" error={e.siteContactPhone?.message} {...register("siteContactPhone")} />
+        <TextField
+          label="Site contact phone"
+          type="tel"
+          error={e.siteContactPhone?.message}
+          {...register("siteContactPhone")}
+        />
       </fieldset>
       <PrimaryButton type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Saving…" : "Save job"}

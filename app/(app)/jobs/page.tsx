@@ -13,7 +13,9 @@ export default async function JobsPage() {
   const rows = await listJobs(actor);
   return (
     <div className="space-y-4">
-      <PageHeader title="Jobs">{can(actor, "jobs:write") && <ActionLink href="/jobs/new">New job</ActionLink>}</PageHeader>
+      <PageHeader title="Jobs">
+        {can(actor, "jobs:write") && <ActionLink href="/jobs/new">New job</ActionLink>}
+      </PageHeader>
       {rows.length === 0 ? (
         <EmptyState>No jobs yet.</EmptyState>
       ) : (

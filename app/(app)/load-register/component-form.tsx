@@ -33,16 +33,46 @@ export function ComponentForm({ componentId, initial }: { componentId: string | 
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Component" className="space-y-4 rounded-lg border border-rule bg-white p-4">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label="Component"
+      className="space-y-4 rounded-lg border border-rule bg-white p-4"
+    >
       {outcome && <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>}
       <div className="grid gap-3 md:grid-cols-2">
         <TextField label="Name" error={e.name?.message} {...register("name")} />
-        <TextField label="Mass (kg)" type="number" step="any" inputMode="decimal" error={e.massKg?.message} {...register("massKg", { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) })} />
+        <TextField
+          label="Mass (kg)"
+          type="number"
+          step="any"
+          inputMode="decimal"
+          error={e.massKg?.message}
+          {...register("massKg", { setValueAs: (v: string) => (v === "" ? Number.NaN : Number(v)) })}
+        />
       </div>
       <div className="grid grid-cols-3 gap-3">
-        <TextField label="Length (mm)" type="number" step="1" error={e.lengthMm?.message} {...register("lengthMm", optionalNumber)} />
-        <TextField label="Width (mm)" type="number" step="1" error={e.widthMm?.message} {...register("widthMm", optionalNumber)} />
-        <TextField label="Height (mm)" type="number" step="1" error={e.heightMm?.message} {...register("heightMm", optionalNumber)} />
+        <TextField
+          label="Length (mm)"
+          type="number"
+          step="1"
+          error={e.lengthMm?.message}
+          {...register("lengthMm", optionalNumber)}
+        />
+        <TextField
+          label="Width (mm)"
+          type="number"
+          step="1"
+          error={e.widthMm?.message}
+          {...register("widthMm", optionalNumber)}
+        />
+        <TextField
+          label="Height (mm)"
+          type="number"
+          step="1"
+          error={e.heightMm?.message}
+          {...register("heightMm", optionalNumber)}
+        />
       </div>
       <div className="grid gap-3 md:grid-cols-2">
         <SelectField label="Grip" error={e.grip?.message} {...register("grip")}>

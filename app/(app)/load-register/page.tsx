@@ -20,7 +20,10 @@ export default async function LoadRegisterPage() {
           </>
         )}
       </PageHeader>
-      <p className="text-sm text-muted">Every component your gangs handle, with its mass and where the mass came from. Estimated masses are flagged wherever they are used.</p>
+      <p className="text-sm text-muted">
+        Every component your gangs handle, with its mass and where the mass came from. Estimated masses are flagged
+        wherever they are used.
+      </p>
       <RegisterTable />
     </div>
   );

@@ -23,7 +23,11 @@ const columns: ColumnDef<Component, unknown>[] = [
     header: "L × W × H (mm)",
     cell: ({ row }) => {
       const c = row.original;
-      return <span className="tabular-nums">{c.lengthMm && c.widthMm && c.heightMm ? `${c.lengthMm} × ${c.widthMm} × ${c.heightMm}` : "—"}</span>;
+      return (
+        <span className="tabular-nums">
+          {c.lengthMm && c.widthMm && c.heightMm ? `${c.lengthMm} × ${c.widthMm} × ${c.heightMm}` : "—"}
+        </span>
+      );
     },
   },
   { id: "grip", header: "Grip", cell: ({ row }) => GRIP[row.original.grip] },
@@ -31,7 +35,11 @@ const columns: ColumnDef<Component, unknown>[] = [
     id: "massSource",
     header: "Mass from",
     cell: ({ row }) =>
-      row.original.massSource === "estimated" ? <span className="rounded bg-band-watch px-2 py-0.5 font-bold text-white">Estimated — confirm</span> : SOURCE[row.original.massSource],
+      row.original.massSource === "estimated" ? (
+        <span className="rounded bg-band-watch px-2 py-0.5 font-bold text-white">Estimated — confirm</span>
+      ) : (
+        SOURCE[row.original.massSource]
+      ),
   },
   { id: "notes", header: "Notes", cell: ({ row }) => <span className="text-muted">{row.original.notes ?? ""}</span> },
 ];
@@ -47,7 +55,11 @@ export function RegisterTable() {
       defaultSort="name"
       sortKeys={{ name: ["name", "-name"], massKg: ["massKg", "-massKg"] }}
       filters={[
-        { key: "massSource", label: "Mass from", options: Object.entries(SOURCE).map(([value, label]) => ({ value, label })) },
+        {
+          key: "massSource",
+          label: "Mass from",
+          options: Object.entries(SOURCE).map(([value, label]) => ({ value, label })),
+        },
         { key: "grip", label: "Grip", options: Object.entries(GRIP).map(([value, label]) => ({ value, label })) },
       ]}
     />

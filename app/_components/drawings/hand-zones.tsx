@@ -18,8 +18,21 @@ export function HandZonesDrawing({ highlight }: { highlight?: (typeof ZONES)[num
       <title id="hz-title">Hand-height zones, and how H and V are measured</title>
       {BANDS.map((b, i) => (
         <g key={b.zone}>
-          <rect x="0" y={b.top} width="340" height={b.bottom - b.top} fill={b.zone === highlight ? "#cdeae6" : i % 2 ? "#f1eee5" : "#faf8f2"} />
-          <text x="336" y={(b.top + b.bottom) / 2 + 4} textAnchor="end" fontSize="10" fill="#17201c" fontWeight={b.zone === highlight ? 700 : 400}>
+          <rect
+            x="0"
+            y={b.top}
+            width="340"
+            height={b.bottom - b.top}
+            fill={b.zone === highlight ? "#cdeae6" : i % 2 ? "#f1eee5" : "#faf8f2"}
+          />
+          <text
+            x="336"
+            y={(b.top + b.bottom) / 2 + 4}
+            textAnchor="end"
+            fontSize="10"
+            fill="#17201c"
+            fontWeight={b.zone === highlight ? 700 : 400}
+          >
             {ZONE_LABELS[b.zone]}
           </text>
         </g>

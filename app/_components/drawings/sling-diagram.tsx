@@ -6,7 +6,21 @@ import { fmt } from "@/assessments/rules/format";
  * the hitch — straight legs to the lifting points, a choke round the load, a basket or an endless
  * sling passing under it. A 4-leg sling shows four legs, with a note that only three share the load.
  */
-export function SlingDiagram({ legs, angleDeg, tension, legWll, load, hitch = "straight" }: { legs: number; angleDeg: number; tension: number; legWll: number; load: number; hitch?: Hitch }) {
+export function SlingDiagram({
+  legs,
+  angleDeg,
+  tension,
+  legWll,
+  load,
+  hitch = "straight",
+}: {
+  legs: number;
+  angleDeg: number;
+  tension: number;
+  legWll: number;
+  load: number;
+  hitch?: Hitch;
+}) {
   const hook = { x: 200, y: 40 };
   const drop = 150;
   const spread = Math.tan((Math.min(Math.max(angleDeg, 0), 60) * Math.PI) / 180) * drop;
@@ -23,11 +37,18 @@ export function SlingDiagram({ legs, angleDeg, tension, legWll, load, hitch = "s
           ? [hook.x - spread, hook.x, hook.x + spread]
           : [hook.x - spread, hook.x - spread / 3, hook.x + spread / 3, hook.x + spread];
   const over = !single && tension > legWll * (hitch === "choked" ? 0.8 : 1);
-  const loadWidth = Math.max(120, (ends[ends.length - 1] - ends[0]) + 40);
+  const loadWidth = Math.max(120, ends[ends.length - 1] - ends[0] + 40);
   const stroke = over ? "#b83a0b" : "#16302b";
   const top = single ? hook.y + 4 : hook.y;
   return (
-    <svg viewBox="0 0 400 290" role="img" aria-labelledby="sling-title" className="w-full max-w-md" data-testid="sling-diagram" data-hitch={hitch}>
+    <svg
+      viewBox="0 0 400 290"
+      role="img"
+      aria-labelledby="sling-title"
+      className="w-full max-w-md"
+      data-testid="sling-diagram"
+      data-hitch={hitch}
+    >
       <title id="sling-title">{`${single ? "One sling" : `${legs}-leg sling`}, ${HITCH_LABELS[hitch]}, ${fmt(angleDeg, 1)}° from vertical, ${fmt(tension, 0)} kg per ${single ? "part" : "leg"}`}</title>
       {/* hook */}
       <path d={`M${hook.x} 8 v14 a10 10 0 1 1 -10 10`} stroke="#17201c" strokeWidth="4" fill="none" />
@@ -48,9 +69,25 @@ export function SlingDiagram({ legs, angleDeg, tension, legWll, load, hitch = "s
       )}
       {ends.map((x, i) => (
         <g key={i}>
-          <line x1={single ? hook.x + (x < hook.x ? -4 : 4) : hook.x} y1={top} x2={x} y2={bottom} stroke={stroke} strokeWidth="4" />
-          {hitch === "choked" || hitch === "endless-choked" ? <circle cx={x} cy={bottom + 8} r="8" stroke={stroke} strokeWidth="3" fill="none" data-testid="choke" /> : null}
-          <text x={(hook.x + x) / 2 + (x < hook.x ? -8 : 8)} y={(hook.y + bottom) / 2 + 30} fontSize="12" textAnchor={x < hook.x ? "end" : "start"} fill={over ? "#b83a0b" : "#17201c"} fontWeight="700">
+          <line
+            x1={single ? hook.x + (x < hook.x ? -4 : 4) : hook.x}
+            y1={top}
+            x2={x}
+            y2={bottom}
+            stroke={stroke}
+            strokeWidth="4"
+          />
+          {hitch === "choked" || hitch === "endless-choked" ? (
+            <circle cx={x} cy={bottom + 8} r="8" stroke={stroke} strokeWidth="3" fill="none" data-testid="choke" />
+          ) : null}
+          <text
+            x={(hook.x + x) / 2 + (x < hook.x ? -8 : 8)}
+            y={(hook.y + bottom) / 2 + 30}
+            fontSize="12"
+            textAnchor={x < hook.x ? "end" : "start"}
+            fill={over ? "#b83a0b" : "#17201c"}
+            fontWeight="700"
+          >
             {legs === 4 && !single && (i === 1 || i === 2) ? "" : `${fmt(tension, 0)} kg`}
           </text>
         </g>
@@ -58,7 +95,13 @@ export function SlingDiagram({ legs, angleDeg, tension, legWll, load, hitch = "s
       <rect x={hook.x - loadWidth / 2} y={bottom} width={loadWidth} height="50" rx="4" fill="#8a5a0b" />
       {single && (
         // The sling passes under the load from one part to the other.
-        <path d={`M${ends[0]} ${bottom} V${bottom + 56} H${ends[1]} V${bottom}`} stroke={stroke} strokeWidth="4" fill="none" data-testid="under-load" />
+        <path
+          d={`M${ends[0]} ${bottom} V${bottom + 56} H${ends[1]} V${bottom}`}
+          stroke={stroke}
+          strokeWidth="4"
+          fill="none"
+          data-testid="under-load"
+        />
       )}
       <text x={hook.x} y={bottom + 30} fontSize="14" textAnchor="middle" fill="#fff" fontWeight="700">
         {fmt(load, 0)} kg

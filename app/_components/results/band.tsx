@@ -18,9 +18,18 @@ const STYLE: Record<Band, string> = {
 /** Heftwise's band marker: colour and the word, never colour alone. */
 export function BandChip({ band, large = false }: { band: Band | null; large?: boolean }) {
   if (!band)
-    return <span className={`inline-block rounded border border-dashed border-muted px-2 py-0.5 font-bold text-muted ${large ? "text-lg" : "text-sm"}`}>Not scored</span>;
+    return (
+      <span
+        className={`inline-block rounded border border-dashed border-muted px-2 py-0.5 font-bold text-muted ${large ? "text-lg" : "text-sm"}`}
+      >
+        Not scored
+      </span>
+    );
   return (
-    <span data-band={band} className={`inline-block rounded px-2 py-0.5 font-bold uppercase tracking-wide ${STYLE[band]} ${large ? "px-3 py-1 text-lg" : "text-sm"}`}>
+    <span
+      data-band={band}
+      className={`inline-block rounded px-2 py-0.5 font-bold uppercase tracking-wide ${STYLE[band]} ${large ? "px-3 py-1 text-lg" : "text-sm"}`}
+    >
       {BAND_LABELS[band]}
     </span>
   );

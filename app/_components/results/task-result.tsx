@@ -55,7 +55,9 @@ function WhatIfList({ whatIf }: { whatIf: WhatIf }) {
   return (
     <div className="mt-3 rounded border border-rule bg-paper p-2 text-sm" data-testid="what-if">
       <h4 className="font-bold">What would bring it to clear</h4>
-      <p className="text-xs text-muted">Each change below was re-scored by the same rules; the band is what it reaches.</p>
+      <p className="text-xs text-muted">
+        Each change below was re-scored by the same rules; the band is what it reaches.
+      </p>
       {whatIf.suggestions.length > 0 && (
         <ul className="mt-1 space-y-1">
           {whatIf.suggestions.map((s) => (
@@ -95,7 +97,11 @@ export function TaskResult({ score }: { score: TaskScore }) {
       {score.load !== null && (
         <p className="mt-2 text-sm">
           Load <strong className="tabular-nums">{f(score.load)} kg</strong>
-          {score.estimatedMass && <span className="ml-2 rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">Estimated mass — confirm by weighing</span>}
+          {score.estimatedMass && (
+            <span className="ml-2 rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">
+              Estimated mass — confirm by weighing
+            </span>
+          )}
         </p>
       )}
       {score.incomplete.length > 0 && (
@@ -114,7 +120,12 @@ export function TaskResult({ score }: { score: TaskScore }) {
               ["RWL (kg)", niosh.li === null ? "— (cannot judge)" : f(niosh.limit)],
               ["HM · VM · DM", `${f(niosh.origin.hm)} · ${f(niosh.origin.vm)} · ${f(niosh.origin.dm)}`],
               ["AM · FM · CM", `${f(niosh.origin.am)} · ${f(niosh.origin.fm)} · ${f(niosh.origin.cm)}`],
-              ...(niosh.destination ? ([["At destination: RWL · LI", `${f(niosh.destination.rwl)} kg · ${f(niosh.destination.li)}`]] as [string, string][]) : []),
+              ...(niosh.destination
+                ? ([["At destination: RWL · LI", `${f(niosh.destination.rwl)} kg · ${f(niosh.destination.li)}`]] as [
+                    string,
+                    string,
+                  ][])
+                : []),
             ]}
           />
           <Reasons reasons={niosh.reasons} warnings={niosh.warnings} />
@@ -122,15 +133,22 @@ export function TaskResult({ score }: { score: TaskScore }) {
       )}
       {filter && (
         <div className="mt-3">
-          <h4 className="font-bold">Guideline weights{filter.inputs.teamSize > 1 ? ", team handling" : ""}{filter.inputs.carryDistanceM ? ", carrying" : ""}</h4>
+          <h4 className="font-bold">
+            Guideline weights{filter.inputs.teamSize > 1 ? ", team handling" : ""}
+            {filter.inputs.carryDistanceM ? ", carrying" : ""}
+          </h4>
           <Factors
             rows={[
               ["Index", f(filter.index)],
               ["Guideline (kg)", f(filter.guideline)],
               ["Table figure (kg)", f(filter.baseGuideline)],
               ["Kept after reductions", `${f(filter.reductionFactor * 100, 0)} %`],
-              ...(filter.inputs.teamSize > 1 ? ([["Each person carries (kg)", f(filter.perPersonLoad)]] as [string, string][]) : []),
-              ...(filter.cumulativeMassKg !== null ? ([["Mass per shift (kg)", f(filter.cumulativeMassKg, 0)]] as [string, string][]) : []),
+              ...(filter.inputs.teamSize > 1
+                ? ([["Each person carries (kg)", f(filter.perPersonLoad)]] as [string, string][])
+                : []),
+              ...(filter.cumulativeMassKg !== null
+                ? ([["Mass per shift (kg)", f(filter.cumulativeMassKg, 0)]] as [string, string][])
+                : []),
             ]}
           />
           <Reasons reasons={filter.reasons} warnings={filter.warnings} />
@@ -165,9 +183,16 @@ export function TaskResult({ score }: { score: TaskScore }) {
               ["Utilisation", `${f(lift.utilisation * 100, 0)} %`],
               ["Leg tension (kg)", f(lift.legTension)],
               ["Sling rated (kg)", `${f(lift.slingWll)} ${lift.slingOk ? "— passes" : "— FAILS"}`],
-              ...(lift.inputs.sling.markedWll !== undefined && lift.computedSlingWll !== lift.slingWll ? ([["Computed, above the marked limit (kg)", f(lift.computedSlingWll)]] as [string, string][]) : []),
+              ...(lift.inputs.sling.markedWll !== undefined && lift.computedSlingWll !== lift.slingWll
+                ? ([["Computed, above the marked limit (kg)", f(lift.computedSlingWll)]] as [string, string][])
+                : []),
               ...(lift.ground
-                ? ([["Ground pressure (kPa)", `${f(lift.ground.pressureKpa, 0)} of ${lift.ground.allowableKpa === null ? "— (no allowable value)" : f(lift.ground.allowableKpa, 0)}`]] as [string, string][])
+                ? ([
+                    [
+                      "Ground pressure (kPa)",
+                      `${f(lift.ground.pressureKpa, 0)} of ${lift.ground.allowableKpa === null ? "— (no allowable value)" : f(lift.ground.allowableKpa, 0)}`,
+                    ],
+                  ] as [string, string][])
                 : []),
             ]}
           />

@@ -11,7 +11,9 @@ import { acceptInviteAction } from "./actions";
 export function SetPasswordForm({ token }: { token: string }) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<SetPasswordInput>({ resolver: zodResolver(setPasswordSchema) });
+  const { register, handleSubmit, setError, formState } = useForm<SetPasswordInput>({
+    resolver: zodResolver(setPasswordSchema),
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
@@ -27,8 +29,21 @@ export function SetPasswordForm({ token }: { token: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
-      <TextField label="New password" hint={`At least ${PASSWORD_MIN} characters.`} type="password" autoComplete="new-password" error={formState.errors.password?.message} {...register("password")} />
-      <TextField label="Repeat the password" type="password" autoComplete="new-password" error={formState.errors.confirm?.message} {...register("confirm")} />
+      <TextField
+        label="New password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.password?.message}
+        {...register("password")}
+      />
+      <TextField
+        label="Repeat the password"
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.confirm?.message}
+        {...register("confirm")}
+      />
       <PrimaryButton type="submit" disabled={formState.isSubmitting} className="w-full py-3 text-lg">
         {formState.isSubmitting ? "Saving…" : "Set password"}
       </PrimaryButton>

@@ -13,7 +13,9 @@ export default async function MailLogPage() {
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Sent e-mail</h1>
-      <p className="text-sm text-muted">Every e-mail Heftwise sends for your organisation, newest first. Failed ones were tried three times.</p>
+      <p className="text-sm text-muted">
+        Every e-mail Heftwise sends for your organisation, newest first. Failed ones were tried three times.
+      </p>
       {rows.length === 0 ? (
         <EmptyState>Nothing sent yet.</EmptyState>
       ) : (
@@ -25,7 +27,13 @@ export default async function MailLogPage() {
               <td className="px-3 py-2">{row.subject}</td>
               <td className="px-3 py-2">{row.kind}</td>
               <td className="px-3 py-2">
-                {row.status === "sent" ? `Sent ${when(row.sentAt)}` : row.status === "failed" ? <span className="font-bold text-danger">Failed: {row.lastError}</span> : "Sending"}
+                {row.status === "sent" ? (
+                  `Sent ${when(row.sentAt)}`
+                ) : row.status === "failed" ? (
+                  <span className="font-bold text-danger">Failed: {row.lastError}</span>
+                ) : (
+                  "Sending"
+                )}
               </td>
             </tr>
           ))}

@@ -6,7 +6,9 @@ import { getActor } from "@/lib/auth/session";
 import { changeRole, inviteUser, resendInvite, setActive } from "@/lib/users/service";
 
 const mailNote = (status: "sent" | "failed") =>
-  status === "sent" ? "The invitation e-mail was sent." : "The invitation e-mail could not be sent: see Sent e-mail, then use Resend invitation.";
+  status === "sent"
+    ? "The invitation e-mail was sent."
+    : "The invitation e-mail could not be sent: see Sent e-mail, then use Resend invitation.";
 
 export async function inviteUserAction(values: unknown) {
   return runAction(async () => {

@@ -28,7 +28,12 @@ export function InviteForm() {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-3 rounded-lg border border-rule bg-white p-4" aria-labelledby="invite-heading">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="space-y-3 rounded-lg border border-rule bg-white p-4"
+      aria-labelledby="invite-heading"
+    >
       <h2 id="invite-heading" className="text-lg font-bold">
         Invite someone
       </h2>

@@ -31,7 +31,9 @@ export default async function UsersPage() {
                 <td className="px-3 py-2 font-bold">{person.name}</td>
                 <td className="px-3 py-2">{person.email}</td>
                 <td className="px-3 py-2">{ROLE_LABELS[person.role]}</td>
-                <td className="px-3 py-2">{!person.active ? "Deactivated" : person.pending ? "Invited, no password yet" : "Active"}</td>
+                <td className="px-3 py-2">
+                  {!person.active ? "Deactivated" : person.pending ? "Invited, no password yet" : "Active"}
+                </td>
                 <td className="px-3 py-2">
                   <UserControls user={person} isSelf={person.id === actor.id} />
                 </td>

@@ -45,7 +45,11 @@ export function UserControls({ user, isSelf }: Props) {
         ))}
       </select>
       {user.pending && user.active && (
-        <SecondaryButton type="button" disabled={pending} onClick={() => run(() => resendInviteAction({ userId: user.id }))}>
+        <SecondaryButton
+          type="button"
+          disabled={pending}
+          onClick={() => run(() => resendInviteAction({ userId: user.id }))}
+        >
           Resend invitation
         </SecondaryButton>
       )}
@@ -61,7 +65,8 @@ export function UserControls({ user, isSelf }: Props) {
             <Dialog.Content className="fixed left-1/2 top-1/2 w-[min(92vw,28rem)] -translate-x-1/2 -translate-y-1/2 rounded-lg bg-paper p-6 shadow-xl">
               <Dialog.Title className="text-lg font-bold">Deactivate {user.name}?</Dialog.Title>
               <Dialog.Description className="mt-2 text-sm text-muted">
-                They are signed out at once and cannot sign in again until reactivated. Their past work and signatures stay on record.
+                They are signed out at once and cannot sign in again until reactivated. Their past work and signatures
+                stay on record.
               </Dialog.Description>
               <div className="mt-5 flex justify-end gap-2">
                 <Dialog.Close asChild>
@@ -82,12 +87,19 @@ export function UserControls({ user, isSelf }: Props) {
           </Dialog.Portal>
         </Dialog.Root>
       ) : (
-        <SecondaryButton type="button" disabled={pending} onClick={() => run(() => setActiveAction({ userId: user.id, active: true }))}>
+        <SecondaryButton
+          type="button"
+          disabled={pending}
+          onClick={() => run(() => setActiveAction({ userId: user.id, active: true }))}
+        >
           Reactivate
         </SecondaryButton>
       )}
       {message && (
-        <span role={message.ok ? "status" : "alert"} className={`text-sm ${message.ok ? "text-muted" : "font-bold text-danger"}`}>
+        <span
+          role={message.ok ? "status" : "alert"}
+          className={`text-sm ${message.ok ? "text-muted" : "font-bold text-danger"}`}
+        >
           {message.text}
         </span>
       )}

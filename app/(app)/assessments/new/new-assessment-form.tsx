@@ -11,10 +11,19 @@ import { createAssessmentAction } from "./actions";
 
 type Values = z.infer<typeof createAssessmentSchema>;
 
-export function NewAssessmentForm({ jobs, templates }: { jobs: { id: string; name: string }[]; templates: { id: string; name: string; description: string }[] }) {
+export function NewAssessmentForm({
+  jobs,
+  templates,
+}: {
+  jobs: { id: string; name: string }[];
+  templates: { id: string; name: string; description: string }[];
+}) {
   const router = useRouter();
   const [failure, setFailure] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<Values>({ resolver: zodResolver(createAssessmentSchema), defaultValues: { templateId: templates[0]?.id } });
+  const { register, handleSubmit, setError, formState } = useForm<Values>({
+    resolver: zodResolver(createAssessmentSchema),
+    defaultValues: { templateId: templates[0]?.id },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFailure(null);
@@ -28,7 +37,12 @@ export function NewAssessmentForm({ jobs, templates }: { jobs: { id: string; nam
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg border border-rule bg-white p-4" aria-label="New assessment">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="space-y-4 rounded-lg border border-rule bg-white p-4"
+      aria-label="New assessment"
+    >
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
       <SelectField label="Job" error={formState.errors.jobId?.message} {...register("jobId")} defaultValue="">
         <option value="" disabled>
@@ -40,12 +54,20 @@ export function NewAssessmentForm({ jobs, templates }: { jobs: { id: string; nam
           </option>
         ))}
       </SelectField>
-      <TextField label="Title" hint="What is being installed, and where, in a few words." error={formState.errors.title?.message} {...register("title")} />
+      <TextField
+        label="Title"
+        hint="What is being installed, and where, in a few words."
+        error={formState.errors.title?.message}
+        {...register("title")}
+      />
       <fieldset>
         <legend className="text-sm font-bold">Start from</legend>
         <div className="mt-2 grid gap-2 md:grid-cols-2">
           {templates.map((t) => (
-            <label key={t.id} className="flex cursor-pointer gap-2 rounded border border-rule p-3 has-[:checked]:border-accent has-[:checked]:bg-teal-50">
+            <label
+              key={t.id}
+              className="flex cursor-pointer gap-2 rounded border border-rule p-3 has-[:checked]:border-accent has-[:checked]:bg-teal-50"
+            >
               <input type="radio" value={t.id} {...register("templateId")} className="mt-1" />
               <span>
                 <span className="block font-bold">{t.name}</span>

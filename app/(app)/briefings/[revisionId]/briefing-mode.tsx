@@ -19,7 +19,17 @@ interface Props {
   foremanName: string;
 }
 
-type Screen = { kind: "start" } | { kind: "line" } | { kind: "sequence" } | { kind: "load"; index: number } | { kind: "hazards" } | { kind: "ppe" } | { kind: "emergency" } | { kind: "sign-on" } | { kind: "sign-off" } | { kind: "done" };
+type Screen =
+  | { kind: "start" }
+  | { kind: "line" }
+  | { kind: "sequence" }
+  | { kind: "load"; index: number }
+  | { kind: "hazards" }
+  | { kind: "ppe" }
+  | { kind: "emergency" }
+  | { kind: "sign-on" }
+  | { kind: "sign-off" }
+  | { kind: "done" };
 
 const big = "min-h-14 rounded-lg px-5 py-3 text-xl font-bold";
 
@@ -75,7 +85,11 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
     try {
       body = await apiRequest("/api/v1/briefings", { json: { revisionId, place } });
     } catch (err) {
-      setProblem(err instanceof ApiError && err.offline ? "No connection: the briefing needs signal to start. Sign-ons later can wait for signal." : problemOf(err));
+      setProblem(
+        err instanceof ApiError && err.offline
+          ? "No connection: the briefing needs signal to start. Sign-ons later can wait for signal."
+          : problemOf(err),
+      );
       return;
     }
     setBriefingId(body.briefingId);
@@ -94,7 +108,11 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
         </p>
         <h1 className="text-2xl font-bold">{title}</h1>
         {briefingId && (
-          <p role="status" className={`rounded px-3 py-2 text-base font-bold ${waiting ? "bg-band-watch text-white" : "bg-teal-50"}`} data-testid="sign-on-status">
+          <p
+            role="status"
+            className={`rounded px-3 py-2 text-base font-bold ${waiting ? "bg-band-watch text-white" : "bg-teal-50"}`}
+            data-testid="sign-on-status"
+          >
             {online ? "Online" : "No signal"} · {sent} signed on{waiting ? ` · ${waiting} waiting to send` : ""}
           </p>
         )}
@@ -108,7 +126,9 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
               {c.text} <span className="text-base text-muted">— {c.by}</span>
             </p>
           ))}
-          <p className="text-base">The assessment may no longer match the site. Check with the safety adviser before work.</p>
+          <p className="text-base">
+            The assessment may no longer match the site. Check with the safety adviser before work.
+          </p>
         </section>
       )}
 
@@ -118,7 +138,11 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
             <h2 className="text-2xl font-bold">Start the briefing</h2>
             <label className="block font-bold">
               Where are you briefing?
-              <input value={place} onChange={(e) => setPlace(e.target.value)} className="mt-2 block w-full rounded border-2 border-rule px-3 py-3 text-xl font-normal" />
+              <input
+                value={place}
+                onChange={(e) => setPlace(e.target.value)}
+                className="mt-2 block w-full rounded border-2 border-rule px-3 py-3 text-xl font-normal"
+              />
             </label>
             {problem && (
               <p role="alert" className="font-bold text-danger">
@@ -141,7 +165,9 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
             </ol>
           </div>
         )}
-        {screen.kind === "load" && <LoadScreen load={script.loads[screen.index]} number={screen.index + 1} of={script.loads.length} />}
+        {screen.kind === "load" && (
+          <LoadScreen load={script.loads[screen.index]} number={screen.index + 1} of={script.loads.length} />
+        )}
         {screen.kind === "hazards" && (
           <div>
             <h2 className="mb-3 text-2xl font-bold">Hazards and what we do about them</h2>
@@ -178,7 +204,10 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
               <p>
                 <strong>Site contact:</strong> {job.siteContactName}{" "}
                 {job.siteContactPhone && (
-                  <a href={`tel:${job.siteContactPhone.replace(/\s/g, "")}`} className="font-bold text-accent underline">
+                  <a
+                    href={`tel:${job.siteContactPhone.replace(/\s/g, "")}`}
+                    className="font-bold text-accent underline"
+                  >
                     {job.siteContactPhone}
                   </a>
                 )}
@@ -186,8 +215,18 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
             )}
           </div>
         )}
-        {screen.kind === "sign-on" && briefingId && <SignOn briefingId={briefingId} queue={queue} setQueue={setQueue} send={send} />}
-        {screen.kind === "sign-off" && briefingId && <SignOff briefingId={briefingId} foremanName={foremanName} waiting={waiting} sent={sent} onDone={() => setDone(true)} />}
+        {screen.kind === "sign-on" && briefingId && (
+          <SignOn briefingId={briefingId} queue={queue} setQueue={setQueue} send={send} />
+        )}
+        {screen.kind === "sign-off" && briefingId && (
+          <SignOff
+            briefingId={briefingId}
+            foremanName={foremanName}
+            waiting={waiting}
+            sent={sent}
+            onDone={() => setDone(true)}
+          />
+        )}
         {screen.kind === "done" && briefingId && (
           <div className="space-y-3">
             <h2 className="text-2xl font-bold">Briefing recorded</h2>
@@ -203,14 +242,23 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
 
       {screen.kind !== "start" && screen.kind !== "done" && (
         <nav className="flex justify-between gap-3" aria-label="Briefing steps">
-          <button type="button" disabled={position === 0} onClick={() => setPosition(position - 1)} className={`${big} border-2 border-rule bg-white disabled:opacity-40`}>
+          <button
+            type="button"
+            disabled={position === 0}
+            onClick={() => setPosition(position - 1)}
+            className={`${big} border-2 border-rule bg-white disabled:opacity-40`}
+          >
             Back
           </button>
           <span className="self-center text-base text-muted">
             {position + 1} of {screens.length}
           </span>
           {position < screens.length - 1 && (
-            <button type="button" onClick={() => setPosition(position + 1)} className={`${big} bg-frame text-frame-ink`}>
+            <button
+              type="button"
+              onClick={() => setPosition(position + 1)}
+              className={`${big} bg-frame text-frame-ink`}
+            >
               Next
             </button>
           )}
@@ -260,7 +308,8 @@ function LineScreen({ line }: { line: NonNullable<BriefingScript["line"]> }) {
           <ul className="space-y-1">
             {line.permits.map((p, i) => (
               <li key={i}>
-                <strong>{p.name}</strong> <span className="font-bold tabular-nums">{p.reference || "— no reference"}</span>
+                <strong>{p.name}</strong>{" "}
+                <span className="font-bold tabular-nums">{p.reference || "— no reference"}</span>
                 {p.issuedBy && <span className="text-base text-muted"> · issued by {p.issuedBy}</span>}
                 {p.valid && <span className="text-base text-muted"> · valid {p.valid}</span>}
               </li>
@@ -303,7 +352,9 @@ function LoadScreen({ load, number, of }: { load: BriefingScript["loads"][number
       </ul>
       {load.lift && (
         <div className="rounded border-2 border-band-watch p-3 text-xl">
-          {load.lift.exclusionZoneM !== null && <p className="font-bold">Exclusion zone: {load.lift.exclusionZoneM} m</p>}
+          {load.lift.exclusionZoneM !== null && (
+            <p className="font-bold">Exclusion zone: {load.lift.exclusionZoneM} m</p>
+          )}
           <ul>
             {load.lift.roles.map((r) => (
               <li key={r.role}>
@@ -317,7 +368,17 @@ function LoadScreen({ load, number, of }: { load: BriefingScript["loads"][number
   );
 }
 
-function SignOn({ briefingId, queue, setQueue, send }: { briefingId: string; queue: PendingSignOn[]; setQueue: (q: PendingSignOn[]) => void; send: () => Promise<void> }) {
+function SignOn({
+  briefingId,
+  queue,
+  setQueue,
+  send,
+}: {
+  briefingId: string;
+  queue: PendingSignOn[];
+  setQueue: (q: PendingSignOn[]) => void;
+  send: () => Promise<void>;
+}) {
   const signature = useRef<SignatureFieldHandle>(null);
   const [form, setForm] = useState({ name: "", employer: "", cardNumber: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -331,7 +392,10 @@ function SignOn({ briefingId, queue, setQueue, send }: { briefingId: string; que
     if (!image) found.signature = "Sign in the box";
     setErrors(found);
     if (Object.keys(found).length) return;
-    const next = [...loadQueue(briefingId), { key: newKey(), ...form, signature: image!, signedAt: new Date().toISOString(), state: "waiting" as const }];
+    const next = [
+      ...loadQueue(briefingId),
+      { key: newKey(), ...form, signature: image!, signedAt: new Date().toISOString(), state: "waiting" as const },
+    ];
     saveQueue(briefingId, next);
     setQueue(next);
     setForm({ name: "", employer: "", cardNumber: "" });
@@ -370,7 +434,8 @@ function SignOn({ briefingId, queue, setQueue, send }: { briefingId: string; que
       <ul className="space-y-1 text-base" data-testid="sign-on-list">
         {queue.map((q) => (
           <li key={q.key}>
-            {q.name} ({q.employer}) — {q.state === "sent" ? "recorded" : q.state === "waiting" ? "waiting for signal" : `refused: ${q.problem}`}
+            {q.name} ({q.employer}) —{" "}
+            {q.state === "sent" ? "recorded" : q.state === "waiting" ? "waiting for signal" : `refused: ${q.problem}`}
           </li>
         ))}
       </ul>
@@ -378,7 +443,19 @@ function SignOn({ briefingId, queue, setQueue, send }: { briefingId: string; que
   );
 }
 
-function SignOff({ briefingId, foremanName, waiting, sent, onDone }: { briefingId: string; foremanName: string; waiting: number; sent: number; onDone: () => void }) {
+function SignOff({
+  briefingId,
+  foremanName,
+  waiting,
+  sent,
+  onDone,
+}: {
+  briefingId: string;
+  foremanName: string;
+  waiting: number;
+  sent: number;
+  onDone: () => void;
+}) {
   const signature = useRef<SignatureFieldHandle>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const finish = async () => {
@@ -388,7 +465,9 @@ function SignOff({ briefingId, foremanName, waiting, sent, onDone }: { briefingI
       await apiRequest(`/api/v1/briefings/${briefingId}/complete`, { json: { signature: image } });
       onDone();
     } catch (err) {
-      setProblem(err instanceof ApiError && err.offline ? "No signal: try again when you have signal." : problemOf(err));
+      setProblem(
+        err instanceof ApiError && err.offline ? "No signal: try again when you have signal." : problemOf(err),
+      );
     }
   };
   return (
@@ -396,7 +475,8 @@ function SignOff({ briefingId, foremanName, waiting, sent, onDone }: { briefingI
       <h2 className="text-2xl font-bold">Foreman signs last</h2>
       {waiting > 0 ? (
         <p role="alert" className="font-bold text-band-act">
-          {waiting} sign-on{waiting === 1 ? " is" : "s are"} still waiting for signal. They are kept on this phone and sent when the signal returns; sign off after that.
+          {waiting} sign-on{waiting === 1 ? " is" : "s are"} still waiting for signal. They are kept on this phone and
+          sent when the signal returns; sign off after that.
         </p>
       ) : (
         <p>
@@ -404,7 +484,12 @@ function SignOff({ briefingId, foremanName, waiting, sent, onDone }: { briefingI
         </p>
       )}
       <SignatureField ref={signature} label="Foreman's signature" error={problem ?? undefined} />
-      <button type="button" disabled={waiting > 0 || sent === 0} onClick={finish} className={`${big} w-full bg-accent text-white disabled:opacity-40`}>
+      <button
+        type="button"
+        disabled={waiting > 0 || sent === 0}
+        onClick={finish}
+        className={`${big} w-full bg-accent text-white disabled:opacity-40`}
+      >
         Sign off the briefing
       </button>
     </div>

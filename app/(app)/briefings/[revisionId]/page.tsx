@@ -14,5 +14,15 @@ export default async function BriefingPage({ params }: { params: Promise<{ revis
     if (err instanceof AppError && err.code === "not_found") notFound();
     throw err;
   });
-  return <BriefingMode revisionId={revisionId} title={data.title} job={data.job} revisionNumber={data.revision.number} script={data.script} siteChanges={data.siteChanges} foremanName={actor.name} />;
+  return (
+    <BriefingMode
+      revisionId={revisionId}
+      title={data.title}
+      job={data.job}
+      revisionNumber={data.revision.number}
+      script={data.script}
+      siteChanges={data.siteChanges}
+      foremanName={actor.name}
+    />
+  );
 }

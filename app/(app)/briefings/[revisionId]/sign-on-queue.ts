@@ -43,7 +43,14 @@ export async function flush(briefingId: string, queue: PendingSignOn[]): Promise
     if (item.state !== "waiting") continue;
     try {
       await apiRequest(`/api/v1/briefings/${briefingId}/attendees`, {
-        json: { key: item.key, name: item.name, employer: item.employer, cardNumber: item.cardNumber, signature: item.signature, signedAt: item.signedAt },
+        json: {
+          key: item.key,
+          name: item.name,
+          employer: item.employer,
+          cardNumber: item.cardNumber,
+          signature: item.signature,
+          signedAt: item.signedAt,
+        },
       });
       next[i] = { ...item, state: "sent" };
     } catch (err) {

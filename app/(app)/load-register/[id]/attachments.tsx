@@ -15,7 +15,15 @@ interface Attachment {
 
 const kb = (n: number) => (n < 1024 * 1024 ? `${Math.ceil(n / 1024)} KB` : `${(n / 1024 / 1024).toFixed(1)} MB`);
 
-export function Attachments({ componentId, attachments, editable }: { componentId: string; attachments: Attachment[]; editable: boolean }) {
+export function Attachments({
+  componentId,
+  attachments,
+  editable,
+}: {
+  componentId: string;
+  attachments: Attachment[];
+  editable: boolean;
+}) {
   const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [busy, setBusy] = useState(false);
@@ -82,7 +90,12 @@ export function Attachments({ componentId, attachments, editable }: { componentI
         <div className="flex flex-wrap items-end gap-3">
           <label className="text-sm font-bold">
             Attach a PDF data sheet or a photograph (at most 10 MB)
-            <input ref={input} type="file" accept="application/pdf,image/jpeg,image/png,image/webp" className="mt-1 block font-normal" />
+            <input
+              ref={input}
+              type="file"
+              accept="application/pdf,image/jpeg,image/png,image/webp"
+              className="mt-1 block font-normal"
+            />
           </label>
           <PrimaryButton type="button" disabled={busy} onClick={upload}>
             {busy ? "Uploading…" : "Attach"}

@@ -27,10 +27,23 @@ export default async function ComponentPage({ params }: { params: Promise<{ id: 
       {editable && (
         <ComponentForm
           componentId={c.id}
-          initial={{ name: c.name, massKg: c.massKg, lengthMm: c.lengthMm, widthMm: c.widthMm, heightMm: c.heightMm, grip: c.grip, massSource: c.massSource, notes: c.notes }}
+          initial={{
+            name: c.name,
+            massKg: c.massKg,
+            lengthMm: c.lengthMm,
+            widthMm: c.widthMm,
+            heightMm: c.heightMm,
+            grip: c.grip,
+            massSource: c.massSource,
+            notes: c.notes,
+          }}
         />
       )}
-      <Attachments componentId={c.id} attachments={c.attachments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() }))} editable={editable} />
+      <Attachments
+        componentId={c.id}
+        attachments={c.attachments.map((a) => ({ ...a, createdAt: a.createdAt.toISOString() }))}
+        editable={editable}
+      />
     </div>
   );
 }

@@ -33,7 +33,9 @@ export function CsvImport() {
     setFileName(file.name);
     setBusy(true);
     try {
-      setPreview(await apiRequest<Preview>("/api/v1/components/import?dryRun=1", { body: text, contentType: "text/csv" }));
+      setPreview(
+        await apiRequest<Preview>("/api/v1/components/import?dryRun=1", { body: text, contentType: "text/csv" }),
+      );
     } catch (err) {
       setOutcome({ tone: "error", text: messageOf(err) });
     } finally {
@@ -47,7 +49,10 @@ export function CsvImport() {
     if (!csv) return;
     setBusy(true);
     try {
-      const body = await apiRequest<{ imported: number }>("/api/v1/components/import", { body: csv, contentType: "text/csv" });
+      const body = await apiRequest<{ imported: number }>("/api/v1/components/import", {
+        body: csv,
+        contentType: "text/csv",
+      });
       setOutcome({ tone: "success", text: `${body.imported} component${body.imported === 1 ? "" : "s"} imported.` });
       setPreview(null);
       setCsv(null);
@@ -62,12 +67,22 @@ export function CsvImport() {
     <div className="space-y-4">
       <label className="block rounded-lg border border-dashed border-rule bg-white p-4 font-bold">
         CSV file
-        <input type="file" accept=".csv,text/csv" className="mt-2 block font-normal" onChange={(e) => void choose(e.target.files?.[0])} />
+        <input
+          type="file"
+          accept=".csv,text/csv"
+          className="mt-2 block font-normal"
+          onChange={(e) => void choose(e.target.files?.[0])}
+        />
       </label>
       {busy && <p role="status">Checking…</p>}
       {outcome && (
         <FormMessage tone={outcome.tone}>
-          {outcome.text} {outcome.tone === "success" && <Link href="/load-register" className="font-bold underline">See the load register</Link>}
+          {outcome.text}{" "}
+          {outcome.tone === "success" && (
+            <Link href="/load-register" className="font-bold underline">
+              See the load register
+            </Link>
+          )}
         </FormMessage>
       )}
       {preview && (
@@ -79,7 +94,11 @@ export function CsvImport() {
           ))}
           <p data-testid="import-summary">
             {fileName}: {preview.rows.length} row{preview.rows.length === 1 ? "" : "s"},{" "}
-            {errorCount === 0 ? "all ready to import." : <strong className="text-danger">{errorCount} with problems — fix the file and choose it again.</strong>}
+            {errorCount === 0 ? (
+              "all ready to import."
+            ) : (
+              <strong className="text-danger">{errorCount} with problems — fix the file and choose it again.</strong>
+            )}
           </p>
           <div className="overflow-x-auto rounded-lg border border-rule bg-white">
             <table className="w-full text-left text-sm">
@@ -117,7 +136,11 @@ export function CsvImport() {
               </tbody>
             </table>
           </div>
-          <PrimaryButton type="button" disabled={busy || errorCount > 0 || preview.rows.length === 0} onClick={runImport}>
+          <PrimaryButton
+            type="button"
+            disabled={busy || errorCount > 0 || preview.rows.length === 0}
+            onClick={runImport}
+          >
             Import {preview.rows.length} component{preview.rows.length === 1 ? "" : "s"}
           </PrimaryButton>
         </section>

@@ -12,7 +12,13 @@ import { ReviewActions } from "./review-actions";
 
 export const metadata: Metadata = { title: "Review" };
 
-export default async function ReviewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ notice?: string }> }) {
+export default async function ReviewPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ notice?: string }>;
+}) {
   const actor = await requirePermission("reviews:read");
   const { id } = await params;
   const { notice } = await searchParams;
@@ -27,20 +33,37 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
         <p className="text-sm text-muted">{job.name}</p>
         <h1 className="text-2xl font-bold">Review: {assessment.title}</h1>
         <p className="text-sm">
-          Revision {revision.number} by {author?.name ?? "—"}, submitted {revision.submittedAt?.toISOString().slice(0, 16).replace("T", " ")} UTC · review by {revision.reviewDate ?? "—"} ·{" "}
-          <strong data-testid="review-status">{revision.status === "submitted" ? "Waiting for your decision" : revision.status === "approved" ? "Approved" : revision.status}</strong>
+          Revision {revision.number} by {author?.name ?? "—"}, submitted{" "}
+          {revision.submittedAt?.toISOString().slice(0, 16).replace("T", " ")} UTC · review by{" "}
+          {revision.reviewDate ?? "—"} ·{" "}
+          <strong data-testid="review-status">
+            {revision.status === "submitted"
+              ? "Waiting for your decision"
+              : revision.status === "approved"
+                ? "Approved"
+                : revision.status}
+          </strong>
         </p>
         <a href={`/api/v1/revisions/${revision.id}/pack`} className="mt-2 inline-block font-bold text-accent underline">
           Download the {revision.status === "submitted" ? "draft" : "signed"} pack (PDF)
         </a>
       </header>
       <Notice code={notice} />
-      <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
+      <ReadOnlyRevision
+        content={content}
+        scores={(revision.results ?? []) as TaskScore[]}
+        worstBand={revision.worstBand as Band | null}
+      />
       {revision.status === "submitted" ? (
         <ReviewActions revisionId={revision.id} version={revision.version} defaultName={actor.name} />
       ) : (
         <p className="rounded-lg border border-rule bg-white p-4">
-          {signatures.map((s) => `Countersigned by ${s.name}, ${s.role}, ${s.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC.`).join(" ")}
+          {signatures
+            .map(
+              (s) =>
+                `Countersigned by ${s.name}, ${s.role}, ${s.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC.`,
+            )
+            .join(" ")}
         </p>
       )}
       <SafetyCaution />

@@ -19,7 +19,15 @@ const SECTION_LABELS: Record<(typeof STEP_KEYS)[number], string> = {
 
 type Issues = Record<string, string>;
 
-export function ReviewActions({ revisionId, version, defaultName }: { revisionId: string; version: number; defaultName: string }) {
+export function ReviewActions({
+  revisionId,
+  version,
+  defaultName,
+}: {
+  revisionId: string;
+  version: number;
+  defaultName: string;
+}) {
   const router = useRouter();
   const signature = useRef<SignatureFieldHandle>(null);
   const [name, setName] = useState(defaultName);
@@ -78,14 +86,32 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
 
   return (
     <div className="grid gap-4 lg:grid-cols-2">
-      <section aria-labelledby="countersign-heading" className="space-y-3 rounded-lg border-2 border-accent bg-white p-4">
+      <section
+        aria-labelledby="countersign-heading"
+        className="space-y-3 rounded-lg border-2 border-accent bg-white p-4"
+      >
         <h2 id="countersign-heading" className="text-xl font-bold">
           Countersign
         </h2>
-        <p className="text-sm text-muted">Your signature approves this revision. It is then locked, and a digitally signed pack is issued.</p>
+        <p className="text-sm text-muted">
+          Your signature approves this revision. It is then locked, and a digitally signed pack is issued.
+        </p>
         <div className="grid gap-3 sm:grid-cols-2">
-          <TextField label="Your name" name="signer-name" value={name} onChange={(e) => setName(e.target.value)} error={issues.name} />
-          <TextField label="Your role" name="signer-role" placeholder="e.g. Contracts manager" value={role} onChange={(e) => setRole(e.target.value)} error={issues.role} />
+          <TextField
+            label="Your name"
+            name="signer-name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            error={issues.name}
+          />
+          <TextField
+            label="Your role"
+            name="signer-role"
+            placeholder="e.g. Contracts manager"
+            value={role}
+            onChange={(e) => setRole(e.target.value)}
+            error={issues.role}
+          />
         </div>
         <SignatureField ref={signature} label="Sign here" error={issues.signature} />
         <PrimaryButton type="button" disabled={busy} onClick={askToSign}>
@@ -97,10 +123,13 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
             <Dialog.Content className="fixed left-1/2 top-1/2 w-[min(92vw,30rem)] -translate-x-1/2 -translate-y-1/2 rounded-lg bg-paper p-6 shadow-xl">
               <Dialog.Title className="text-lg font-bold">Approve this revision?</Dialog.Title>
               <Dialog.Description className="mt-2 text-sm text-muted">
-                You, {name} ({role}), approve it for use on site. It is locked and a signed pack is issued; changes then need a new revision.
+                You, {name} ({role}), approve it for use on site. It is locked and a signed pack is issued; changes then
+                need a new revision.
               </Dialog.Description>
-              {/* eslint-disable-next-line @next/next/no-img-element -- a data URL of the drawing just made */}
-              {drawn && <img src={drawn} alt="Your signature" className="mt-3 h-20 rounded border border-rule bg-white" />}
+              {drawn && (
+                // eslint-disable-next-line @next/next/no-img-element -- a data URL of the drawing just made
+                <img src={drawn} alt="Your signature" className="mt-3 h-20 rounded border border-rule bg-white" />
+              )}
               <div className="mt-5 flex justify-end gap-2">
                 <Dialog.Close asChild>
                   <SecondaryButton type="button">Not yet</SecondaryButton>
@@ -117,7 +146,9 @@ export function ReviewActions({ revisionId, version, defaultName }: { revisionId
         <h2 id="return-heading" className="text-xl font-bold">
           Return with comments
         </h2>
-        <p className="text-sm text-muted">Comment on the sections that need changing. The author gets it back as a draft.</p>
+        <p className="text-sm text-muted">
+          Comment on the sections that need changing. The author gets it back as a draft.
+        </p>
         {STEP_KEYS.map((key) => (
           <label key={key} className="block text-sm font-bold">
             {SECTION_LABELS[key]}

@@ -9,7 +9,9 @@ export function NewRevisionButton({ revisionId }: { revisionId: string }) {
   const [problem, setProblem] = useState<string | null>(null);
   const start = async () => {
     try {
-      const body = await apiRequest<{ revisionId: string }>(`/api/v1/revisions/${revisionId}/new-revision`, { method: "POST" });
+      const body = await apiRequest<{ revisionId: string }>(`/api/v1/revisions/${revisionId}/new-revision`, {
+        method: "POST",
+      });
       router.push(`/revisions/${body.revisionId}`);
     } catch (err) {
       setProblem(messageOf(err));

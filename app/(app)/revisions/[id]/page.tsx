@@ -17,9 +17,20 @@ import { RescoredNotice } from "./rescored-notice";
 
 export const metadata: Metadata = { title: "Assessment" };
 
-const STATUS_TEXT = { draft: "Draft", submitted: "Submitted — waiting for approval", approved: "Approved", superseded: "Superseded" } as const;
+const STATUS_TEXT = {
+  draft: "Draft",
+  submitted: "Submitted — waiting for approval",
+  approved: "Approved",
+  superseded: "Superseded",
+} as const;
 
-export default async function RevisionPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ step?: string; notice?: string }> }) {
+export default async function RevisionPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ step?: string; notice?: string }>;
+}) {
   const actor = await requirePermission("assessments:read");
   const { id } = await params;
   const { step, notice } = await searchParams;
@@ -32,7 +43,14 @@ export default async function RevisionPage({ params, searchParams }: { params: P
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
   // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
-  const rescored = revision.status === "draft" ? rescoredByCurrentRules(content.tasks, revision.results as TaskScore[] | null, reviewContent(content, register).scores) : [];
+  const rescored =
+    revision.status === "draft"
+      ? rescoredByCurrentRules(
+          content.tasks,
+          revision.results as TaskScore[] | null,
+          reviewContent(content, register).scores,
+        )
+      : [];
 
   return (
     <div className="space-y-4">
@@ -54,7 +72,9 @@ export default async function RevisionPage({ params, searchParams }: { params: P
         <Link href={`/assessments/${assessment.id}/audit`} className="font-bold text-accent underline">
           Audit trail
         </Link>
-        {revision.status === "approved" && can(actor, "assessments:write") && <NewRevisionButton revisionId={revision.id} />}
+        {revision.status === "approved" && can(actor, "assessments:write") && (
+          <NewRevisionButton revisionId={revision.id} />
+        )}
       </nav>
       {revision.status === "draft" && returned && (
         <section className="rounded-lg border-l-4 border-band-act bg-white p-4" aria-label="Returned with comments">
@@ -82,10 +102,16 @@ export default async function RevisionPage({ params, searchParams }: { params: P
       ) : (
         <>
           <p className="rounded border-l-4 border-band-watch bg-white p-3 text-sm">
-            {revision.status === "draft" ? "Your role can read this draft but not edit it." : "This revision is no longer a draft and cannot be edited here."}
+            {revision.status === "draft"
+              ? "Your role can read this draft but not edit it."
+              : "This revision is no longer a draft and cannot be edited here."}
             {revision.status === "approved" && " To change it, start a new revision."}
           </p>
-          <ReadOnlyRevision content={content} scores={(revision.results ?? []) as TaskScore[]} worstBand={revision.worstBand as Band | null} />
+          <ReadOnlyRevision
+            content={content}
+            scores={(revision.results ?? []) as TaskScore[]}
+            worstBand={revision.worstBand as Band | null}
+          />
         </>
       )}
     </div>

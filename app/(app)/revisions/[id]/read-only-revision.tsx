@@ -1,10 +1,22 @@
 import { BandChip } from "@/app/_components/results/band";
 import { TaskResult } from "@/app/_components/results/task-result";
-import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating, type Content } from "@/assessments/method-statement/content";
+import {
+  CONTROL_LEVEL_LABELS,
+  OPERATION_LABELS,
+  riskRating,
+  type Content,
+} from "@/assessments/method-statement/content";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import type { Band } from "@/assessments/rules/types";
 import { NEAR_LINE_LABELS } from "@/assessments/method-statement/content";
-import { buriedServicesRows, environmentRows, excavationRows, LINE_CAUTION, lineRows, permitRows } from "@/assessments/method-statement/lineside";
+import {
+  buriedServicesRows,
+  environmentRows,
+  excavationRows,
+  LINE_CAUTION,
+  lineRows,
+  permitRows,
+} from "@/assessments/method-statement/lineside";
 
 function Rows({ rows }: { rows: [string, string][] }) {
   return (
@@ -29,7 +41,15 @@ function Section({ title, children }: { title: string; children: React.ReactNode
 }
 
 /** Everything in a revision, read-only, with the results as they were saved. */
-export function ReadOnlyRevision({ content, scores, worstBand }: { content: Content; scores: TaskScore[]; worstBand: Band | null }) {
+export function ReadOnlyRevision({
+  content,
+  scores,
+  worstBand,
+}: {
+  content: Content;
+  scores: TaskScore[];
+  worstBand: Band | null;
+}) {
   return (
     <div className="space-y-4">
       <div className="flex items-center gap-2">

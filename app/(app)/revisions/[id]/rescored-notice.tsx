@@ -6,11 +6,17 @@ import { RULES_VERSION } from "@/assessments/rules/version";
 export function RescoredNotice({ tasks }: { tasks: Rescored[] }) {
   if (tasks.length === 0) return null;
   return (
-    <section role="status" aria-label="Rules changed" className="rounded-lg border-l-4 border-band-act bg-white p-4" data-testid="rescored-notice">
+    <section
+      role="status"
+      aria-label="Rules changed"
+      className="rounded-lg border-l-4 border-band-act bg-white p-4"
+      data-testid="rescored-notice"
+    >
       <h2 className="font-bold">The scoring rules have changed since this draft was saved</h2>
       <p className="text-sm">
-        These tasks were scored under rules {[...new Set(tasks.map((t) => t.wasVersion))].join(", ")} and are scored differently under rules {RULES_VERSION}. The
-        results shown below are the new ones; check each task before you submit. Saving the draft stores the new results.
+        These tasks were scored under rules {[...new Set(tasks.map((t) => t.wasVersion))].join(", ")} and are scored
+        differently under rules {RULES_VERSION}. The results shown below are the new ones; check each task before you
+        submit. Saving the draft stores the new results.
       </p>
       <ul className="mt-2 space-y-1 text-sm">
         {tasks.map((t) => (

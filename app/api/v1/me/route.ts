@@ -5,5 +5,11 @@ import { requireApiActor } from "@/lib/auth/api";
 /** Who is calling: the signed-in user, their role and organisation (reads no business table). */
 export const GET = handler(async () => {
   const actor = await requireApiActor("profile:read");
-  return NextResponse.json({ id: actor.id, name: actor.name, email: actor.email, role: actor.role, organisationId: actor.organisationId });
+  return NextResponse.json({
+    id: actor.id,
+    name: actor.name,
+    email: actor.email,
+    role: actor.role,
+    organisationId: actor.organisationId,
+  });
 });

@@ -11,7 +11,10 @@ export const POST = handler(async (request: Request) => {
   const body = await readJson(request);
   if (Array.isArray(body)) {
     if (body.length > MAX_BATCH)
-      return NextResponse.json({ error: { code: "payload_too_large", message: `At most ${MAX_BATCH} requests in one batch` } }, { status: 413 });
+      return NextResponse.json(
+        { error: { code: "payload_too_large", message: `At most ${MAX_BATCH} requests in one batch` } },
+        { status: 413 },
+      );
     const results = body.map(scoreUnknown);
     return NextResponse.json(results, { status: results.some((r) => "error" in r) ? 422 : 200 });
   }

@@ -8,7 +8,14 @@ export const POST = handler(async (request: Request) => {
   const actor = await requireApiActor("site-notes:create");
   const form = await readForm(request, 11 * 1024 * 1024, "Send the note as multipart/form-data");
   const photo = form.get("photo");
-  const file = photo instanceof File && photo.size > 0 ? { name: photo.name, data: new Uint8Array(await photo.arrayBuffer()) } : undefined;
-  const result = await createSiteChangeNote(actor, { revisionId: form.get("revisionId"), text: form.get("text") }, file);
+  const file =
+    photo instanceof File && photo.size > 0
+      ? { name: photo.name, data: new Uint8Array(await photo.arrayBuffer()) }
+      : undefined;
+  const result = await createSiteChangeNote(
+    actor,
+    { revisionId: form.get("revisionId"), text: form.get("text") },
+    file,
+  );
   return NextResponse.json(result, { status: 201 });
 });

@@ -26,7 +26,9 @@ export default async function AuditPage({ params }: { params: Promise<{ id: stri
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Audit trail: {assessment.title}</h1>
-      <p className="text-sm text-muted">Every transition of every revision: who, when, what, and the SHA-256 of the content at that moment.</p>
+      <p className="text-sm text-muted">
+        Every transition of every revision: who, when, what, and the SHA-256 of the content at that moment.
+      </p>
       <DataTable head={["When (UTC)", "Revision", "What", "Who", "Content hash"]} caption="Audit trail">
         {events.map((e) => (
           <tr key={e.id} className="border-t border-rule align-top">

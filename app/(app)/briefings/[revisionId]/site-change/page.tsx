@@ -18,7 +18,8 @@ export default async function SiteChangePage({ params }: { params: Promise<{ rev
     <div className="mx-auto max-w-2xl space-y-4">
       <h1 className="text-2xl font-bold">Report a site change</h1>
       <p>
-        {data.title} · {data.job.name}. Say what is different from the assessment. The safety adviser is e-mailed, the assessment is marked as needing review, and the next briefing shows your note.
+        {data.title} · {data.job.name}. Say what is different from the assessment. The safety adviser is e-mailed, the
+        assessment is marked as needing review, and the next briefing shows your note.
       </p>
       <SiteChangeForm revisionId={revisionId} />
     </div>

@@ -25,7 +25,10 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
         <div className="flex gap-2">
           <PrintButton />
           {can(actor, "briefings:run") && (
-            <a href={`/api/v1/revisions/${briefing.revisionId}/briefing-sheet?briefing=${briefing.id}`} className="rounded border border-rule bg-white px-4 py-2 font-bold">
+            <a
+              href={`/api/v1/revisions/${briefing.revisionId}/briefing-sheet?briefing=${briefing.id}`}
+              className="rounded border border-rule bg-white px-4 py-2 font-bold"
+            >
               Briefing sheet with this record (PDF)
             </a>
           )}
@@ -38,7 +41,9 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
         </p>
         <p>
           Held at {briefing.place} on {when(briefing.startedAt)} by {briefing.foremanName}.{" "}
-          <strong data-testid="record-state">{briefing.completedAt ? `Signed off ${when(briefing.completedAt)}.` : "Not yet signed off by the foreman."}</strong>
+          <strong data-testid="record-state">
+            {briefing.completedAt ? `Signed off ${when(briefing.completedAt)}.` : "Not yet signed off by the foreman."}
+          </strong>
         </p>
       </section>
       <div data-testid="attendees">
@@ -51,7 +56,11 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
               <td className="px-3 py-2">{when(a.signedAt)}</td>
               <td className="px-3 py-2">
                 {/* eslint-disable-next-line @next/next/no-img-element -- the stored signature, inline */}
-                <img src={`data:image/png;base64,${Buffer.from(a.signature).toString("base64")}`} alt={`Signature of ${a.name}`} className="h-10" />
+                <img
+                  src={`data:image/png;base64,${Buffer.from(a.signature).toString("base64")}`}
+                  alt={`Signature of ${a.name}`}
+                  className="h-10"
+                />
               </td>
             </tr>
           ))}

@@ -4,7 +4,13 @@ import { useState } from "react";
 import { FormMessage, PrimaryButton } from "@/app/_components/form";
 import { apiRequest, messageOf } from "@/lib/api-client";
 
-export function ForemenForm({ jobId, foremen }: { jobId: string; foremen: { id: string; name: string; assigned: boolean }[] }) {
+export function ForemenForm({
+  jobId,
+  foremen,
+}: {
+  jobId: string;
+  foremen: { id: string; name: string; assigned: boolean }[];
+}) {
   const [chosen, setChosen] = useState(new Set(foremen.filter((f) => f.assigned).map((f) => f.id)));
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
   const save = async () => {

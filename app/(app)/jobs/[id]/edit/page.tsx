@@ -16,11 +16,36 @@ export default async function EditJobPage({ params }: { params: Promise<{ id: st
     if (err instanceof AppError && err.code === "not_found") notFound();
     throw err;
   });
-  const { name, client, location, lineReference, mileage, accessPoint, nearestHospital, emergencyArrangements, siteContactName, siteContactPhone } = job;
+  const {
+    name,
+    client,
+    location,
+    lineReference,
+    mileage,
+    accessPoint,
+    nearestHospital,
+    emergencyArrangements,
+    siteContactName,
+    siteContactPhone,
+  } = job;
   return (
     <div className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-bold">Edit job</h1>
-      <JobForm jobId={job.id} initial={{ name, client, location, lineReference, mileage, accessPoint, nearestHospital, emergencyArrangements, siteContactName, siteContactPhone }} />
+      <JobForm
+        jobId={job.id}
+        initial={{
+          name,
+          client,
+          location,
+          lineReference,
+          mileage,
+          accessPoint,
+          nearestHospital,
+          emergencyArrangements,
+          siteContactName,
+          siteContactPhone,
+        }}
+      />
       <ForemenForm jobId={job.id} foremen={await listForemen(actor, job.id)} />
     </div>
   );

@@ -12,9 +12,20 @@ import { apiRequest, messageOf } from "@/lib/api-client";
 const SHOWN = 8;
 const TYPING_PAUSE_MS = 200;
 
-export const componentLabel = (c: RegisterEntry) => `${c.name} — ${c.massKg} kg${c.massSource === "estimated" ? " (estimated)" : ""}`;
+export const componentLabel = (c: RegisterEntry) =>
+  `${c.name} — ${c.massKg} kg${c.massSource === "estimated" ? " (estimated)" : ""}`;
 
-export function ComponentPicker({ id, chosen, missing, onChoose }: { id: string; chosen: RegisterEntry | undefined; missing: boolean; onChoose: (entry: RegisterEntry | null) => void }) {
+export function ComponentPicker({
+  id,
+  chosen,
+  missing,
+  onChoose,
+}: {
+  id: string;
+  chosen: RegisterEntry | undefined;
+  missing: boolean;
+  onChoose: (entry: RegisterEntry | null) => void;
+}) {
   const [text, setText] = useState("");
   const [open, setOpen] = useState(false);
   const [query, setQuery] = useState("");
@@ -27,7 +38,11 @@ export function ComponentPicker({ id, chosen, missing, onChoose }: { id: string;
     queryKey: ["register-search", query],
     enabled: open,
     staleTime: 30_000,
-    queryFn: ({ signal }) => apiRequest<{ items: RegisterEntry[]; total: number }>(`/api/v1/components?${new URLSearchParams({ q: query, limit: String(SHOWN), sort: "name" })}`, { signal }),
+    queryFn: ({ signal }) =>
+      apiRequest<{ items: RegisterEntry[]; total: number }>(
+        `/api/v1/components?${new URLSearchParams({ q: query, limit: String(SHOWN), sort: "name" })}`,
+        { signal },
+      ),
   });
 
   const choose = (entry: RegisterEntry | null) => {
@@ -67,7 +82,7 @@ export function ComponentPicker({ id, chosen, missing, onChoose }: { id: string;
         }}
         onFocus={() => setOpen(true)}
         onKeyDown={(e) => e.key === "Escape" && setOpen(false)}
-        aria-controls={`${id}-results`}
+        aria-controls={open ? `${id}-results` : undefined}
         className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
       />
       {open && (
@@ -89,7 +104,11 @@ export function ComponentPicker({ id, chosen, missing, onChoose }: { id: string;
               <ul aria-label="Matching components" className="divide-y divide-rule">
                 {results.data.items.map((c) => (
                   <li key={c.id}>
-                    <button type="button" className="block w-full px-2 py-1.5 text-left hover:bg-paper focus:bg-paper" onClick={() => choose(c)}>
+                    <button
+                      type="button"
+                      className="block w-full px-2 py-1.5 text-left hover:bg-paper focus:bg-paper"
+                      onClick={() => choose(c)}
+                    >
                       {componentLabel(c)}
                     </button>
                   </li>

@@ -7,7 +7,8 @@ import { controlClass, controlProps, FieldError, FieldFrame, withUnit } from "@/
 import type { Content } from "@/assessments/method-statement/content";
 
 /** The error message at a dotted path ("tasks.0.niosh.origin.h"), read with react-hook-form's own helper. */
-export const errorAt = (errors: FieldErrors, path: string): string | undefined => (get(errors, path) as { message?: string } | undefined)?.message;
+export const errorAt = (errors: FieldErrors, path: string): string | undefined =>
+  (get(errors, path) as { message?: string } | undefined)?.message;
 
 /** The form's register, the field's error and an id for its label, for a field of the content. */
 function useContentField(name: FieldPath<Content>) {
@@ -17,7 +18,19 @@ function useContentField(name: FieldPath<Content>) {
   return { register, error, id, control: { ...controlProps(id, error), className: controlClass(error, true) } };
 }
 
-export function Num({ name, label, unit, optional = false, step = "any" }: { name: FieldPath<Content>; label: string; unit?: string; optional?: boolean; step?: string }) {
+export function Num({
+  name,
+  label,
+  unit,
+  optional = false,
+  step = "any",
+}: {
+  name: FieldPath<Content>;
+  label: string;
+  unit?: string;
+  optional?: boolean;
+  step?: string;
+}) {
   const { register, error, id, control } = useContentField(name);
   return (
     <FieldFrame id={id} label={withUnit(label, unit)} error={error} compact>
@@ -26,13 +39,26 @@ export function Num({ name, label, unit, optional = false, step = "any" }: { nam
         inputMode="decimal"
         step={step}
         {...control}
-        {...register(name, { setValueAs: (v: string | number) => (v === "" || v === null ? (optional ? undefined : Number.NaN) : Number(v)) })}
+        {...register(name, {
+          setValueAs: (v: string | number) =>
+            v === "" || v === null ? (optional ? undefined : Number.NaN) : Number(v),
+        })}
       />
     </FieldFrame>
   );
 }
 
-export function Text({ name, label, area = false, hint }: { name: FieldPath<Content>; label: string; area?: boolean; hint?: string }) {
+export function Text({
+  name,
+  label,
+  area = false,
+  hint,
+}: {
+  name: FieldPath<Content>;
+  label: string;
+  area?: boolean;
+  hint?: string;
+}) {
   const { register, error, id, control } = useContentField(name);
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error} compact>
@@ -59,7 +85,11 @@ export function Choice({
   placeholder?: string;
 }) {
   const { register, error, id, control } = useContentField(name);
-  const as = asNumber ? { valueAsNumber: true as const } : placeholder !== undefined ? { setValueAs: (v: string | null) => (v === "" || v === null ? null : v) } : undefined;
+  const as = asNumber
+    ? { valueAsNumber: true as const }
+    : placeholder !== undefined
+      ? { setValueAs: (v: string | null) => (v === "" || v === null ? null : v) }
+      : undefined;
   return (
     <FieldFrame id={id} label={label} error={error} compact>
       <select {...control} {...register(name, as)}>
@@ -88,10 +118,15 @@ type Direction = "level" | "up" | "down";
 type GradientForm = "ratio" | "percent";
 
 /** Rise ÷ run from what was typed: "1 in N" or a percentage, and the direction of travel; or why not. */
-export function parseGradient(direction: Direction, form: GradientForm, typed: string): { gradient: number } | { error: string } {
+export function parseGradient(
+  direction: Direction,
+  form: GradientForm,
+  typed: string,
+): { gradient: number } | { error: string } {
   if (direction === "level") return { gradient: 0 };
   const n = Number(typed.trim().replace(/^1\s*in\s*/i, ""));
-  if (typed.trim() === "" || !Number.isFinite(n)) return { error: form === "ratio" ? "Enter N of 1 in N" : "Enter the gradient in %" };
+  if (typed.trim() === "" || !Number.isFinite(n))
+    return { error: form === "ratio" ? "Enter N of 1 in N" : "Enter the gradient in %" };
   if (form === "ratio" && n < 1) return { error: "1 in N needs N of 1 or more (1 in 1 is 45°)" };
   if (form === "percent" && (n <= 0 || n > 100)) return { error: "A gradient in % is above 0 and at most 100" };
   const rise = form === "ratio" ? 1 / n : n / 100;
@@ -117,14 +152,22 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
     setForm(f);
     setTyped(t);
     const next = parseGradient(d, f, t);
-    setValue(name, ("gradient" in next ? next.gradient : Number.NaN) as never, { shouldValidate: true, shouldDirty: true });
+    setValue(name, ("gradient" in next ? next.gradient : Number.NaN) as never, {
+      shouldValidate: true,
+      shouldDirty: true,
+    });
   };
   const g = "gradient" in parsed ? parsed.gradient : null;
   return (
     <fieldset className="col-span-2 sm:col-span-3">
       <legend className="text-sm font-bold">{label}</legend>
       <div className="mt-1 flex flex-wrap items-center gap-2">
-        <select aria-label="Direction of travel" className={controlClass(undefined, true) + " !mt-0 !w-auto"} value={direction} onChange={(e) => update(e.target.value as Direction, form, typed)}>
+        <select
+          aria-label="Direction of travel"
+          className={controlClass(undefined, true) + " !mt-0 !w-auto"}
+          value={direction}
+          onChange={(e) => update(e.target.value as Direction, form, typed)}
+        >
           <option value="level">Level</option>
           <option value="up">Uphill</option>
           <option value="down">Downhill</option>
@@ -140,7 +183,12 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
               value={typed}
               onChange={(e) => update(direction, form, e.target.value)}
             />
-            <select aria-label="Gradient given as" className={controlClass(undefined, true) + " !mt-0 !w-auto"} value={form} onChange={(e) => update(direction, e.target.value as GradientForm, typed)}>
+            <select
+              aria-label="Gradient given as"
+              className={controlClass(undefined, true) + " !mt-0 !w-auto"}
+              value={form}
+              onChange={(e) => update(direction, e.target.value as GradientForm, typed)}
+            >
               <option value="ratio">1 in N</option>
               <option value="percent">%</option>
             </select>
@@ -149,7 +197,8 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
       </div>
       {g !== null && g !== 0 && (
         <p className="mt-0.5 text-xs text-muted" data-testid="gradient-reading">
-          1 in {Math.round(1 / Math.abs(g))} ({(Math.abs(g) * 100).toFixed(2).replace(/\.?0+$/, "")} %) {g < 0 ? "downhill" : "uphill"} in the direction of travel
+          1 in {Math.round(1 / Math.abs(g))} ({(Math.abs(g) * 100).toFixed(2).replace(/\.?0+$/, "")} %){" "}
+          {g < 0 ? "downhill" : "uphill"} in the direction of travel
         </p>
       )}
       <FieldError id={`${id}-error`} message={error} compact />

@@ -6,7 +6,14 @@ import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { HandZonesDrawing } from "@/app/_components/drawings/hand-zones";
 import { SecondaryButton } from "@/app/_components/form";
 import { ResultPending, TaskResult } from "@/app/_components/results/task-result";
-import { OPERATION_LABELS, OPERATIONS, taskSchema, type Content, type Operation, type Task } from "@/assessments/method-statement/content";
+import {
+  OPERATION_LABELS,
+  OPERATIONS,
+  taskSchema,
+  type Content,
+  type Operation,
+  type Task,
+} from "@/assessments/method-statement/content";
 import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
 import { SURFACES } from "@/assessments/rules/push";
@@ -15,28 +22,80 @@ import { ComponentPicker } from "./component-picker";
 import { Check, Choice, GradientField, Num, Text } from "./fields";
 import { WhatIfChart } from "./what-if-chart";
 
-const SEX = [["male", "Men"], ["female", "Women"]] as const;
-const REACH = [["close", "Close to the body"], ["extended", "At arm's length"]] as const;
-const COUPLING = [["good", "Good"], ["fair", "Fair"], ["poor", "Poor"]] as const;
+const SEX = [
+  ["male", "Men"],
+  ["female", "Women"],
+] as const;
+const REACH = [
+  ["close", "Close to the body"],
+  ["extended", "At arm's length"],
+] as const;
+const COUPLING = [
+  ["good", "Good"],
+  ["fair", "Fair"],
+  ["poor", "Poor"],
+] as const;
 const ZONE_OPTIONS = ZONES.map((z) => [z, ZONE_LABELS[z]] as const);
-const SURFACE = SURFACES.map((s) => [s, s === "rail" ? "Rails (track trolley)" : s === "hard" ? "Hard, even ground" : "Rough: ballast, cess, grass"] as const);
+const SURFACE = SURFACES.map(
+  (s) =>
+    [
+      s,
+      s === "rail" ? "Rails (track trolley)" : s === "hard" ? "Hard, even ground" : "Rough: ballast, cess, grass",
+    ] as const,
+);
 
 /** Inputs a new operation needs, filled with typical values the adviser then changes. */
 export function defaultsFor(operation: Operation, component: RegisterEntry | undefined, quantity = 1): Partial<Task> {
   const coupling = component?.grip ?? "fair";
-  const filter = { sex: "male" as const, zone: "knuckle-to-elbow" as const, reach: "close" as const, frequency: 0.5, twistDeg: 0, teamSize: 1 };
+  const filter = {
+    sex: "male" as const,
+    zone: "knuckle-to-elbow" as const,
+    reach: "close" as const,
+    frequency: 0.5,
+    twistDeg: 0,
+    teamSize: 1,
+  };
   switch (operation) {
     case "lift":
-      return { niosh: { origin: { h: 30, v: 40, a: 0 }, destination: { h: 30, v: 100, a: 0 }, frequency: 0.5, durationHours: 1, coupling, controlAtDestination: false }, filter };
+      return {
+        niosh: {
+          origin: { h: 30, v: 40, a: 0 },
+          destination: { h: 30, v: 100, a: 0 },
+          frequency: 0.5,
+          durationHours: 1,
+          coupling,
+          controlAtDestination: false,
+        },
+        filter,
+      };
     case "team-lift":
       return { filter: { ...filter, teamSize: 2 } };
     case "carry":
       return { filter: { ...filter, carryDistanceM: 10, durationHours: 1 } };
     case "push":
-      return { push: { mass: (component?.massKg ?? 0) * quantity + 60, gradient: 0, sex: "male", teamSize: 1, distanceM: 20, surface: "rail", braked: true, brakeOperator: "" } };
+      return {
+        push: {
+          mass: (component?.massKg ?? 0) * quantity + 60,
+          gradient: 0,
+          sex: "male",
+          teamSize: 1,
+          distanceM: 20,
+          surface: "rail",
+          braked: true,
+          brakeOperator: "",
+        },
+      };
     case "equipment":
       return {
-        lift: { riggingMass: 20, hookBlockMass: 15, ratedCapacity: 1000, sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" }, factors: {}, examinations: [], people: {} },
+        lift: {
+          riggingMass: 20,
+          hookBlockMass: 15,
+          ratedCapacity: 1000,
+          sling: { legs: 2, angleFromVerticalDeg: 30, legWll: 1000, hitch: "straight" },
+          factors: {},
+          examinations: [],
+          people: {},
+        },
       };
   }
 }
@@ -47,7 +106,9 @@ function ConditionsField({ name }: { name: `tasks.${number}.conditions` }) {
   return (
     <fieldset className="rounded border border-rule p-2">
       <legend className="px-1 text-sm font-bold">Working conditions</legend>
-      <p className="text-xs text-muted">Tick each one present where the load is handled; each lifts the task to at least Watch, with its controls.</p>
+      <p className="text-xs text-muted">
+        Tick each one present where the load is handled; each lifts the task to at least Watch, with its controls.
+      </p>
       <div className="mt-1 grid gap-1 sm:grid-cols-2">
         {CONDITIONS.map((c) => (
           <label key={c} className="flex items-center gap-2 text-sm">
@@ -66,7 +127,13 @@ interface RegisterProps {
   onChosen: (entry: RegisterEntry) => void;
 }
 
-function TaskEditor({ index, register, onChosen, revisionId, onRemove }: RegisterProps & { index: number; revisionId: string; onRemove: () => void }) {
+function TaskEditor({
+  index,
+  register,
+  onChosen,
+  revisionId,
+  onRemove,
+}: RegisterProps & { index: number; revisionId: string; onRemove: () => void }) {
   const { setValue, getValues, register: reg } = useFormContext<Content>();
   const task = useWatch<Content, `tasks.${number}`>({ name: `tasks.${index}` }) as Task;
   const component = register.find((c) => c.id === task.componentId);
@@ -82,10 +149,12 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
     const current = getValues(p);
     const defaults = defaultsFor(operation, component, current.quantity || 1);
     for (const [key, value] of Object.entries(defaults)) {
-      if (!current[key as keyof Task]) setValue(`${p}.${key}` as `tasks.${number}.niosh`, value as Task["niosh"], { shouldValidate: true });
+      if (!current[key as keyof Task])
+        setValue(`${p}.${key}` as `tasks.${number}.niosh`, value as Task["niosh"], { shouldValidate: true });
     }
     const filter = current.filter;
-    if (filter && operation === "team-lift" && filter.teamSize < 2) setValue(`${p}.filter.teamSize`, 2, { shouldValidate: true });
+    if (filter && operation === "team-lift" && filter.teamSize < 2)
+      setValue(`${p}.filter.teamSize`, 2, { shouldValidate: true });
     if (filter && operation === "carry" && !filter.carryDistanceM) {
       setValue(`${p}.filter.carryDistanceM`, 10, { shouldValidate: true });
       setValue(`${p}.filter.durationHours`, 1, { shouldValidate: true });
@@ -93,7 +162,11 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
   };
 
   return (
-    <article className="rounded-lg border border-rule bg-paper p-3" aria-label={`Task ${index + 1}`} data-testid={`task-${index}`}>
+    <article
+      className="rounded-lg border border-rule bg-paper p-3"
+      aria-label={`Task ${index + 1}`}
+      data-testid={`task-${index}`}
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <h3 className="text-lg font-bold">Task {index + 1}</h3>
         <SecondaryButton type="button" onClick={onRemove}>
@@ -149,15 +222,18 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
               </div>
               <Check name={`${p}.niosh.controlAtDestination`} label="The load must be placed carefully at the end" />
               <p className="text-xs text-muted">
-                V below 0 is below the standing surface (into an excavation or trough). &ldquo;Rest after&rdquo;: rest or light work once the lifting ends — up to 1 h of lifting
-                counts as short only with at least 1.2 × that time of rest, up to 2 h with 0.3 ×; left blank, the long (2–8 h) column is used.
+                V below 0 is below the standing surface (into an excavation or trough). &ldquo;Rest after&rdquo;: rest
+                or light work once the lifting ends — up to 1 h of lifting counts as short only with at least 1.2 × that
+                time of rest, up to 2 h with 0.3 ×; left blank, the long (2–8 h) column is used.
               </p>
             </fieldset>
           )}
           {task.filter && task.operation !== "push" && task.operation !== "equipment" && (
             <fieldset className="space-y-2 rounded border border-rule p-2">
               <legend className="px-1 text-sm font-bold">Guideline weights</legend>
-              {task.operation === "lift" && <p className="text-xs text-muted">Frequency and twist come from the hand positions above.</p>}
+              {task.operation === "lift" && (
+                <p className="text-xs text-muted">Frequency and twist come from the hand positions above.</p>
+              )}
               <div className="grid grid-cols-2 gap-2 sm:grid-cols-3">
                 <Choice name={`${p}.filter.sex`} label="Figures for" options={SEX} />
                 <Choice name={`${p}.filter.zone`} label="Hands between" options={ZONE_OPTIONS} />
@@ -165,8 +241,12 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
                 {task.operation !== "lift" && <Num name={`${p}.filter.frequency`} label="Times a minute" />}
                 {task.operation !== "lift" && <Num name={`${p}.filter.twistDeg`} label="Twist" unit="°" />}
                 {task.operation !== "lift" && <Num name={`${p}.filter.teamSize`} label="People" step="1" />}
-                {task.operation === "carry" && <Num name={`${p}.filter.carryDistanceM`} label="Carried" unit="m" optional />}
-                {task.operation === "carry" && <Num name={`${p}.filter.durationHours`} label="Hours of carrying" unit="h" optional />}
+                {task.operation === "carry" && (
+                  <Num name={`${p}.filter.carryDistanceM`} label="Carried" unit="m" optional />
+                )}
+                {task.operation === "carry" && (
+                  <Num name={`${p}.filter.durationHours`} label="Hours of carrying" unit="h" optional />
+                )}
               </div>
             </fieldset>
           )}
@@ -188,7 +268,10 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
                 {task.push.braked && <Text name={`${p}.push.brakeOperator`} label="Who works the brake" />}
               </div>
               {task.push.surface === "rail" && (
-                <p className="text-xs text-muted">Trolley use on the line follows the infrastructure manager&rsquo;s rules; Heftwise does not replace them.</p>
+                <p className="text-xs text-muted">
+                  Trolley use on the line follows the infrastructure manager&rsquo;s rules; Heftwise does not replace
+                  them.
+                </p>
               )}
             </fieldset>
           )}
@@ -205,10 +288,14 @@ function TaskEditor({ index, register, onChosen, revisionId, onRemove }: Registe
           {task.operation !== "equipment" && valid.success && <WhatIfChart task={valid.data} component={component} />}
         </div>
         <div className="space-y-3">
-          {score ? <TaskResult score={score} /> : <ResultPending>Complete the highlighted fields to see the result.</ResultPending>}
-          {(task.operation === "lift" || task.filter) && task.operation !== "push" && task.operation !== "equipment" && (
-            <HandZonesDrawing highlight={task.filter?.zone} />
+          {score ? (
+            <TaskResult score={score} />
+          ) : (
+            <ResultPending>Complete the highlighted fields to see the result.</ResultPending>
           )}
+          {(task.operation === "lift" || task.filter) &&
+            task.operation !== "push" &&
+            task.operation !== "equipment" && <HandZonesDrawing highlight={task.filter?.zone} />}
         </div>
       </div>
     </article>
@@ -220,13 +307,32 @@ export function LoadsStep({ register, onChosen, revisionId }: RegisterProps & { 
   const { fields, append, remove } = useFieldArray({ control, name: "tasks" });
   return (
     <div className="space-y-4">
-      <p className="text-sm text-muted">Each handling task is scored as you type, by the same rules that score it when the draft is saved.</p>
+      <p className="text-sm text-muted">
+        Each handling task is scored as you type, by the same rules that score it when the draft is saved.
+      </p>
       {fields.map((field, i) => (
-        <TaskEditor key={field.id} index={i} register={register} onChosen={onChosen} revisionId={revisionId} onRemove={() => remove(i)} />
+        <TaskEditor
+          key={field.id}
+          index={i}
+          register={register}
+          onChosen={onChosen}
+          revisionId={revisionId}
+          onRemove={() => remove(i)}
+        />
       ))}
       <SecondaryButton
         type="button"
-        onClick={() => append({ id: `t-${crypto.randomUUID().slice(0, 8)}`, description: "", componentId: null, quantity: 1, operation: "lift", conditions: [], ...defaultsFor("lift", undefined) })}
+        onClick={() =>
+          append({
+            id: `t-${crypto.randomUUID().slice(0, 8)}`,
+            description: "",
+            componentId: null,
+            quantity: 1,
+            operation: "lift",
+            conditions: [],
+            ...defaultsFor("lift", undefined),
+          })
+        }
       >
         Add a handling task
       </SecondaryButton>

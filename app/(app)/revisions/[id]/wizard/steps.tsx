@@ -13,13 +13,23 @@ const RATINGS = [1, 2, 3, 4, 5].map((n) => [n, String(n)] as const);
 export function ScopeStep() {
   return (
     <div className="space-y-3">
-      <Text name="scope.summary" label="Scope of the work" area hint="What is installed, where, and what is not included." />
+      <Text
+        name="scope.summary"
+        label="Scope of the work"
+        area
+        hint="What is installed, where, and what is not included."
+      />
       <div className="grid max-w-md grid-cols-2 gap-3">
         <div>
           <label htmlFor="f-scope.startDate" className="block text-sm font-bold">
             Planned start
           </label>
-          <input id="f-scope.startDate" type="date" className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...useFormContext<Content>().register("scope.startDate")} />
+          <input
+            id="f-scope.startDate"
+            type="date"
+            className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+            {...useFormContext<Content>().register("scope.startDate")}
+          />
         </div>
         <Num name="scope.durationShifts" label="Shifts" step="1" />
       </div>
@@ -39,10 +49,20 @@ export function SequenceStep() {
             <div className="flex-1">
               <Text name={`sequence.${i}.text`} label={`Step ${i + 1}`} />
             </div>
-            <SecondaryButton type="button" aria-label={`Move step ${i + 1} up`} disabled={i === 0} onClick={() => move(i, i - 1)}>
+            <SecondaryButton
+              type="button"
+              aria-label={`Move step ${i + 1} up`}
+              disabled={i === 0}
+              onClick={() => move(i, i - 1)}
+            >
               ↑
             </SecondaryButton>
-            <SecondaryButton type="button" aria-label={`Move step ${i + 1} down`} disabled={i === fields.length - 1} onClick={() => move(i, i + 1)}>
+            <SecondaryButton
+              type="button"
+              aria-label={`Move step ${i + 1} down`}
+              disabled={i === fields.length - 1}
+              onClick={() => move(i, i + 1)}
+            >
               ↓
             </SecondaryButton>
             <SecondaryButton type="button" aria-label={`Remove step ${i + 1}`} onClick={() => remove(i)}>
@@ -88,7 +108,11 @@ function HazardRow({ index, onRemove }: { index: number; onRemove: () => void })
         {fields.map((field, j) => (
           <div key={field.id} className="grid grid-cols-[1fr_12rem_auto] items-end gap-2">
             <Text name={`hazards.${index}.controls.${j}.text`} label={`Control ${j + 1}`} />
-            <Choice name={`hazards.${index}.controls.${j}.level`} label="Level" options={CONTROL_LEVELS.map((l) => [l, CONTROL_LEVEL_LABELS[l]] as const)} />
+            <Choice
+              name={`hazards.${index}.controls.${j}.level`}
+              label="Level"
+              options={CONTROL_LEVELS.map((l) => [l, CONTROL_LEVEL_LABELS[l]] as const)}
+            />
             <SecondaryButton type="button" aria-label={`Remove control ${j + 1}`} onClick={() => remove(j)}>
               ✕
             </SecondaryButton>
@@ -120,7 +144,12 @@ function LibraryPicker({ library, onPick }: { library: LibraryEntry[]; onPick: (
         <label htmlFor="library-pick" className="block text-sm font-bold">
           From the hazard library
         </label>
-        <select id="library-pick" value={chosen} onChange={(e) => setChosen(e.target.value)} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5">
+        <select
+          id="library-pick"
+          value={chosen}
+          onChange={(e) => setChosen(e.target.value)}
+          className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+        >
           <option value="">Choose a hazard…</option>
           {library.map((e) => (
             <option key={e.id} value={e.id}>
@@ -148,14 +177,28 @@ export function HazardsStep({ library }: { library: LibraryEntry[] }) {
   const { fields, append, remove } = useFieldArray({ control, name: "hazards" });
   return (
     <div className="space-y-3">
-      <p className="text-sm text-muted">Likelihood and severity from 1 to 5; the rating is their product. Prefer controls higher in the hierarchy: eliminate, substitute, engineering, then administrative, then PPE.</p>
+      <p className="text-sm text-muted">
+        Likelihood and severity from 1 to 5; the rating is their product. Prefer controls higher in the hierarchy:
+        eliminate, substitute, engineering, then administrative, then PPE.
+      </p>
       <LibraryPicker library={library} onPick={(entry) => append(hazardFromLibrary(entry, newId("h")))} />
       {fields.map((field, i) => (
         <HazardRow key={field.id} index={i} onRemove={() => remove(i)} />
       ))}
       <SecondaryButton
         type="button"
-        onClick={() => append({ id: newId("h"), hazard: "", whoIsAtRisk: "", likelihoodBefore: 3, severityBefore: 3, controls: [], likelihoodAfter: 2, severityAfter: 3 })}
+        onClick={() =>
+          append({
+            id: newId("h"),
+            hazard: "",
+            whoIsAtRisk: "",
+            likelihoodBefore: 3,
+            severityBefore: 3,
+            controls: [],
+            likelihoodAfter: 2,
+            severityAfter: 3,
+          })
+        }
       >
         Add a hazard
       </SecondaryButton>
@@ -174,7 +217,17 @@ function LineList({ name, label, addLabel }: { name: "people.plant" | "people.pp
           <div className="flex-1">
             <Text name={`${name}.${i}`} label={`${label} ${i + 1}`} />
           </div>
-          <SecondaryButton type="button" aria-label={`Remove ${label.toLowerCase()} ${i + 1}`} onClick={() => setValue(name, items.filter((__, j) => j !== i), { shouldDirty: true })}>
+          <SecondaryButton
+            type="button"
+            aria-label={`Remove ${label.toLowerCase()} ${i + 1}`}
+            onClick={() =>
+              setValue(
+                name,
+                items.filter((__, j) => j !== i),
+                { shouldDirty: true },
+              )
+            }
+          >
             ✕
           </SecondaryButton>
         </div>
@@ -217,17 +270,32 @@ export function EmergencyStep() {
   return (
     <div className="space-y-3">
       <Text name="emergency.nearestHospital" label="Nearest hospital with an emergency department" />
-      <Text name="emergency.arrangements" label="Emergency arrangements" area hint="Who calls whom, the meeting point for the ambulance, first aid, the line's emergency contact." />
+      <Text
+        name="emergency.arrangements"
+        label="Emergency arrangements"
+        area
+        hint="Who calls whom, the meeting point for the ambulance, first aid, the line's emergency contact."
+      />
       <fieldset className="space-y-3 rounded border border-rule p-3">
         <legend className="px-1 font-bold">Environment and welfare</legend>
-        <Text name="environment.spoilAndWaste" label="Spoil and waste" area hint="Where spoil is stockpiled, how waste leaves site." />
+        <Text
+          name="environment.spoilAndWaste"
+          label="Spoil and waste"
+          area
+          hint="Where spoil is stockpiled, how waste leaves site."
+        />
         <div className="grid gap-3 md:grid-cols-2">
           <Text name="environment.spillKit" label="Spill kit" hint="Where it is kept, who is trained to use it." />
           <Text name="environment.backfill" label="Backfill materials" />
         </div>
         <Text name="environment.noiseAndDust" label="Noise and dust" area />
         <Text name="environment.welfare" label="Welfare facilities" area />
-        <Text name="emergency.environment" label="Other environmental notes" area hint="Wildlife, watercourses, neighbours." />
+        <Text
+          name="emergency.environment"
+          label="Other environmental notes"
+          area
+          hint="Wildlife, watercourses, neighbours."
+        />
       </fieldset>
     </div>
   );

@@ -17,8 +17,13 @@ import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from 
 import { STEPS, type StepKey } from "./steps-list";
 import { ApiError, apiRequest, applyFieldIssues, messageOf } from "@/lib/api-client";
 
-
-type SaveState = { kind: "saved"; at: Date | null } | { kind: "dirty" } | { kind: "saving" } | { kind: "invalid" } | { kind: "conflict"; message: string } | { kind: "error"; message: string };
+type SaveState =
+  | { kind: "saved"; at: Date | null }
+  | { kind: "dirty" }
+  | { kind: "saving" }
+  | { kind: "invalid" }
+  | { kind: "conflict"; message: string }
+  | { kind: "error"; message: string };
 
 interface Props {
   revisionId: string;
@@ -33,18 +38,36 @@ interface Props {
 
 const AUTOSAVE_MS = 1200;
 
-export function Wizard({ revisionId, initialVersion, initialContent, register, approvers, library, initialStep = "scope" }: Props) {
+export function Wizard({
+  revisionId,
+  initialVersion,
+  initialContent,
+  register,
+  approvers,
+  library,
+  initialStep = "scope",
+}: Props) {
   const router = useRouter();
   // Checkbox groups need an array to start from, or react-hook-form reads them as one checkbox.
-  const defaultValues = useMemo(() => ({ ...initialContent, tasks: initialContent.tasks.map((t) => ({ ...t, conditions: t.conditions ?? [] })) }), [initialContent]);
-  const methods = useForm<Content>({ defaultValues, resolver: zodResolver(contentSchema) as Resolver<Content>, mode: "onChange" });
+  const defaultValues = useMemo(
+    () => ({ ...initialContent, tasks: initialContent.tasks.map((t) => ({ ...t, conditions: t.conditions ?? [] })) }),
+    [initialContent],
+  );
+  const methods = useForm<Content>({
+    defaultValues,
+    resolver: zodResolver(contentSchema) as Resolver<Content>,
+    mode: "onChange",
+  });
   const { control, getValues, trigger, watch } = methods;
   const [step, setStep] = useState<StepKey>(initialStep);
   const [save, setSave] = useState<SaveState>({ kind: "saved", at: null });
   const version = useRef(initialVersion);
   // The register entries known here grow as components are chosen: scoring on screen needs them.
   const [known, setKnown] = useState(register);
-  const remember = useCallback((entry: RegisterEntry) => setKnown((list) => (list.some((e) => e.id === entry.id) ? list : [...list, entry])), []);
+  const remember = useCallback(
+    (entry: RegisterEntry) => setKnown((list) => (list.some((e) => e.id === entry.id) ? list : [...list, entry])),
+    [],
+  );
   const values = useWatch({ control });
 
   const saveNow = useCallback(async (): Promise<boolean> => {
@@ -56,13 +79,17 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
     }
     setSave({ kind: "saving" });
     try {
-      const body = await apiRequest<{ version: number }>(`/api/v1/revisions/${revisionId}`, { method: "PUT", json: { version: version.current, content: parsed.data } });
+      const body = await apiRequest<{ version: number }>(`/api/v1/revisions/${revisionId}`, {
+        method: "PUT",
+        json: { version: version.current, content: parsed.data },
+      });
       version.current = body.version;
       setSave({ kind: "saved", at: new Date() });
       return true;
     } catch (err) {
       if (err instanceof ApiError && err.status === 409) setSave({ kind: "conflict", message: err.message });
-      else if (err instanceof ApiError && err.offline) setSave({ kind: "error", message: "No connection: your changes are kept here and saved when you continue." });
+      else if (err instanceof ApiError && err.offline)
+        setSave({ kind: "error", message: "No connection: your changes are kept here and saved when you continue." });
       else setSave({ kind: "error", message: messageOf(err) });
       return false;
     }
@@ -107,7 +134,11 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
               className={`rounded-full border px-3 py-1.5 text-sm font-bold ${step === s.key ? "border-frame bg-frame text-frame-ink" : "border-rule bg-white hover:border-accent"}`}
             >
               <span className="tabular-nums">{i + 1}</span> {s.label}
-              {review.missing.some((m) => m.step === s.key) && <span className="ml-1 text-band-act" aria-label="needs attention">•</span>}
+              {review.missing.some((m) => m.step === s.key) && (
+                <span className="ml-1 text-band-act" aria-label="needs attention">
+                  •
+                </span>
+              )}
             </button>
           ))}
         </nav>
@@ -126,10 +157,25 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
             {step === "people" && <PeopleStep />}
             {step === "emergency" && <EmergencyStep />}
           </form>
-          {step === "review" && <ReviewStep revisionId={revisionId} missing={review.missing} worstBand={review.worstBand} approvers={approvers} saveNow={saveNow} version={version} goTo={go} />}
+          {step === "review" && (
+            <ReviewStep
+              revisionId={revisionId}
+              missing={review.missing}
+              worstBand={review.worstBand}
+              approvers={approvers}
+              saveNow={saveNow}
+              version={version}
+              goTo={go}
+            />
+          )}
         </section>
         <div className="flex justify-between">
-          <button type="button" className="font-bold text-accent underline disabled:opacity-40" disabled={step === STEPS[0].key} onClick={() => go(STEPS[STEPS.findIndex((s) => s.key === step) - 1].key)}>
+          <button
+            type="button"
+            className="font-bold text-accent underline disabled:opacity-40"
+            disabled={step === STEPS[0].key}
+            onClick={() => go(STEPS[STEPS.findIndex((s) => s.key === step) - 1].key)}
+          >
             ← Back
           </button>
           {step !== "review" && (
@@ -146,10 +192,20 @@ export function Wizard({ revisionId, initialVersion, initialContent, register, a
 function SaveStatus({ state, onReload }: { state: SaveState; onReload: () => void }) {
   switch (state.kind) {
     case "saved":
-      return <p className="text-sm text-muted" role="status">{state.at ? `All changes saved at ${state.at.toLocaleTimeString("en-GB", { hour: "2-digit", minute: "2-digit" })}.` : "Draft opened. Changes save automatically."}</p>;
+      return (
+        <p className="text-sm text-muted" role="status">
+          {state.at
+            ? `All changes saved at ${state.at.toLocaleTimeString("en-GB", { hour: "2-digit", minute: "2-digit" })}.`
+            : "Draft opened. Changes save automatically."}
+        </p>
+      );
     case "dirty":
     case "saving":
-      return <p className="text-sm text-muted" role="status">Saving…</p>;
+      return (
+        <p className="text-sm text-muted" role="status">
+          Saving…
+        </p>
+      );
     case "invalid":
       return <FormMessage tone="error">Not saved yet: some fields need attention (marked in red).</FormMessage>;
     case "error":
@@ -187,7 +243,10 @@ function ReviewStep({
   const router = useRouter();
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string; items?: string[] } | null>(null);
   // Fixed when the step opens: the accepted range, and six months ahead as the suggestion.
-  const [dates] = useState(() => ({ ...reviewDateRange(), suggested: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10) }));
+  const [dates] = useState(() => ({
+    ...reviewDateRange(),
+    suggested: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10),
+  }));
   const { register, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
     resolver: zodResolver(submitFormSchema),
     defaultValues: { approverId: approvers[0]?.id ?? "", reviewDate: dates.suggested },
@@ -200,7 +259,9 @@ function ReviewStep({
       return;
     }
     try {
-      const body = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/submit`, { json: { ...values, version: version.current } });
+      const body = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/submit`, {
+        json: { ...values, version: version.current },
+      });
       // The page re-renders read-only; the notice says whether the approver was e-mailed.
       router.replace(`/revisions/${revisionId}?notice=${body.mail?.status === "failed" ? "mail-failed" : "submitted"}`);
       router.refresh();
@@ -244,8 +305,19 @@ function ReviewStep({
               </option>
             ))}
           </SelectField>
-          <TextField label="Review by" type="date" min={dates.earliest} max={dates.latest} error={formState.errors.reviewDate?.message} {...register("reviewDate")} />
-          <PrimaryButton type="submit" disabled={formState.isSubmitting || missing.length > 0 || approvers.length === 0} className="sm:col-span-2">
+          <TextField
+            label="Review by"
+            type="date"
+            min={dates.earliest}
+            max={dates.latest}
+            error={formState.errors.reviewDate?.message}
+            {...register("reviewDate")}
+          />
+          <PrimaryButton
+            type="submit"
+            disabled={formState.isSubmitting || missing.length > 0 || approvers.length === 0}
+            className="sm:col-span-2"
+          >
             {formState.isSubmitting ? "Submitting…" : "Submit for approval"}
           </PrimaryButton>
         </fieldset>

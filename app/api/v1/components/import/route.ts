@@ -9,6 +9,7 @@ const MAX_CSV_BYTES = 1_000_000;
 export const POST = handler(async (request: Request) => {
   const actor = await requireApiActor("components:write");
   const csv = await readText(request, ["text/csv", "text/plain"], MAX_CSV_BYTES, "Send the file as text/csv");
-  if (new URL(request.url).searchParams.get("dryRun") === "1") return NextResponse.json(await previewImport(actor, csv));
+  if (new URL(request.url).searchParams.get("dryRun") === "1")
+    return NextResponse.json(await previewImport(actor, csv));
   return NextResponse.json(await importComponents(actor, csv), { status: 201 });
 });

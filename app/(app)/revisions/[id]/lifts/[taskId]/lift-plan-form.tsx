@@ -6,7 +6,15 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { SlingDiagram } from "@/app/_components/drawings/sling-diagram";
-import { controlClass, controlProps, FieldFrame, FormMessage, PrimaryButton, SecondaryButton, withUnit } from "@/app/_components/form";
+import {
+  controlClass,
+  controlProps,
+  FieldFrame,
+  FormMessage,
+  PrimaryButton,
+  SecondaryButton,
+  withUnit,
+} from "@/app/_components/form";
 import { ResultPending, TaskResult } from "@/app/_components/results/task-result";
 import { liftPlanInputsSchema, type Content } from "@/assessments/method-statement/content";
 import { errorAt } from "../../wizard/fields";
@@ -49,7 +57,12 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
 
   const score = useMemo(() => {
     const parsed = liftPlanInputsSchema.safeParse(plan);
-    return parsed.success && load !== null ? scoreTask({ ...task, lift: parsed.data }, { id: "c", name: "", massKg: load / (task.quantity || 1), grip: "poor", massSource: "datasheet" }) : null;
+    return parsed.success && load !== null
+      ? scoreTask(
+          { ...task, lift: parsed.data },
+          { id: "c", name: "", massKg: load / (task.quantity || 1), grip: "poor", massSource: "datasheet" },
+        )
+      : null;
   }, [plan, load, task]);
 
   const num = (name: string, label: string, unit?: string, optional = false) => {
@@ -64,7 +77,9 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
           disabled={!editable}
           {...controlProps(id, error)}
           className={controlClass(error, true)}
-          {...register(name as "riggingMass", { setValueAs: (v: string | number) => (v === "" ? (optional ? undefined : Number.NaN) : Number(v)) })}
+          {...register(name as "riggingMass", {
+            setValueAs: (v: string | number) => (v === "" ? (optional ? undefined : Number.NaN) : Number(v)),
+          })}
         />
       </FieldFrame>
     );
@@ -75,14 +90,25 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
     const id = `lp-${name}`;
     return (
       <FieldFrame id={id} label={label} error={error} compact>
-        <input disabled={!editable} {...controlProps(id, error)} className={controlClass(error, true)} {...register(name as "groundBearingNotes", optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined)} />
+        <input
+          disabled={!editable}
+          {...controlProps(id, error)}
+          className={controlClass(error, true)}
+          {...register(
+            name as "groundBearingNotes",
+            optional ? { setValueAs: (v: string) => (v === "" ? undefined : v) } : undefined,
+          )}
+        />
       </FieldFrame>
     );
   };
 
   const onSave = handleSubmit(async (values) => {
     setOutcome(null);
-    const next: Content = { ...content, tasks: content.tasks.map((t) => (t.id === taskId ? { ...t, lift: values } : t)) };
+    const next: Content = {
+      ...content,
+      tasks: content.tasks.map((t) => (t.id === taskId ? { ...t, lift: values } : t)),
+    };
     try {
       await apiRequest(`/api/v1/revisions/${revisionId}`, { method: "PUT", json: { version, content: next } });
       setOutcome({ tone: "success", text: "Lift plan saved." });
@@ -110,7 +136,12 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
             <label htmlFor="lp-legs" className="block text-sm font-bold">
               Legs
             </label>
-            <select id="lp-legs" disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register("sling.legs", { valueAsNumber: true })}>
+            <select
+              id="lp-legs"
+              disabled={!editable}
+              className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+              {...register("sling.legs", { valueAsNumber: true })}
+            >
               {[1, 2, 3, 4].map((n) => (
                 <option key={n} value={n}>
                   {n}
@@ -124,7 +155,12 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
             <label htmlFor="lp-hitch" className="block text-sm font-bold">
               Hitch
             </label>
-            <select id="lp-hitch" disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register("sling.hitch")}>
+            <select
+              id="lp-hitch"
+              disabled={!editable}
+              className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+              {...register("sling.hitch")}
+            >
               {HITCHES.map((h) => (
                 <option key={h} value={h}>
                   {HITCH_LABELS[h][0].toUpperCase() + HITCH_LABELS[h].slice(1)}
@@ -134,8 +170,8 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
           </div>
           {num("sling.markedWll", "WLL marked on the assembly", "kg")}
           <p className="col-span-2 text-xs text-muted sm:col-span-3">
-            The marked limit for this hitch and angle, read from the tag. Where it is lower than leg WLL × mode factor, the marked limit governs. A basket or endless sling is
-            one sling: 1 leg.
+            The marked limit for this hitch and angle, read from the tag. Where it is lower than leg WLL × mode factor,
+            the marked limit governs. A basket or endless sling is one sling: 1 leg.
           </p>
         </fieldset>
         <fieldset className="rounded-lg border border-rule bg-white p-3">
@@ -159,7 +195,12 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
                 <label htmlFor={`lp-ex-kind-${i}`} className="block text-sm font-bold">
                   Kind
                 </label>
-                <select id={`lp-ex-kind-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`examinations.${i}.kind`)}>
+                <select
+                  id={`lp-ex-kind-${i}`}
+                  disabled={!editable}
+                  className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+                  {...register(`examinations.${i}.kind`)}
+                >
                   <option value="equipment">Lifting equipment</option>
                   <option value="accessory">Accessory</option>
                   <option value="lifts-people">Lifts people</option>
@@ -168,14 +209,21 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
               {text(`examinations.${i}.lastExamined`, "Last examined")}
               {text(`examinations.${i}.schemeDueDate`, "Scheme due (optional)", true)}
               {editable && (
-                <SecondaryButton type="button" aria-label={`Remove examination ${i + 1}`} onClick={() => exams.remove(i)}>
+                <SecondaryButton
+                  type="button"
+                  aria-label={`Remove examination ${i + 1}`}
+                  onClick={() => exams.remove(i)}
+                >
                   ✕
                 </SecondaryButton>
               )}
             </div>
           ))}
           {editable && (
-            <SecondaryButton type="button" onClick={() => exams.append({ item: "", kind: "accessory", lastExamined: "" })}>
+            <SecondaryButton
+              type="button"
+              onClick={() => exams.append({ item: "", kind: "accessory", lastExamined: "" })}
+            >
               Add an examination record
             </SecondaryButton>
           )}
@@ -185,7 +233,8 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
           {num("wind.inServiceLimitMs", "Maker's in-service limit", "m/s")}
           {num("wind.forecastMs", "Forecast", "m/s")}
           <label className="flex items-center gap-2 self-end pb-2 text-sm font-bold">
-            <input type="checkbox" disabled={!editable} className="h-5 w-5" {...register("wind.largeSailArea")} /> Large sail area
+            <input type="checkbox" disabled={!editable} className="h-5 w-5" {...register("wind.largeSailArea")} /> Large
+            sail area
           </label>
         </fieldset>
         <fieldset className="grid gap-3 rounded-lg border border-rule bg-white p-3 sm:grid-cols-2">
@@ -222,8 +271,9 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
           </div>
           {num("groundBearing.allowableKpa", "Allowable bearing pressure", "kPa, optional", true)}
           <p className="col-span-2 text-xs text-muted sm:col-span-3">
-            An allowable pressure from a ground investigation governs; otherwise the presumed value for the ground type (BS 8004:1986 Table 1, withdrawn; lower end of each
-            range) is used. Loose and soft ground has no presumed value.
+            An allowable pressure from a ground investigation governs; otherwise the presumed value for the ground type
+            (BS 8004:1986 Table 1, withdrawn; lower end of each range) is used. Loose and soft ground has no presumed
+            value.
           </p>
           <div className="col-span-2 sm:col-span-3">{text("groundBearingNotes", "Ground and outrigger notes")}</div>
         </fieldset>
@@ -236,7 +286,12 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
                 <label htmlFor={`lp-acc-kind-${i}`} className="block text-sm font-bold">
                   Kind
                 </label>
-                <select id={`lp-acc-kind-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`accessories.${i}.kind`)}>
+                <select
+                  id={`lp-acc-kind-${i}`}
+                  disabled={!editable}
+                  className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+                  {...register(`accessories.${i}.kind`)}
+                >
                   {ACCESSORY_KINDS.map((k) => (
                     <option key={k} value={k}>
                       {k.replace(/-/g, " ")}
@@ -249,20 +304,32 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
                 <label htmlFor={`lp-acc-carries-${i}`} className="block text-sm font-bold">
                   Carries
                 </label>
-                <select id={`lp-acc-carries-${i}`} disabled={!editable} className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5" {...register(`accessories.${i}.carries`)}>
+                <select
+                  id={`lp-acc-carries-${i}`}
+                  disabled={!editable}
+                  className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
+                  {...register(`accessories.${i}.carries`)}
+                >
                   <option value="whole-load">The whole load</option>
                   <option value="one-leg">One leg</option>
                 </select>
               </div>
               {editable && (
-                <SecondaryButton type="button" aria-label={`Remove accessory ${i + 1}`} onClick={() => accessories.remove(i)}>
+                <SecondaryButton
+                  type="button"
+                  aria-label={`Remove accessory ${i + 1}`}
+                  onClick={() => accessories.remove(i)}
+                >
                   ✕
                 </SecondaryButton>
               )}
             </div>
           ))}
           {editable && (
-            <SecondaryButton type="button" onClick={() => accessories.append({ item: "", kind: "shackle", wllKg: Number.NaN, carries: "one-leg" })}>
+            <SecondaryButton
+              type="button"
+              onClick={() => accessories.append({ item: "", kind: "shackle", wllKg: Number.NaN, carries: "one-leg" })}
+            >
               Add an accessory
             </SecondaryButton>
           )}
@@ -288,7 +355,9 @@ export function LiftPlanForm({ revisionId, taskId, version, content, load, edita
             <TaskResult score={score} />
           </>
         ) : (
-          <ResultPending>{load === null ? "Choose the component first." : "Complete the highlighted fields to see the result."}</ResultPending>
+          <ResultPending>
+            {load === null ? "Choose the component first." : "Complete the highlighted fields to see the result."}
+          </ResultPending>
         )}
       </div>
     </form>

@@ -31,7 +31,10 @@ export default async function LiftPlanPage({ params }: { params: Promise<{ id: s
         </p>
         <h1 className="text-2xl font-bold">Lift plan: {task.description || "lift with equipment"}</h1>
         <p className="text-sm text-muted">
-          Planned by a competent person under LOLER 1998 reg. 8; roles as BS 7121 names them. Load: {component ? `${component.name}, ${component.massKg * (task.quantity || 1)} kg` : "choose the component on the Loads & lifts step"}
+          Planned by a competent person under LOLER 1998 reg. 8; roles as BS 7121 names them. Load:{" "}
+          {component
+            ? `${component.name}, ${component.massKg * (task.quantity || 1)} kg`
+            : "choose the component on the Loads & lifts step"}
           {component?.massSource === "estimated" ? " (estimated mass — confirm by weighing)" : ""}.
         </p>
       </header>

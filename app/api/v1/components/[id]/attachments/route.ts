@@ -9,9 +9,14 @@ export const POST = handler(async (request: Request, { params }: { params: Promi
   const actor = await requireApiActor("components:write");
   const { id } = await params;
   await getComponent(actor, id);
-  const form = await readForm(request, MAX_ATTACHMENT_BYTES + 64 * 1024, "Send the file as multipart/form-data in a field named file");
+  const form = await readForm(
+    request,
+    MAX_ATTACHMENT_BYTES + 64 * 1024,
+    "Send the file as multipart/form-data in a field named file",
+  );
   const file = form.get("file");
-  if (!(file instanceof File)) throw new AppError("validation", "Choose a file", [{ path: "file", message: "Choose a file" }]);
+  if (!(file instanceof File))
+    throw new AppError("validation", "Choose a file", [{ path: "file", message: "Choose a file" }]);
   const row = await addAttachment(actor, id, { name: file.name, data: new Uint8Array(await file.arrayBuffer()) });
   return NextResponse.json(row, { status: 201 });
 });

@@ -7,5 +7,11 @@ export const GET = handler(async (request: Request, { params }: { params: Promis
   const actor = await requireApiActor("briefings:run");
   const briefingId = new URL(request.url).searchParams.get("briefing") ?? undefined;
   const sheet = await briefingSheetPdf(actor, (await params).id, briefingId);
-  return new Response(Buffer.from(sheet.data), { headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${sheet.filename}"`, "cache-control": "private, no-store" } });
+  return new Response(Buffer.from(sheet.data), {
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `attachment; filename="${sheet.filename}"`,
+      "cache-control": "private, no-store",
+    },
+  });
 });

@@ -6,6 +6,10 @@ import { getActor } from "@/lib/auth/session";
 export const GET = handler(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const file = await getPackFile(await getActor(), (await params).id);
   return new Response(Buffer.from(file.data), {
-    headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${file.filename}"`, "cache-control": "private, no-store" },
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `attachment; filename="${file.filename}"`,
+      "cache-control": "private, no-store",
+    },
   });
 });
