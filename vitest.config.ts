@@ -1,6 +1,8 @@
 import { defineConfig, type TestProjectInlineConfiguration } from "vitest/config";
 
-const alias = { "@": import.meta.dirname };
+// The domain's services are marked server-only (they must never reach a browser bundle); tests run
+// them directly, as the server does.
+const alias = { "@": import.meta.dirname, "server-only": `${import.meta.dirname}/node_modules/server-only/empty.js` };
 const common = { setupFiles: ["tests/integration/setup.ts"], testTimeout: 20_000, hookTimeout: 30_000 };
 
 // Unit and integration tests run on in-memory PGlite with the real migrations. When

@@ -3,6 +3,7 @@
  * for phones that lose signal), completion with the foreman's own signature, site change notes, and
  * the briefing sheet.
  */
+import "server-only";
 import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";

@@ -3,6 +3,7 @@
  * add, change and remove entries, and can add the starter set at any time (entries already there by
  * name are left alone). Another organisation's entry is "not found".
  */
+import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { z } from "zod";
 import { getDb, type Queryable } from "@/db/client";

@@ -1,3 +1,4 @@
+import "server-only";
 import { and, asc, count, eq, getTableColumns } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { jobs } from "@/db/schema";

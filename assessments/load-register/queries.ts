@@ -1,3 +1,4 @@
+import "server-only";
 import { asc, count, eq, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { components } from "@/db/schema";

@@ -2,6 +2,7 @@
  * The load register: components with their masses and where the masses came from, a CSV import
  * that is all-or-nothing, and attachments (data sheets, photographs) checked by their content.
  */
+import "server-only";
 import { and, asc, count, eq, getTableColumns, ilike, type SQL } from "drizzle-orm";
 import Papa from "papaparse";
 import { z } from "zod";

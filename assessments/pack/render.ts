@@ -2,6 +2,7 @@
  * Renders the pack of one revision from what is stored: its content, the results snapshot saved with
  * it (so an approved pack never changes when the rules do), names, signatures.
  */
+import "server-only";
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { and, asc, eq, inArray, isNotNull } from "drizzle-orm";

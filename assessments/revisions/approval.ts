@@ -4,6 +4,7 @@
  * superseded) or return with comments, a new revision from an approved one, pack downloads,
  * verification of an uploaded pack, and the audit trail.
  */
+import "server-only";
 import { createHash } from "node:crypto";
 import { and, asc, desc, eq, ne } from "drizzle-orm";
 import { z } from "zod";

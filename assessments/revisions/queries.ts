@@ -1,3 +1,4 @@
+import "server-only";
 import { and, count, desc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { assessments, jobs, revisions } from "@/db/schema";

@@ -3,6 +3,7 @@
  * draft (optimistic concurrency by version), submit. Every function checks the permission table and
  * the organisation first; another organisation's record is "not found".
  */
+import "server-only";
 import { createHash } from "node:crypto";
 import { and, asc, count, eq, ilike, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";

@@ -59,6 +59,8 @@ function seed() {
   const result = spawnSync(
     process.execPath,
     [
+      // The domain is marked server-only; outside Next.js, the condition says where it runs.
+      "--conditions=react-server",
       "--import",
       "tsx",
       "assessments/cli/seed-scale.ts",

@@ -28,6 +28,8 @@ function startDemo(): Promise<() => void> {
   const demo = spawn(
     process.execPath,
     [
+      // The domain is marked server-only; outside Next.js, the condition says where it runs.
+      "--conditions=react-server",
       "--import",
       "tsx",
       "assessments/cli/demo.ts",
