@@ -24,6 +24,8 @@ interface Props<T> {
   defaultSort?: string;
   searchLabel?: string;
   pageSize?: number;
+  /** The first page as the server rendered it (no search, filters or cursor, the default sort): shown at once. */
+  initialPage?: PageResponse<T>;
   emptyText: string;
   caption: string;
 }
@@ -42,6 +44,7 @@ export function ServerTable<T>({
   defaultSort,
   searchLabel = "Search",
   pageSize = 20,
+  initialPage,
   emptyText,
   caption,
 }: Props<T>) {
@@ -57,9 +60,12 @@ export function ServerTable<T>({
   if (sort) params.set("sort", sort);
   if (cursor) params.set("cursor", cursor);
 
+  const isFirstView = !search.trim() && !Object.values(values).some(Boolean) && sort === defaultSort && !cursor;
   const query = useQuery({
     queryKey: [endpoint, params.toString()],
     placeholderData: keepPreviousData,
+    // The server rendered the first page with the HTML: no request, no empty table, no layout shift.
+    initialData: isFirstView ? initialPage : undefined,
     queryFn: ({ signal }) => apiRequest<PageResponse<T>>(`${endpoint}?${params}`, { signal }),
   });
 

@@ -1,9 +1,14 @@
 /** Sign-in and password forms: one schema each, used by the form and by the server. */
 import { z } from "zod";
+import * as zm from "zod/mini";
 
-export const signInSchema = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email("Enter an e-mail address")),
-  password: z.string().min(1, "Enter your password").max(200),
+/**
+ * Written with zod's small build (the same validation, a fraction of the code): the sign-in page is
+ * the first a phone on site loads, and this schema is its only one.
+ */
+export const signInSchema = zm.object({
+  email: zm.pipe(zm.string().check(zm.trim(), zm.toLowerCase()), zm.email("Enter an e-mail address")),
+  password: zm.string().check(zm.minLength(1, "Enter your password"), zm.maxLength(200)),
 });
 
 export const PASSWORD_MIN = 10;
@@ -18,5 +23,5 @@ export const setPasswordSchema = z
   })
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ" });
 
-export type SignInInput = z.infer<typeof signInSchema>;
+export type SignInInput = zm.infer<typeof signInSchema>;
 export type SetPasswordInput = z.infer<typeof setPasswordSchema>;

@@ -59,9 +59,12 @@ const columns: ColumnDef<Row, unknown>[] = [
 export function AssessmentsTable({
   jobs,
   authors,
+  firstPage,
 }: {
   jobs: { id: string; name: string }[];
   authors: { id: string; name: string }[];
+  /** The first 20 rows, last saved first, as the API would answer them. */
+  firstPage: { items: Row[]; nextCursor: string | null; total: number };
 }) {
   const filters: FilterSpec[] = [
     { key: "status", label: "Status", options: Object.entries(STATUS).map(([value, label]) => ({ value, label })) },
@@ -83,6 +86,8 @@ export function AssessmentsTable({
       searchLabel="Search titles"
       emptyText="No assessment matches."
       defaultSort="-updatedAt"
+      pageSize={20}
+      initialPage={firstPage}
       sortKeys={{ title: ["title", "-title"], updatedAt: ["updatedAt", "-updatedAt"] }}
     />
   );

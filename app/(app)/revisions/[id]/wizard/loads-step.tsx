@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useMemo } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
@@ -20,7 +21,12 @@ import { SURFACES } from "@/assessments/rules/push";
 import { CONDITION_TEXT, CONDITIONS } from "@/assessments/rules/conditions";
 import { ComponentPicker } from "./component-picker";
 import { Check, Choice, GradientField, Num, Text } from "./fields";
-import { WhatIfChart } from "./what-if-chart";
+// The chart library is the heaviest part of the wizard: loaded after the page is usable, and only
+// where a chart is drawn.
+const WhatIfChart = dynamic(() => import("./what-if-chart").then((m) => m.WhatIfChart), {
+  ssr: false,
+  loading: () => <p className="text-sm text-muted">Drawing the what-if chart…</p>,
+});
 
 const SEX = [
   ["male", "Men"],
