@@ -101,7 +101,7 @@ export function ComponentPicker({
             </p>
           ) : (
             <>
-              <ul aria-label="Matching components" className="divide-y divide-rule">
+              <ul aria-label="Found in the load register" className="divide-y divide-rule">
                 {results.data.items.map((c) => (
                   <li key={c.id}>
                     <button
