@@ -77,6 +77,22 @@ export async function readForm(request: Request, maxBytes: number, message: stri
     });
 }
 
+export interface Upload {
+  name: string;
+  data: Uint8Array;
+}
+
+/**
+ * A file field of a form read by `readForm`: its name and bytes, or undefined when no file was chosen
+ * (a browser then sends an empty part without a name). An empty file that has a name is returned,
+ * for the caller to refuse as empty.
+ */
+export async function formFile(form: FormData, field: string): Promise<Upload | undefined> {
+  const file = form.get(field);
+  if (!(file instanceof File) || (file.size === 0 && !file.name)) return undefined;
+  return { name: file.name, data: new Uint8Array(await file.arrayBuffer()) };
+}
+
 export function errorResponse(err: unknown): NextResponse {
   const known = toAppError(err);
   if (known) return NextResponse.json(known.toJSON(), { status: known.status });

@@ -73,3 +73,6 @@ export function config(): Config {
   cached ??= parseConfig(process.env);
   return cached;
 }
+
+/** An absolute link to a page of this installation (e-mails, the pack's QR code): `appUrl("/verify")`. */
+export const appUrl = (path: string) => `${config().NEXTAUTH_URL.replace(/\/$/, "")}${path}`;

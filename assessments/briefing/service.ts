@@ -20,7 +20,7 @@ import {
   users,
 } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { config } from "@/lib/config";
+import { appUrl } from "@/lib/config";
 import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
@@ -34,8 +34,9 @@ import type { TaskScore } from "../method-statement/score-task";
 import { briefingScript } from "./instructions";
 import { attendeeSchema, completeBriefingSchema, siteChangeSchema, startBriefingSchema } from "./schemas";
 import { isAssignedToJob } from "./assignment";
+import { isUuid } from "@/lib/ids";
+import { requireFileType } from "@/lib/files";
 
-const isUuid = (s: string) => z.uuid().safeParse(s).success;
 const startOfToday = () => {
   const d = new Date();
   d.setUTCHours(0, 0, 0, 0);
@@ -327,10 +328,13 @@ export async function createSiteChangeNote(
   if (photo) {
     if (photo.data.byteLength > 10 * 1024 * 1024)
       throw new AppError("payload_too_large", "Photos can be at most 10 MB");
-    const { fileTypeFromBuffer } = await import("file-type");
-    photoType = (await fileTypeFromBuffer(photo.data))?.mime;
-    if (!photoType || !["image/jpeg", "image/png", "image/webp"].includes(photoType))
-      throw new AppError("unsupported_media_type", "Attach a photograph (JPEG, PNG or WebP)");
+    photoType = (
+      await requireFileType(
+        photo.data,
+        ["image/jpeg", "image/png", "image/webp"],
+        "Attach a photograph (JPEG, PNG or WebP)",
+      )
+    ).mime;
   }
   const db = await getDb();
   await db.transaction(async (tx) => {
@@ -367,7 +371,7 @@ export async function createSiteChangeNote(
     ],
     action: {
       label: "Open the assessment",
-      url: `${config().NEXTAUTH_URL.replace(/\/$/, "")}/revisions/${revision.id}`,
+      url: appUrl(`/revisions/${revision.id}`),
     },
   });
   return {

@@ -6,11 +6,12 @@ import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { authorize, type Actor } from "@/lib/permissions";
 import { jobSchema } from "./schemas";
+import { isUuid } from "@/lib/ids";
 
 export async function getJob(actor: Actor | null, jobId: string) {
   authorize(actor, "jobs:read");
   const db = await getDb();
-  const job = /^[0-9a-f-]{36}$/i.test(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
+  const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
   if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
   return job;
 }

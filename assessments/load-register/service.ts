@@ -17,8 +17,8 @@ import { afterCursor, keysetColumns, keysetPage, orderOf, pageQuerySchema, type 
 import { authorize, type Actor } from "@/lib/permissions";
 import { deleteFile, getFile, putFile } from "@/lib/storage";
 import { componentSchema, CSV_COLUMNS, MAX_IMPORT_ROWS } from "./schemas";
-
-const isUuid = (s: string) => z.uuid().safeParse(s).success;
+import { isUuid } from "@/lib/ids";
+import { requireFileType } from "@/lib/files";
 
 export const componentListQuerySchema = pageQuerySchema.extend({
   q: z.string().trim().max(100).optional(),
@@ -311,13 +311,11 @@ export async function addAttachment(
     throw new AppError("validation", "The file is empty", [{ path: "file", message: "The file is empty" }]);
   if (file.data.byteLength > MAX_ATTACHMENT_BYTES)
     throw new AppError("payload_too_large", `Files can be at most ${MAX_ATTACHMENT_BYTES / 1024 / 1024} MB`);
-  const { fileTypeFromBuffer } = await import("file-type");
-  const detected = await fileTypeFromBuffer(file.data);
-  if (!detected || !ATTACHMENT_TYPES[detected.mime])
-    throw new AppError(
-      "unsupported_media_type",
-      `Attach a PDF data sheet or a photograph (JPEG, PNG or WebP); this file is ${detected ? detected.mime : "of an unknown type"}`,
-    );
+  const detected = await requireFileType(
+    file.data,
+    Object.keys(ATTACHMENT_TYPES),
+    "Attach a PDF data sheet or a photograph (JPEG, PNG or WebP)",
+  );
   const filename = file.name.replace(/[\\/\u0000-\u001f]/g, "_").slice(0, 200) || `attachment.${detected.ext}`;
   const db = await getDb();
   return db.transaction(async (tx) => {

@@ -18,7 +18,7 @@ import {
   signatures,
   users,
 } from "@/db/schema";
-import { config } from "@/lib/config";
+import { appUrl } from "@/lib/config";
 import { woffToTtf } from "@/lib/woff";
 import { isUuid } from "@/lib/ids";
 import { contentSchema } from "../method-statement/content";
@@ -41,7 +41,7 @@ export function packFonts(): Promise<PackFonts> {
   return fonts;
 }
 
-export const verifyUrl = () => `${config().NEXTAUTH_URL.replace(/\/$/, "")}/verify`;
+export const verifyUrl = () => appUrl("/verify");
 
 /**
  * The pack PDF of a revision; signed when the organisation's key is given (fetch it before any

@@ -20,7 +20,7 @@ import {
   users,
 } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
-import { config } from "@/lib/config";
+import { appUrl } from "@/lib/config";
 import { drawnSignatureSchema } from "@/lib/drawn-signature";
 import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
@@ -33,8 +33,8 @@ import { STEP_KEYS, submitRevisionSchema } from "./schemas";
 import { reviewContent } from "../method-statement/score-task";
 import { contentHash, getRevision, loadRevision } from "./service";
 import { isAssignedToJob } from "../briefing/assignment";
+import { isUuid } from "@/lib/ids";
 
-const appUrl = () => config().NEXTAUTH_URL.replace(/\/$/, "");
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 
 export async function storePack(
@@ -151,7 +151,7 @@ async function sendApprovalRequest(actor: Actor, revisionId: string): Promise<Se
         ? "The draft pack is attached. Review it in Heftwise, then countersign it or return it with comments."
         : "Open the review page to read it, then countersign it or return it with comments.",
     ],
-    action: { label: "Open the review", url: `${appUrl()}/reviews/${revisionId}` },
+    action: { label: "Open the review", url: appUrl(`/reviews/${revisionId}`) },
     footnote: "The attached draft is not for use on site until it is approved.",
   });
   return sendMail({
@@ -168,9 +168,7 @@ async function sendApprovalRequest(actor: Actor, revisionId: string): Promise<Se
 export async function getReview(actor: Actor | null, revisionId: string) {
   authorize(actor, "reviews:read");
   const db = await getDb();
-  const [row] = z.uuid().safeParse(revisionId).success
-    ? await db.select().from(revisions).where(eq(revisions.id, revisionId))
-    : [];
+  const [row] = isUuid(revisionId) ? await db.select().from(revisions).where(eq(revisions.id, revisionId)) : [];
   if (!row || row.organisationId !== actor.organisationId || row.status === "draft")
     throw AppError.notFound("Revision");
   if (row.approverId !== actor.id) throw new AppError("forbidden", "This revision was submitted to another approver");
@@ -320,7 +318,7 @@ async function notifyAuthor(
     .where(eq(revisions.id, revisionId));
   const author = await person(row.revision.authorId);
   if (!author) return { id: "", status: "failed", error: "The author has no account" };
-  const link = `${appUrl()}/revisions/${revisionId}`;
+  const link = appUrl(`/revisions/${revisionId}`);
   const body =
     outcome === "approved"
       ? renderMail({
@@ -401,7 +399,7 @@ export async function getPackFile(
 ): Promise<{ filename: string; data: Uint8Array }> {
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   const db = await getDb();
-  const [row] = z.uuid().safeParse(revisionId).success
+  const [row] = isUuid(revisionId)
     ? await db
         .select({ revision: revisions, title: assessments.title, jobId: assessments.jobId })
         .from(revisions)
@@ -506,7 +504,7 @@ export async function verifyPack(data: Uint8Array): Promise<Verification> {
 export async function listAssessmentAudit(actor: Actor | null, assessmentId: string) {
   authorize(actor, "assessments:read");
   const db = await getDb();
-  const assessment = z.uuid().safeParse(assessmentId).success
+  const assessment = isUuid(assessmentId)
     ? await db.query.assessments.findFirst({ where: eq(assessments.id, assessmentId) })
     : undefined;
   if (!assessment || assessment.organisationId !== actor.organisationId) throw AppError.notFound("Assessment");

@@ -225,7 +225,7 @@ export async function createAssessment(
 
 /** A revision with its assessment, job and the register entries its tasks name; no permission check (callers check). */
 export async function loadRevision(organisationId: string, revisionId: string) {
-  if (!z.uuid().safeParse(revisionId).success) throw AppError.notFound("Revision");
+  if (!isUuid(revisionId)) throw AppError.notFound("Revision");
   const db = await getDb();
   const [row] = await db
     .select({ revision: revisions, assessment: assessments, job: jobs })

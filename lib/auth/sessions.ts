@@ -7,6 +7,7 @@ import { and, eq, gt } from "drizzle-orm";
 import { getDb, type Queryable } from "@/db/client";
 import { userSessions } from "@/db/schema";
 import { forgetSessions } from "./session-cache";
+import { isUuid } from "@/lib/ids";
 
 export const SESSION_MAX_AGE_S = 12 * 60 * 60;
 
@@ -20,7 +21,7 @@ export async function openSession(userId: string): Promise<string> {
 }
 
 export async function sessionIsOpen(sessionId: string | undefined, userId: string): Promise<boolean> {
-  if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return false;
+  if (!sessionId || !isUuid(sessionId)) return false;
   const db = await getDb();
   const [row] = await db
     .select({ id: userSessions.id })
@@ -32,7 +33,7 @@ export async function sessionIsOpen(sessionId: string | undefined, userId: strin
 }
 
 export async function closeSession(sessionId: string | undefined): Promise<void> {
-  if (!sessionId || !/^[0-9a-f-]{36}$/i.test(sessionId)) return;
+  if (!sessionId || !isUuid(sessionId)) return;
   const db = await getDb();
   await db.delete(userSessions).where(eq(userSessions.id, sessionId));
   forgetSessions();

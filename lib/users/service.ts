@@ -10,7 +10,7 @@ import { invites, users, type Role } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { setPasswordSchema } from "@/lib/auth/schemas";
 import { hashPassword } from "@/lib/auth/passwords";
-import { config } from "@/lib/config";
+import { appUrl, config } from "@/lib/config";
 import { AppError, isUniqueViolation, parseOrThrow } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
 import { sendMail, type SendOutcome } from "@/lib/mail/send";
@@ -109,7 +109,7 @@ function sendInvite(
   user: { name: string; email: string; role: Role },
   token: string,
 ): Promise<SendOutcome> {
-  const url = `${config().NEXTAUTH_URL.replace(/\/$/, "")}/invite/${token}`;
+  const url = appUrl(`/invite/${token}`);
   const body = renderMail({
     heading: `${actor.name} has invited you to Heftwise`,
     paragraphs: [

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { verifyPack } from "@/assessments/revisions/approval";
-import { handler, readForm } from "@/lib/api";
+import { formFile, handler, readForm } from "@/lib/api";
 import { AppError } from "@/lib/errors";
 
 export const MAX_VERIFY_BYTES = 20 * 1024 * 1024;
@@ -11,11 +11,11 @@ export const MAX_VERIFY_BYTES = 20 * 1024 * 1024;
  */
 export const POST = handler(async (request: Request) => {
   const form = await readForm(request, MAX_VERIFY_BYTES + 64 * 1024, "Upload the PDF as multipart/form-data");
-  const file = form.get("file");
-  if (!(file instanceof File) || file.size === 0)
+  const file = await formFile(form, "file");
+  if (!file || file.data.byteLength === 0)
     throw new AppError("validation", "Choose a PDF", [{ path: "file", message: "Choose a PDF" }]);
-  if (file.size > MAX_VERIFY_BYTES) throw new AppError("payload_too_large", "The file is larger than 20 MB");
-  const data = new Uint8Array(await file.arrayBuffer());
+  if (file.data.byteLength > MAX_VERIFY_BYTES) throw new AppError("payload_too_large", "The file is larger than 20 MB");
+  const { data } = file;
   if (Buffer.from(data.subarray(0, 5)).toString("latin1") !== "%PDF-")
     throw new AppError("unsupported_media_type", "This file is not a PDF");
   return NextResponse.json(await verifyPack(data));

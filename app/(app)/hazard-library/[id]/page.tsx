@@ -1,19 +1,15 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { getEntry } from "@/assessments/hazard-library/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { EntryForm } from "../entry-form";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Edit library hazard" };
 
 export default async function EditLibraryHazardPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePermission("hazard-library:manage");
   const { id } = await params;
-  const entry = await getEntry(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const entry = await foundOr404(getEntry(actor, id));
   return (
     <div className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-bold">Edit library hazard</h1>

@@ -1,22 +1,18 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { getComponent } from "@/assessments/load-register/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { ComponentForm } from "../component-form";
 import { Attachments } from "./attachments";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Component" };
 
 export default async function ComponentPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePermission("components:read");
   const { id } = await params;
-  const c = await getComponent(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const c = await foundOr404(getComponent(actor, id));
   const editable = can(actor, "components:write");
   return (
     <div className="max-w-3xl space-y-4">

@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import { getReview } from "@/assessments/revisions/approval";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { ReadOnlyRevision } from "../../revisions/[id]/read-only-revision";
 import { ReviewActions } from "./review-actions";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Review" };
 
@@ -22,10 +21,7 @@ export default async function ReviewPage({
   const actor = await requirePermission("reviews:read");
   const { id } = await params;
   const { notice } = await searchParams;
-  const review = await getReview(actor, id).catch((err) => {
-    if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
-    throw err;
-  });
+  const review = await foundOr404(getReview(actor, id), ["forbidden"]);
   const { revision, assessment, job, content, author, signatures } = review;
   return (
     <div className="space-y-4">

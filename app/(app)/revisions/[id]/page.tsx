@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import Link from "next/link";
 import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
@@ -7,13 +6,13 @@ import { listLibrary } from "@/assessments/hazard-library/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { STEPS } from "./wizard/steps-list";
 import { Wizard } from "./wizard/wizard";
 import { NewRevisionButton } from "./new-revision-button";
 import { ReadOnlyRevision } from "./read-only-revision";
 import { RescoredNotice } from "./rescored-notice";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Assessment" };
 
@@ -34,10 +33,7 @@ export default async function RevisionPage({
   const actor = await requirePermission("assessments:read");
   const { id } = await params;
   const { step, notice } = await searchParams;
-  const data = await getRevision(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const data = await foundOr404(getRevision(actor, id));
   const { revision, assessment, job, content, register } = data;
   const editable = revision.status === "draft" && can(actor, "assessments:write");
   const initialStep = STEPS.find((s) => s.key === step)?.key;

@@ -1,9 +1,8 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { DataTable } from "@/app/_components/table";
 import { listAssessmentAudit } from "@/assessments/revisions/approval";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Audit trail" };
 
@@ -19,10 +18,7 @@ const ACTIONS: Record<string, string> = {
 export default async function AuditPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePermission("assessments:read");
   const { id } = await params;
-  const { assessment, events } = await listAssessmentAudit(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const { assessment, events } = await foundOr404(listAssessmentAudit(actor, id));
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Audit trail: {assessment.title}</h1>

@@ -1,19 +1,15 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { getBriefingScript } from "@/assessments/briefing/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { SiteChangeForm } from "./site-change-form";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Report a site change" };
 
 export default async function SiteChangePage({ params }: { params: Promise<{ revisionId: string }> }) {
   const actor = await requirePermission("site-notes:create");
   const { revisionId } = await params;
-  const data = await getBriefingScript(actor, revisionId).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const data = await foundOr404(getBriefingScript(actor, revisionId));
   return (
     <div className="mx-auto max-w-2xl space-y-4">
       <h1 className="text-2xl font-bold">Report a site change</h1>

@@ -1,11 +1,10 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { DataTable } from "@/app/_components/table";
 import { getBriefingRecord } from "@/assessments/briefing/service";
 import { requireActor } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { PrintButton } from "./print-button";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Briefing record" };
 
@@ -14,10 +13,7 @@ const when = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC
 export default async function BriefingRecordPage({ params }: { params: Promise<{ briefingId: string }> }) {
   const actor = await requireActor();
   const { briefingId } = await params;
-  const { briefing, context, attendees } = await getBriefingRecord(actor, briefingId).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const { briefing, context, attendees } = await foundOr404(getBriefingRecord(actor, briefingId));
   return (
     <div className="space-y-4 print:text-black">
       <div className="flex flex-wrap items-center justify-between gap-2 print:hidden">

@@ -1,21 +1,17 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { getJob } from "@/assessments/jobs/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { listForemen } from "@/assessments/briefing/service";
 import { JobForm } from "../../job-form";
 import { ForemenForm } from "./foremen-form";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Edit job" };
 
 export default async function EditJobPage({ params }: { params: Promise<{ id: string }> }) {
   const actor = await requirePermission("jobs:write");
   const { id } = await params;
-  const job = await getJob(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const job = await foundOr404(getJob(actor, id));
   const {
     name,
     client,

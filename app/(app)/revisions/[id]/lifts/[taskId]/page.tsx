@@ -3,19 +3,16 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getRevision } from "@/assessments/revisions/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 import { LiftPlanForm } from "./lift-plan-form";
+import { foundOr404 } from "@/lib/pages";
 
 export const metadata: Metadata = { title: "Lift plan" };
 
 export default async function LiftPlanPage({ params }: { params: Promise<{ id: string; taskId: string }> }) {
   const actor = await requirePermission("assessments:read");
   const { id, taskId } = await params;
-  const data = await getRevision(actor, id).catch((err) => {
-    if (err instanceof AppError && err.code === "not_found") notFound();
-    throw err;
-  });
+  const data = await foundOr404(getRevision(actor, id));
   const task = data.content.tasks.find((t) => t.id === taskId && t.operation === "equipment");
   if (!task) notFound();
   const component = data.register.find((c) => c.id === task.componentId);

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { addAttachment, getComponent, MAX_ATTACHMENT_BYTES } from "@/assessments/load-register/service";
-import { handler, readForm } from "@/lib/api";
+import { formFile, handler, readForm } from "@/lib/api";
 import { requireApiActor } from "@/lib/auth/api";
 import { AppError } from "@/lib/errors";
 
@@ -14,9 +14,8 @@ export const POST = handler(async (request: Request, { params }: { params: Promi
     MAX_ATTACHMENT_BYTES + 64 * 1024,
     "Send the file as multipart/form-data in a field named file",
   );
-  const file = form.get("file");
-  if (!(file instanceof File))
-    throw new AppError("validation", "Choose a file", [{ path: "file", message: "Choose a file" }]);
-  const row = await addAttachment(actor, id, { name: file.name, data: new Uint8Array(await file.arrayBuffer()) });
+  const file = await formFile(form, "file");
+  if (!file) throw new AppError("validation", "Choose a file", [{ path: "file", message: "Choose a file" }]);
+  const row = await addAttachment(actor, id, file);
   return NextResponse.json(row, { status: 201 });
 });
