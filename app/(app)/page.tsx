@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { countJobs } from "@/assessments/jobs/queries";
 import { countComponents } from "@/assessments/load-register/queries";
-import { listForemanJobs } from "@/assessments/briefing/service";
+import { listForemanJobs } from "@/assessments/briefing/queries";
 import { countAwaitingReview, countRevisionsByStatus } from "@/assessments/revisions/queries";
 import { requireActor } from "@/lib/auth/session";
 import { can, type Actor } from "@/lib/permissions";

@@ -26,3 +26,6 @@ export const siteChangeSchema = z.object({
 });
 
 export type AttendeeInput = z.infer<typeof attendeeSchema>;
+
+/** The foremen assigned to a job (replaces the list). */
+export const assignmentSchema = z.object({ foremanIds: z.array(z.uuid()).max(50) });

@@ -4,14 +4,11 @@
  * the briefing sheet.
  */
 import "server-only";
-import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
-import { z } from "zod";
+import { and, eq, inArray, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import {
-  assessments,
   briefingAttendees,
   briefings,
-  components,
   jobAssignments,
   jobs,
   organisations,
@@ -29,130 +26,16 @@ import { getSigningKey } from "@/lib/signing-keys";
 import { putFile } from "@/lib/storage";
 import { renderPack } from "../pack/render";
 import { storePack } from "../revisions/approval";
-import { contentSchema } from "../method-statement/content";
-import type { TaskScore } from "../method-statement/score-task";
-import { briefingScript } from "./instructions";
-import { attendeeSchema, completeBriefingSchema, siteChangeSchema, startBriefingSchema } from "./schemas";
-import { isAssignedToJob } from "./assignment";
+import {
+  assignmentSchema,
+  attendeeSchema,
+  completeBriefingSchema,
+  siteChangeSchema,
+  startBriefingSchema,
+} from "./schemas";
+import { briefableRevision, getBriefingRecord, getBriefingScript, ownBriefing } from "./queries";
 import { isUuid } from "@/lib/ids";
 import { requireFileType } from "@/lib/files";
-
-const startOfToday = () => {
-  const d = new Date();
-  d.setUTCHours(0, 0, 0, 0);
-  return d;
-};
-
-/** The foreman's jobs, each with its current approved revision (never a draft) and today's briefings. */
-export async function listForemanJobs(actor: Actor | null) {
-  authorize(actor, "briefings:run");
-  const db = await getDb();
-  const assigned = await db
-    .select({ job: jobs })
-    .from(jobAssignments)
-    .innerJoin(jobs, eq(jobs.id, jobAssignments.jobId))
-    .where(and(eq(jobAssignments.userId, actor.id), eq(jobAssignments.organisationId, actor.organisationId)))
-    .orderBy(asc(jobs.name));
-  const jobIds = assigned.map((a) => a.job.id);
-  const approved = jobIds.length
-    ? await db
-        .select({
-          revisionId: revisions.id,
-          number: revisions.number,
-          reviewDate: revisions.reviewDate,
-          needsReview: revisions.needsReview,
-          worstBand: revisions.worstBand,
-          title: assessments.title,
-          jobId: assessments.jobId,
-        })
-        .from(revisions)
-        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-        .where(and(inArray(assessments.jobId, jobIds), eq(revisions.status, "approved")))
-        .orderBy(asc(assessments.title))
-    : [];
-  const today = approved.length
-    ? await db
-        .select({
-          id: briefings.id,
-          revisionId: briefings.revisionId,
-          startedAt: briefings.startedAt,
-          completedAt: briefings.completedAt,
-          place: briefings.place,
-        })
-        .from(briefings)
-        .where(
-          and(
-            inArray(
-              briefings.revisionId,
-              approved.map((a) => a.revisionId),
-            ),
-            gte(briefings.startedAt, startOfToday()),
-          ),
-        )
-        .orderBy(desc(briefings.startedAt))
-    : [];
-  return assigned.map(({ job }) => ({
-    job,
-    revisions: approved
-      .filter((r) => r.jobId === job.id)
-      .map((r) => ({ ...r, briefingsToday: today.filter((b) => b.revisionId === r.revisionId) })),
-  }));
-}
-
-/** An approved revision of one of the foreman's jobs; anything else is "not found". */
-async function briefableRevision(actor: Actor, revisionId: string) {
-  const db = await getDb();
-  const [row] = isUuid(revisionId)
-    ? await db
-        .select({ revision: revisions, assessment: assessments, job: jobs })
-        .from(revisions)
-        .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-        .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-        .where(eq(revisions.id, revisionId))
-    : [];
-  if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved")
-    throw AppError.notFound("Approved revision");
-  if (!(await isAssignedToJob(actor, row.job.id))) throw AppError.notFound("Approved revision");
-  return row;
-}
-
-/** What the foreman reads out for a revision, with any site change notes to warn of. */
-export async function getBriefingScript(actor: Actor | null, revisionId: string) {
-  authorize(actor, "briefings:run");
-  const { revision, assessment, job } = await briefableRevision(actor, revisionId);
-  const db = await getDb();
-  const names = Object.fromEntries(
-    (
-      await db
-        .select({ id: components.id, name: components.name })
-        .from(components)
-        .where(eq(components.organisationId, actor.organisationId))
-    ).map((c) => [c.id, c.name]),
-  );
-  const notes = await db
-    .select()
-    .from(siteChangeNotes)
-    .where(eq(siteChangeNotes.revisionId, revisionId))
-    .orderBy(desc(siteChangeNotes.createdAt));
-  const content = contentSchema.parse(revision.content);
-  return {
-    revision: {
-      id: revision.id,
-      number: revision.number,
-      needsReview: revision.needsReview,
-      reviewDate: revision.reviewDate,
-    },
-    title: assessment.title,
-    job: {
-      name: job.name,
-      accessPoint: job.accessPoint,
-      siteContactName: job.siteContactName,
-      siteContactPhone: job.siteContactPhone,
-    },
-    script: briefingScript(content, (revision.results ?? []) as TaskScore[], names),
-    siteChanges: notes.map((n) => ({ text: n.text, by: n.authorName, at: n.createdAt.toISOString() })),
-  };
-}
 
 export async function startBriefing(actor: Actor | null, input: unknown): Promise<{ briefingId: string }> {
   authorize(actor, "briefings:run");
@@ -180,16 +63,6 @@ export async function startBriefing(actor: Actor | null, input: unknown): Promis
     });
     return { briefingId: row.id };
   });
-}
-
-async function ownBriefing(actor: Actor, briefingId: string) {
-  const db = await getDb();
-  const row = isUuid(briefingId)
-    ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) })
-    : undefined;
-  if (!row || row.organisationId !== actor.organisationId || row.foremanId !== actor.id)
-    throw AppError.notFound("Briefing");
-  return row;
 }
 
 /** Records one sign-on. Sending the same key again returns the first record: nothing is duplicated. */
@@ -291,30 +164,6 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   });
 }
 
-/** A briefing with its attendees, for the record (the foreman who ran it, or the organisation's advisers). */
-export async function getBriefingRecord(actor: Actor | null, briefingId: string) {
-  if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
-  const db = await getDb();
-  const briefing = isUuid(briefingId)
-    ? await db.query.briefings.findFirst({ where: eq(briefings.id, briefingId) })
-    : undefined;
-  if (!briefing || briefing.organisationId !== actor.organisationId) throw AppError.notFound("Briefing");
-  if (!(briefing.foremanId === actor.id || ["admin", "adviser"].includes(actor.role)))
-    throw AppError.notFound("Briefing");
-  const [context] = await db
-    .select({ title: assessments.title, number: revisions.number, job: jobs.name })
-    .from(revisions)
-    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-    .where(eq(revisions.id, briefing.revisionId));
-  const attendees = await db
-    .select()
-    .from(briefingAttendees)
-    .where(eq(briefingAttendees.briefingId, briefingId))
-    .orderBy(asc(briefingAttendees.signedAt));
-  return { briefing, context, attendees };
-}
-
 /** Conditions differ from the assessment: recorded with an optional photo, the revision marked, the adviser e-mailed. */
 export async function createSiteChangeNote(
   actor: Actor | null,
@@ -384,25 +233,6 @@ export async function createSiteChangeNote(
     }),
   };
 }
-
-/** Foremen of the organisation and the jobs each is assigned to (for the job form). */
-export async function listForemen(actor: Actor | null, jobId: string) {
-  authorize(actor, "jobs:write");
-  const db = await getDb();
-  const job = isUuid(jobId) ? await db.query.jobs.findFirst({ where: eq(jobs.id, jobId) }) : undefined;
-  if (!job || job.organisationId !== actor.organisationId) throw AppError.notFound("Job");
-  const foremen = await db
-    .select({ id: users.id, name: users.name })
-    .from(users)
-    .where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "foreman"), eq(users.active, true)))
-    .orderBy(asc(users.name));
-  const assigned = isUuid(jobId)
-    ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId))
-    : [];
-  return foremen.map((f) => ({ ...f, assigned: assigned.some((a) => a.userId === f.id) }));
-}
-
-export const assignmentSchema = z.object({ foremanIds: z.array(z.uuid()).max(50) });
 
 export async function setJobForemen(actor: Actor | null, jobId: string, input: unknown): Promise<void> {
   authorize(actor, "jobs:write");

@@ -5,18 +5,8 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
-import {
-  briefingSheetPdf,
-  completeBriefing,
-  createSiteChangeNote,
-  getBriefingRecord,
-  getBriefingScript,
-  listForemanJobs,
-  listForemen,
-  recordAttendee,
-  setJobForemen,
-  startBriefing,
-} from "@/assessments/briefing/service";
+import { briefingSheetPdf, completeBriefing, createSiteChangeNote, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
+import { getBriefingRecord, getBriefingScript, listForemanJobs, listForemen } from "@/assessments/briefing/queries";
 import { listAssessments } from "@/assessments/revisions/service";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";

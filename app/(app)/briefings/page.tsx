@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { BandChip } from "@/app/_components/results/band";
 import { EmptyState } from "@/app/_components/table";
-import { listForemanJobs } from "@/assessments/briefing/service";
+import { listForemanJobs } from "@/assessments/briefing/queries";
 import type { Band } from "@/assessments/rules/types";
 import { requirePermission } from "@/lib/auth/guard";
 import { EmailSheetButton } from "./email-sheet-button";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { getBriefingScript } from "@/assessments/briefing/service";
+import { getBriefingScript } from "@/assessments/briefing/queries";
 import { requirePermission } from "@/lib/auth/guard";
 import { BriefingMode } from "./briefing-mode";
 import { foundOr404 } from "@/lib/pages";

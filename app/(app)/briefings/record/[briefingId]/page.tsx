@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { DataTable } from "@/app/_components/table";
-import { getBriefingRecord } from "@/assessments/briefing/service";
+import { getBriefingRecord } from "@/assessments/briefing/queries";
 import { requireActor } from "@/lib/auth/session";
 import { can } from "@/lib/permissions";
 import { PrintButton } from "./print-button";

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { getJob } from "@/assessments/jobs/service";
 import { requirePermission } from "@/lib/auth/guard";
-import { listForemen } from "@/assessments/briefing/service";
+import { listForemen } from "@/assessments/briefing/queries";
 import { JobForm } from "../../job-form";
 import { ForemenForm } from "./foremen-form";
 import { foundOr404 } from "@/lib/pages";

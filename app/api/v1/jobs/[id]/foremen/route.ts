@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
-import { listForemen, setJobForemen } from "@/assessments/briefing/service";
+import { setJobForemen } from "@/assessments/briefing/service";
+import { listForemen } from "@/assessments/briefing/queries";
 import { handler, readJson } from "@/lib/api";
 import { requireApiActor } from "@/lib/auth/api";
 
