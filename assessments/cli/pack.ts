@@ -25,7 +25,8 @@ async function main(out: string) {
     const { DEMO_USERS } = await import("@/assessments/demo/scenario");
     const { users } = await import("@/db/schema");
     const { eq } = await import("drizzle-orm");
-    const { listAssessments, getRevision } = await import("@/assessments/revisions/service");
+    const { getRevision } = await import("@/assessments/revisions/service");
+    const { listAssessments } = await import("@/assessments/revisions/queries");
     const { submitRevision, approveRevision, getPackFile } = await import("@/assessments/revisions/approval");
     const { drawnSignaturePng } = await import("@/lib/png");
 

@@ -5,16 +5,13 @@
  */
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, asc, count, eq, ilike, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { assessments, components, jobs, revisions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
-import { afterCursor, keysetPage, orderOf, pageQuerySchema, keysetColumns, type Keyset } from "@/lib/pagination";
 import { isUuid } from "@/lib/ids";
-import { escapeLike } from "@/lib/sql";
-import { cachedRead, readKey } from "@/lib/read-cache";
 import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
@@ -63,102 +60,6 @@ async function registerNamed(organisationId: string, names: string[]): Promise<R
         ),
       ),
     );
-}
-
-export const assessmentListQuerySchema = pageQuerySchema.extend({
-  q: z.string().trim().max(100).optional(),
-  status: z.enum(["draft", "submitted", "approved", "superseded"]).optional(),
-  jobId: z.uuid().optional(),
-  worstBand: z.enum(["clear", "watch", "act", "stop"]).optional(),
-  authorId: z.uuid().optional(),
-  /** "30": approved revisions whose review date falls within the next 30 days (or has passed). */
-  reviewDue: z.enum(["30"]).optional(),
-  sort: z.enum(["updatedAt", "-updatedAt", "title", "-title"]).default("-updatedAt"),
-});
-
-/** The list's orders; each walks an index (db/schema.ts) from the cursor on. */
-const ASSESSMENT_ORDERS = {
-  updatedAt: { column: revisions.updatedAt, id: revisions.id, type: "timestamptz" },
-  title: { column: assessments.title, id: assessments.id, type: "text" },
-} as const;
-
-function assessmentKeyset(sort: z.infer<typeof assessmentListQuerySchema>["sort"]): Keyset {
-  const descending = sort.startsWith("-");
-  return {
-    name: sort,
-    descending,
-    ...ASSESSMENT_ORDERS[descending ? (sort.slice(1) as "updatedAt" | "title") : (sort as "updatedAt" | "title")],
-  };
-}
-
-/** The latest revision of each assessment, filtered, sorted and paged by keyset; the total counted in SQL. */
-export async function listAssessmentsPage(actor: Actor | null, query: unknown) {
-  authorize(actor, "assessments:read");
-  const q = parseOrThrow(assessmentListQuerySchema, query, "Invalid query");
-  return cachedRead(
-    readKey("assessments", actor.organisationId, q, new Date().toISOString().slice(0, 10)),
-    async () => {
-      const keyset = assessmentKeyset(q.sort);
-      const db = await getDb();
-      // Conditions on the revision, and on the assessment; both tables are named by organisation, so
-      // that either sort can walk its own index (db/schema.ts).
-      const onRevision: SQL[] = [eq(revisions.organisationId, actor.organisationId), eq(revisions.isLatest, true)];
-      const onAssessment: SQL[] = [eq(assessments.organisationId, actor.organisationId)];
-      if (q.q) onAssessment.push(ilike(assessments.title, `%${escapeLike(q.q)}%`));
-      if (q.jobId) onAssessment.push(eq(assessments.jobId, q.jobId));
-      if (q.status) onRevision.push(eq(revisions.status, q.status));
-      if (q.worstBand) onRevision.push(eq(revisions.worstBand, q.worstBand));
-      if (q.authorId) onRevision.push(eq(revisions.authorId, q.authorId));
-      if (q.reviewDue) {
-        const limit = new Date(Date.now() + Number(q.reviewDue) * 86_400_000).toISOString().slice(0, 10);
-        onRevision.push(eq(revisions.status, "approved"), lte(revisions.reviewDate, limit));
-      }
-      const where = [...onRevision, ...onAssessment];
-      const after = afterCursor(keyset, q.cursor);
-      const [rows, [{ total }]] = await Promise.all([
-        db
-          .select({
-            assessmentId: assessments.id,
-            title: assessments.title,
-            jobId: jobs.id,
-            jobName: jobs.name,
-            revisionId: revisions.id,
-            number: revisions.number,
-            status: revisions.status,
-            worstBand: revisions.worstBand,
-            reviewDate: revisions.reviewDate,
-            updatedAt: revisions.updatedAt,
-            authorId: revisions.authorId,
-            authorName: users.name,
-            ...keysetColumns(keyset),
-          })
-          .from(revisions)
-          .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-          .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-          .leftJoin(users, eq(users.id, revisions.authorId))
-          .where(and(...where, after))
-          .orderBy(...orderOf(keyset))
-          .limit(q.limit + 1),
-        // The count reads the assessments only when a filter does: the latest revisions alone are one index.
-        q.q || q.jobId
-          ? db
-              .select({ total: count() })
-              .from(revisions)
-              .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-              .where(and(...where))
-          : db
-              .select({ total: count() })
-              .from(revisions)
-              .where(and(...onRevision)),
-      ]);
-      return keysetPage(rows, keyset, q.limit, Number(total));
-    },
-  );
-}
-
-/** Every assessment's latest revision (first page of 100), newest first. */
-export async function listAssessments(actor: Actor | null) {
-  return (await listAssessmentsPage(actor, { limit: 100 })).items;
 }
 
 export async function createAssessment(
@@ -335,18 +236,5 @@ export async function removeTask(actor: Actor | null, revisionId: string, taskId
   return changeTasks(actor, revisionId, version, (tasks) => {
     if (!tasks.some((t) => t.id === taskId)) throw AppError.notFound("Task");
     return tasks.filter((t) => t.id !== taskId);
-  });
-}
-
-/** People who can author assessments, for the list's author filter. */
-export async function listAuthors(actor: Actor | null) {
-  authorize(actor, "assessments:read");
-  return cachedRead(readKey("authors", actor.organisationId), async () => {
-    const db = await getDb();
-    return db
-      .select({ id: users.id, name: users.name })
-      .from(users)
-      .where(and(eq(users.organisationId, actor.organisationId), inArray(users.role, ["admin", "adviser"])))
-      .orderBy(asc(users.name));
   });
 }

@@ -19,7 +19,8 @@ import {
   submitRevision,
   verifyPack,
 } from "@/assessments/revisions/approval";
-import { getRevision, listAssessments, saveRevision } from "@/assessments/revisions/service";
+import { getRevision, saveRevision } from "@/assessments/revisions/service";
+import { listAssessments } from "@/assessments/revisions/queries";
 import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
 import { drawnSignaturePng, encodePng } from "@/lib/png";

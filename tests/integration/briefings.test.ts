@@ -5,9 +5,16 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
-import { briefingSheetPdf, completeBriefing, createSiteChangeNote, recordAttendee, setJobForemen, startBriefing } from "@/assessments/briefing/service";
+import {
+  briefingSheetPdf,
+  completeBriefing,
+  createSiteChangeNote,
+  recordAttendee,
+  setJobForemen,
+  startBriefing,
+} from "@/assessments/briefing/service";
 import { getBriefingRecord, getBriefingScript, listForemanJobs, listForemen } from "@/assessments/briefing/queries";
-import { listAssessments } from "@/assessments/revisions/service";
+import { listAssessments } from "@/assessments/revisions/queries";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { issuedPacks } from "@/db/schema";

@@ -37,7 +37,7 @@ beforeAll(async () => {
   const created = await createAssessment(adviser, { jobId: jobs[0].id, title: "Edge cases in every channel" });
   revisionId = created.revisionId;
   const { content, revision } = await getRevision(adviser, revisionId);
-  const { listComponentsPage } = await import("@/assessments/load-register/service");
+  const { listComponentsPage } = await import("@/assessments/load-register/queries");
   const register = (await listComponentsPage(adviser, { limit: 100 })).items;
   const id = (name: string) => register.find((c) => c.name.startsWith(name))!.id;
   tasks = [

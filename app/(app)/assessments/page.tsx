@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { ActionLink, PageHeader } from "@/app/_components/page-header";
 import { listJobs } from "@/assessments/jobs/queries";
-import { listAssessmentsPage, listAuthors } from "@/assessments/revisions/service";
+import { listAssessmentsPage, listAuthors } from "@/assessments/revisions/queries";
 import { requirePermission } from "@/lib/auth/guard";
 import { can } from "@/lib/permissions";
 import { AssessmentsTable } from "./assessments-table";

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
-import { createAssessment, listAssessmentsPage } from "@/assessments/revisions/service";
+import { createAssessment } from "@/assessments/revisions/service";
+import { listAssessmentsPage } from "@/assessments/revisions/queries";
 import { handler, readJson } from "@/lib/api";
 import { queryOf, requireApiActor } from "@/lib/auth/api";
 

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
-import { createComponent, listComponentsPage } from "@/assessments/load-register/service";
+import { createComponent } from "@/assessments/load-register/service";
+import { listComponentsPage } from "@/assessments/load-register/queries";
 import { handler, readJson } from "@/lib/api";
 import { queryOf, requireApiActor } from "@/lib/auth/api";
 
