@@ -4,7 +4,7 @@
  * name are left alone). Another organisation's entry is "not found".
  */
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { z } from "zod";
 import { getDb, type Queryable } from "@/db/client";
 import { hazardLibrary } from "@/db/schema";
@@ -14,17 +14,7 @@ import { authorize, type Actor } from "@/lib/permissions";
 import type { Hazard } from "../method-statement/content";
 import { libraryEntrySchema, type LibraryEntry, type LibraryEntryInput } from "./schemas";
 import { STARTER_HAZARDS } from "./starter";
-
-const toEntry = (row: typeof hazardLibrary.$inferSelect): LibraryEntry => ({
-  id: row.id,
-  hazard: row.hazard,
-  whoIsAtRisk: row.whoIsAtRisk,
-  likelihoodBefore: row.likelihoodBefore,
-  severityBefore: row.severityBefore,
-  controls: row.controls as Hazard["controls"],
-  likelihoodAfter: row.likelihoodAfter,
-  severityAfter: row.severityAfter,
-});
+import { toEntry } from "./queries";
 
 /** Adds the starter hazards an organisation does not have yet (by name); returns how many were added. */
 export async function addStarterHazards(tx: Queryable, organisationId: string): Promise<number> {
@@ -34,17 +24,6 @@ export async function addStarterHazards(tx: Queryable, organisationId: string): 
     .onConflictDoNothing({ target: [hazardLibrary.organisationId, hazardLibrary.hazard] })
     .returning({ id: hazardLibrary.id });
   return added.length;
-}
-
-export async function listLibrary(actor: Actor | null): Promise<LibraryEntry[]> {
-  authorize(actor, "hazard-library:read");
-  const db = await getDb();
-  const rows = await db
-    .select()
-    .from(hazardLibrary)
-    .where(eq(hazardLibrary.organisationId, actor.organisationId))
-    .orderBy(asc(hazardLibrary.hazard));
-  return rows.map(toEntry);
 }
 
 const entryId = z.uuid();

@@ -1,13 +1,7 @@
 /** The hazard library: read by advisers, kept by admins, organisations apart, a starter set that can be added again safely. */
 import { beforeAll, describe, expect, it } from "vitest";
-import {
-  createEntry,
-  deleteEntry,
-  getEntry,
-  listLibrary,
-  restoreStarter,
-  updateEntry,
-} from "@/assessments/hazard-library/service";
+import { createEntry, deleteEntry, getEntry, restoreStarter, updateEntry } from "@/assessments/hazard-library/service";
+import { listLibrary } from "@/assessments/hazard-library/queries";
 import { STARTER_HAZARDS } from "@/assessments/hazard-library/starter";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
-import { listLibrary } from "@/assessments/hazard-library/service";
+import { listLibrary } from "@/assessments/hazard-library/queries";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
