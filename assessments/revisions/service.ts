@@ -151,13 +151,20 @@ export async function saveRevision(
   input: unknown,
 ): Promise<{ version: number; worstBand: string | null }> {
   authorize(actor, "assessments:write");
-  // Whose record first: another organisation's revision is "not found" whatever the body says.
-  const current = await getRevision(actor, revisionId);
-  const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
-  if (current.revision.status !== "draft")
-    throw new AppError("conflict", `This revision is ${current.revision.status} and can no longer be edited.`);
-  const review = reviewContent(data.content, await registerFor(actor.organisationId, data.content));
+  // Whose record first: another organisation's revision is "not found" whatever the body says. Only
+  // its owner and status are read: the stored content is about to be replaced.
   const db = await getDb();
+  const [current] = isUuid(revisionId)
+    ? await db
+        .select({ organisationId: revisions.organisationId, status: revisions.status })
+        .from(revisions)
+        .where(eq(revisions.id, revisionId))
+    : [];
+  if (!current || current.organisationId !== actor.organisationId) throw AppError.notFound("Revision");
+  const data = parseOrThrow(saveRevisionSchema, input, "The draft has fields that need attention");
+  if (current.status !== "draft")
+    throw new AppError("conflict", `This revision is ${current.status} and can no longer be edited.`);
+  const review = reviewContent(data.content, await registerFor(actor.organisationId, data.content));
   const [saved] = await db
     .update(revisions)
     .set({
