@@ -16,7 +16,7 @@ import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { parseArgs } from "node:util";
 import { buildIfNeeded } from "@/assessments/cli/build";
-import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
+import { signInCookie } from "./sign-in";
 
 const { values: args } = parseArgs({
   options: {
@@ -117,24 +117,6 @@ async function heldMemory(server: ChildProcess): Promise<{ heap: number; externa
 const rssMb = (pid: number) =>
   Number(/VmRSS:\s+(\d+)/.exec(readFileSync(`/proc/${pid}/status`, "utf8"))?.[1] ?? 0) / 1024;
 
-async function signIn(email: string): Promise<string> {
-  const csrf = await fetch(`${origin}/api/auth/csrf`);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const cookie = csrf.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
-  const res = await fetch(`${origin}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie },
-    body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: "true" }),
-  });
-  const session = res.headers.getSetCookie().find((c) => c.startsWith("next-auth.session-token="));
-  if (!session) throw new Error(`could not sign in as ${email} (HTTP ${res.status})`);
-  return session.split(";")[0];
-}
-
 interface Endpoint {
   name: string;
   kind: "floor" | "list" | "page" | "write";
@@ -216,7 +198,7 @@ async function main() {
   const memory: number[] = [];
   const sampler = setInterval(() => memory.push(rssMb(server.pid!)), 500);
   try {
-    const cookie = await signIn("adviser@brackenfold.example");
+    const cookie = await signInCookie(origin, "adviser@brackenfold.example");
     const get = async <T>(p: string) => (await (await fetch(`${origin}${p}`, { headers: { cookie } })).json()) as T;
     // Drafts to save: two a connection (autocannon prepares a connection's next request before it
     // reports the last one's answer), and one more for the wizard's page.

@@ -11,7 +11,7 @@ import path from "node:path";
 import { parseArgs } from "node:util";
 import * as chromeLauncher from "chrome-launcher";
 import lighthouse from "lighthouse";
-import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
+import { signInCookie } from "./sign-in";
 
 const { values: args } = parseArgs({
   options: {
@@ -53,24 +53,6 @@ function startDemo(): Promise<() => void> {
     );
     demo.on("exit", (code) => reject(new Error(`the demo stopped (exit ${code})`)));
   });
-}
-
-async function signIn(email: string): Promise<string> {
-  const csrf = await fetch(`${origin}/api/auth/csrf`);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const cookie = csrf.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
-  const res = await fetch(`${origin}/api/auth/callback/credentials`, {
-    method: "POST",
-    redirect: "manual",
-    headers: { "content-type": "application/x-www-form-urlencoded", cookie },
-    body: new URLSearchParams({ csrfToken, email, password: DEMO_PASSWORD, json: "true" }),
-  });
-  const session = res.headers.getSetCookie().find((c) => c.startsWith("next-auth.session-token="));
-  if (!session) throw new Error(`could not sign in as ${email} (HTTP ${res.status})`);
-  return session.split(";")[0];
 }
 
 interface Score {
@@ -121,8 +103,8 @@ async function main() {
     ],
   });
   try {
-    const adviser = await signIn("adviser@brackenfold.example");
-    const foreman = await signIn("foreman@brackenfold.example");
+    const adviser = await signInCookie(origin, "adviser@brackenfold.example");
+    const foreman = await signInCookie(origin, "foreman@brackenfold.example");
     const list = (await (
       await fetch(`${origin}/api/v1/assessments?limit=100`, { headers: { cookie: adviser } })
     ).json()) as { items: { revisionId: string; status: string; title: string }[] };
