@@ -5,6 +5,7 @@
  */
 import { sql } from "drizzle-orm";
 import {
+  bigint,
   boolean,
   customType,
   date,
@@ -27,6 +28,8 @@ export const massSourceEnum = pgEnum("mass_source", ["weighed", "datasheet", "es
 export const revisionStatusEnum = pgEnum("revision_status", ["draft", "submitted", "approved", "superseded"]);
 export const emailStatusEnum = pgEnum("email_status", ["pending", "sent", "failed"]);
 
+const bytea = customType<{ data: Uint8Array; driverData: Uint8Array }>({ dataType: () => "bytea" });
+
 const id = () =>
   uuid("id")
     .primaryKey()
@@ -41,7 +44,18 @@ const organisationId = () =>
 export const organisations = pgTable("organisations", {
   id: id(),
   name: text("name").notNull(),
+  /** PNG or JPEG printed on the pack's cover; null prints the name only. */
+  logo: bytea("logo"),
+  logoType: text("logo_type"),
+  /** What the submit step suggests as the review date, in months from submission. */
+  reviewPeriodMonths: integer("review_period_months").notNull().default(6),
+  /** The roles that must use a second factor (an authenticator app) to sign in. */
+  secondFactorRoles: roleEnum("second_factor_roles")
+    .array()
+    .notNull()
+    .default(sql`'{}'::role[]`),
   createdAt: createdAt(),
+  updatedAt: updatedAt(),
 });
 
 export const users = pgTable(
@@ -55,6 +69,14 @@ export const users = pgTable(
     role: roleEnum("role").notNull(),
     /** Null until the invited user sets a password. */
     passwordHash: text("password_hash"),
+    /** Null until the address is proven: an invitation link used, or a sign-up's confirmation link. */
+    emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }),
+    /** The authenticator secret, encrypted with the server's secret (lib/auth/second-factor.ts). */
+    totpSecret: text("totp_secret"),
+    /** Set once a first code has proven the enrolment; null means no second factor. */
+    totpEnabledAt: timestamp("totp_enabled_at", { withTimezone: true }),
+    /** The time step of the last code accepted: a code is never accepted twice. */
+    totpLastStep: bigint("totp_last_step", { mode: "number" }),
     active: boolean("active").notNull().default(true),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -147,6 +169,10 @@ export const userSessions = pgTable(
       .references(() => users.id, { onDelete: "cascade" }),
     createdAt: createdAt(),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    /** How the user signed in: "password" or "password+authenticator" (or "+recovery-code"). */
+    method: text("method").notNull().default("password"),
+    address: text("address"),
+    client: text("client"),
   },
   (t) => [index("user_sessions_user_idx").on(t.userId)],
 );
@@ -183,8 +209,6 @@ export const hazardLibrary = pgTable(
   },
   (t) => [uniqueIndex("hazard_library_organisation_hazard_idx").on(t.organisationId, t.hazard)],
 );
-
-const bytea = customType<{ data: Uint8Array; driverData: Uint8Array }>({ dataType: () => "bytea" });
 
 /** File contents, kept by the storage module (lib/storage.ts); the database is the default store. */
 export const storedFiles = pgTable("stored_files", {
@@ -304,10 +328,81 @@ export const auditEvents = pgTable(
     contentHash: text("content_hash"),
     details: jsonb("details"),
     createdAt: createdAt(),
+    /** The event's place in its organisation's chain: 1, 2, 3… with no gaps. */
+    seq: bigint("seq", { mode: "number" }).notNull(),
+    /** The previous event's `hash` (null for the first): removing or reordering an event breaks the link. */
+    prevHash: text("prev_hash"),
+    /** SHA-256 over this event's fields and `prevHash` (lib/audit-chain.ts): editing an event breaks it. */
+    hash: text("hash"),
   },
   (t) => [
     index("audit_events_entity_idx").on(t.entityType, t.entityId, t.createdAt),
     index("audit_events_organisation_idx").on(t.organisationId, t.createdAt),
+    uniqueIndex("audit_events_organisation_seq_idx").on(t.organisationId, t.seq),
+  ],
+);
+
+/**
+ * One-time links sent by e-mail for an account: confirming a sign-up's address, resetting a
+ * password. Only the SHA-256 of the token is stored; a link works once, before it expires.
+ */
+export const accountLinkPurposeEnum = pgEnum("account_link_purpose", ["verify-email", "reset-password"]);
+export const accountLinks = pgTable(
+  "account_links",
+  {
+    id: id(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    purpose: accountLinkPurposeEnum("purpose").notNull(),
+    tokenHash: text("token_hash").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("account_links_token_hash_unique").on(t.tokenHash), index("account_links_user_idx").on(t.userId)],
+);
+
+/** Recovery codes for a second factor: each works once, stored as SHA-256 only. */
+export const recoveryCodes = pgTable(
+  "recovery_codes",
+  {
+    id: id(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    codeHash: text("code_hash").notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+  },
+  (t) => [index("recovery_codes_user_idx").on(t.userId)],
+);
+
+/**
+ * API tokens an administrator creates for an integration. The token is shown once; only its SHA-256
+ * is kept. It acts for its creator with the permissions of `scope`, never more than the creator's
+ * own at the time of each request.
+ */
+export const apiTokens = pgTable(
+  "api_tokens",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    createdBy: uuid("created_by")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    /** The first characters of the token, to tell tokens apart in the list. */
+    prefix: text("prefix").notNull(),
+    tokenHash: text("token_hash").notNull(),
+    scope: roleEnum("scope").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("api_tokens_token_hash_unique").on(t.tokenHash),
+    index("api_tokens_organisation_idx").on(t.organisationId),
   ],
 );
 
