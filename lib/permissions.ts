@@ -3,11 +3,15 @@
  * action asks `authorize(actor, action, resource)`; nothing relies on a hidden button or on proxy.ts.
  */
 import type { Role } from "@/db/schema";
+import type { AuthRecord } from "./audit";
 import { AppError } from "./errors";
 
 export const ACTIONS = [
   "profile:read",
   "users:manage",
+  "organisation:manage",
+  "api-tokens:manage",
+  "audit:read",
   "mail-log:read",
   "jobs:read",
   "jobs:write",
@@ -41,7 +45,15 @@ const ADVISER: readonly Action[] = [
 ];
 
 export const PERMISSIONS: Record<Role, readonly Action[]> = {
-  admin: ["users:manage", "mail-log:read", "hazard-library:manage", ...ADVISER],
+  admin: [
+    "users:manage",
+    "organisation:manage",
+    "api-tokens:manage",
+    "audit:read",
+    "mail-log:read",
+    "hazard-library:manage",
+    ...ADVISER,
+  ],
   adviser: ADVISER,
   approver: ["profile:read", "reviews:read", "reviews:decide", "score:use"],
   foreman: ["profile:read", "briefings:run", "site-notes:create", "score:use"],
@@ -53,7 +65,14 @@ export interface Actor {
   role: Role;
   name: string;
   email: string;
+  /** An API token's permissions: its scope's, never more than its creator's. A session has its role's. */
+  permissions?: readonly Action[];
+  /** How this request was authenticated, for the audit trail. */
+  auth?: AuthRecord;
 }
+
+/** What this actor may do: the role's permissions, or a token's narrower set. */
+export const permissionsOf = (actor: Actor): readonly Action[] => actor.permissions ?? PERMISSIONS[actor.role];
 
 export interface OwnedResource {
   organisationId: string;
@@ -62,7 +81,7 @@ export interface OwnedResource {
 /** May this actor do this, to this resource (when there is one)? */
 export function can(actor: Actor | null, action: Action, resource?: OwnedResource | null): boolean {
   if (!actor) return false;
-  if (!PERMISSIONS[actor.role].includes(action)) return false;
+  if (!permissionsOf(actor).includes(action)) return false;
   return resource ? resource.organisationId === actor.organisationId : true;
 }
 
@@ -77,5 +96,11 @@ export function authorize(
 ): asserts actor is Actor {
   if (!actor) throw new AppError("unauthenticated", "Sign in to continue");
   if (resource && resource.organisationId !== actor.organisationId) throw AppError.notFound();
-  if (!PERMISSIONS[actor.role].includes(action)) throw new AppError("forbidden", "Your role does not allow this");
+  if (!permissionsOf(actor).includes(action))
+    throw new AppError(
+      "forbidden",
+      actor.auth?.via === "token"
+        ? `This token's scope does not include the permission "${action}"`
+        : "Your role does not allow this",
+    );
 }

@@ -60,6 +60,7 @@ export async function startBriefing(actor: Actor | null, input: unknown): Promis
       entityType: "revision",
       entityId: data.revisionId,
       details: { briefingId: row.id, place: data.place },
+      auth: actor.auth,
     });
     return { briefingId: row.id };
   });
@@ -160,6 +161,7 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
       entityType: "revision",
       entityId: briefing.revisionId,
       details: { briefingId, attendees: attendees.length },
+      auth: actor.auth,
     });
   });
 }
@@ -204,6 +206,7 @@ export async function createSiteChangeNote(
       entityType: "revision",
       entityId: revision.id,
       details: { text: data.text, photo: !!file },
+      auth: actor.auth,
     });
   });
   const author = revision.authorId

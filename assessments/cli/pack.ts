@@ -22,7 +22,7 @@ async function main(out: string) {
   try {
     const { getDb, closeDb } = await import("@/db/client");
     const { seedDemo } = await import("@/assessments/demo/seed");
-    const { DEMO_USERS } = await import("@/assessments/demo/scenario");
+    const { DEMO_USERS, DEMO_PASSWORD } = await import("@/assessments/demo/scenario");
     const { users } = await import("@/db/schema");
     const { eq } = await import("drizzle-orm");
     const { getRevision } = await import("@/assessments/revisions/service");
@@ -52,6 +52,8 @@ async function main(out: string) {
       name: approver.name,
       role: "Contracts manager",
       signature: `data:image/png;base64,${drawnSignaturePng(3).toString("base64")}`,
+      contentHash: submitted.revision.contentHash,
+      password: DEMO_PASSWORD,
     });
     const pack = await getPackFile(adviser, revisionId);
     writeFileSync(out, pack.data);

@@ -13,6 +13,7 @@ import { createHash, randomUUID } from "node:crypto";
 import path from "node:path";
 import { parseArgs } from "node:util";
 import type * as Schema from "@/db/schema";
+import type { AuditEntry } from "@/lib/audit";
 
 const { values: args } = parseArgs({
   options: {
@@ -157,6 +158,7 @@ async function main() {
   const { reviewContent } = await import("@/assessments/method-statement/score-task");
   const { hashPassword } = await import("@/lib/auth/passwords");
   const { drawnSignaturePng } = await import("@/lib/png");
+  const { chainEvent, lockedChainHead } = await import("@/lib/audit");
 
   const db = await getDb();
   const { organisationId } = await seedDemo(db);
@@ -197,6 +199,7 @@ async function main() {
       name,
       email: `${name.toLowerCase().replace(/\s+/g, ".")}.${i}@brackenfold.example`,
       passwordHash,
+      emailVerifiedAt: new Date(),
     };
   });
   await insert(schema.users, people);
@@ -273,7 +276,7 @@ async function main() {
   for (let from = 0; from < total; from += BATCH) {
     const assessmentRows: (typeof Schema.assessments.$inferInsert)[] = [];
     const revisionRows: (typeof Schema.revisions.$inferInsert)[] = [];
-    const auditRows: (typeof Schema.auditEvents.$inferInsert)[] = [];
+    const auditRows: (AuditEntry & { createdAt: Date })[] = [];
     const briefingRows: (typeof Schema.briefings.$inferInsert)[] = [];
     const attendeeRows: (typeof Schema.briefingAttendees.$inferInsert)[] = [];
     for (let i = from; i < Math.min(total, from + BATCH); i++) {
@@ -376,8 +379,11 @@ async function main() {
       await tx.insert(schema.assessments).values(assessmentRows);
       for (let i = 0; i < revisionRows.length; i += 200)
         await tx.insert(schema.revisions).values(revisionRows.slice(i, i + 200));
-      for (let i = 0; i < auditRows.length; i += 1000)
-        await tx.insert(schema.auditEvents).values(auditRows.slice(i, i + 1000));
+      // Chained like every event (lib/audit.ts), in the order written.
+      let head = await lockedChainHead(tx, organisationId);
+      const chained = auditRows.map(({ createdAt, ...entry }) => (head = chainEvent(entry, head, createdAt)));
+      for (let i = 0; i < chained.length; i += 1000)
+        await tx.insert(schema.auditEvents).values(chained.slice(i, i + 1000));
       if (briefingRows.length) await tx.insert(schema.briefings).values(briefingRows);
       for (let i = 0; i < attendeeRows.length; i += 500)
         await tx.insert(schema.briefingAttendees).values(attendeeRows.slice(i, i + 500));

@@ -36,7 +36,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean; organisation
     await addStarterHazards(tx, org.id);
     const people = await tx
       .insert(users)
-      .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash })))
+      .values(DEMO_USERS.map((u) => ({ ...u, organisationId: org.id, passwordHash, emailVerifiedAt: new Date() })))
       .returning();
     const adviser = people.find((p) => p.role === "adviser")!;
     const jobRows = await tx
@@ -168,6 +168,8 @@ async function seedDemoAssessments(organisationId: string) {
       name: approver.name,
       role: "Contracts manager",
       signature: `data:image/png;base64,${drawnSignaturePng(5).toString("base64")}`,
+      contentHash: submitted.revision.contentHash,
+      password: DEMO_PASSWORD,
     },
     { notify: false },
   );

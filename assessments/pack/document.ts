@@ -35,12 +35,17 @@ import type { Band, Reason, Warning } from "../rules/types";
 import type { PackFonts } from "./fonts";
 import { embedPng } from "./images";
 import { COLOURS, MARGIN, Writer } from "./layout";
+import type { SigningRecordEntry } from "../revisions/signing-record";
 
 export const PACK_CAUTION =
   "Heftwise supports, and does not replace, the judgement of a competent person. Check every result on site, and follow local regulations, your organisation's procedures and licensed practice.";
 
 export interface PackInput {
   organisation: string;
+  /** The organisation's logo for the cover (PNG or JPEG), when it has one. */
+  logo: { data: Uint8Array; type: string } | null;
+  /** Each event of the revision's life from the audit trail, in order (assessments/revisions/signing-record.ts). */
+  signingRecord: SigningRecordEntry[];
   title: string;
   job: {
     name: string;
@@ -125,7 +130,18 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     font: fonts.regular,
     color: rgb(0.953, 0.937, 0.894),
   });
-  w.y -= 60;
+  if (input.logo) {
+    const logo =
+      input.logo.type === "image/png" ? await doc.embedPng(input.logo.data) : await doc.embedJpg(input.logo.data);
+    const scale = Math.min(140 / logo.width, 48 / logo.height, 1);
+    w.page.drawImage(logo, {
+      x: w.page.getWidth() - MARGIN - logo.width * scale,
+      y: w.page.getHeight() - 70 - 10 - logo.height * scale,
+      width: logo.width * scale,
+      height: logo.height * scale,
+    });
+  }
+  w.y -= input.logo ? 70 : 60;
   w.heading(input.title, 1);
   w.text(
     `${revision.status === "approved" ? "Approved" : revision.status === "superseded" ? "Superseded" : "Draft for approval — not for use on site"} · revision ${revision.number}`,
@@ -427,6 +443,28 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
       }
       w.space(6);
     }
+  }
+
+  // Signing record: the revision's life as the audit trail holds it, to be matched against it.
+  if (input.signingRecord.length) {
+    w.heading("Signing record", 2, 60);
+    w.text(
+      "Each event of this revision's life, from Heftwise's audit trail. The number and hash name the event in the organisation's tamper-evident chain; an administrator can check the chain under Audit trail.",
+      { size: 9.5, color: COLOURS.muted },
+    );
+    w.space(4);
+    w.table(
+      ["No.", "When", "Event", "Who", "How authenticated", "Content / event hash"],
+      input.signingRecord.map((e) => [
+        String(e.seq),
+        date(e.at),
+        e.event,
+        e.who,
+        e.how,
+        `${e.contentHash ? e.contentHash.slice(0, 12) : "—"} / ${e.hash ? e.hash.slice(0, 12) : "—"}`,
+      ]),
+      [0.06, 0.16, 0.17, 0.14, 0.3, 0.17],
+    );
   }
 
   w.finish((n, total) => [

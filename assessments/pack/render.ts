@@ -41,6 +41,8 @@ export function packFonts(): Promise<PackFonts> {
   return fonts;
 }
 
+import { signingRecord } from "../revisions/signing-record";
+
 export const verifyUrl = () => appUrl("/verify");
 
 /**
@@ -96,6 +98,9 @@ export async function renderPack(
   const doc = await buildPack(
     {
       organisation: organisation.name,
+      logo:
+        organisation.logo && organisation.logoType ? { data: organisation.logo, type: organisation.logoType } : null,
+      signingRecord: await signingRecord(tx, organisation.id, revisionId),
       title: assessment.title,
       job,
       revision: {

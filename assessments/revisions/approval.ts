@@ -34,6 +34,7 @@ import { reviewContent } from "../method-statement/score-task";
 import { contentHash, getRevision, loadRevision } from "./service";
 import { isAssignedToJob } from "../briefing/assignment";
 import { isUuid } from "@/lib/ids";
+import { confirmIdentity } from "@/lib/auth/step-up";
 
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 
@@ -114,6 +115,7 @@ export async function submitRevision(
       entityId: revisionId,
       contentHash: hash,
       details: { approverId: approver.id },
+      auth: actor.auth,
     });
   });
   // After the commit: a failed e-mail is logged and shown, and never undoes the submission.
@@ -185,6 +187,11 @@ export const approveSchema = z.object({
   role: z.string().trim().min(2, "Type your role").max(120),
   signature: drawnSignatureSchema("Draw your signature"),
   version: z.number().int().min(1),
+  /** The content hash of the revision the approver read: a signature binds to what was seen. */
+  contentHash: z.string().regex(/^[0-9a-f]{64}$/, "Reload the page: the revision's fingerprint is missing"),
+  /** Step-up: the approver's password again, and a second-factor code when they have one. */
+  password: z.string().min(1, "Enter your password to confirm it is you").max(200),
+  code: z.string().trim().max(20).optional(),
 });
 
 export const returnSchema = z.object({
@@ -202,7 +209,10 @@ async function submittedToMe(actor: Actor, revisionId: string, version: number) 
   return revision;
 }
 
-/** Countersigns: locks the revision, supersedes the previous approved one, stores the signed pack. All or nothing. */
+/**
+ * Countersigns: the approver proves who they are again (step-up) for the content they read, then the
+ * revision is locked, the previous approved one superseded, and the signed pack stored. All or nothing.
+ */
 export async function approveRevision(
   actor: Actor | null,
   revisionId: string,
@@ -213,10 +223,17 @@ export async function approveRevision(
   const data = await parseOrThrowAsync(approveSchema, input);
   const png = data.signature;
   const revision = await submittedToMe(actor, revisionId, data.version);
+  const hash = revision.contentHash ?? contentHash(revision.content);
+  if (data.contentHash !== hash)
+    throw new AppError("conflict", "The revision is not the one you read. Reload the page and read it again.");
+  const auth = await confirmIdentity(
+    actor,
+    { password: data.password, code: data.code },
+    { address: actor.auth?.address ?? null, client: actor.auth?.client ?? null },
+  );
   const db = await getDb();
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
   const key = await getSigningKey(actor.organisationId, org!.name);
-  const hash = revision.contentHash ?? contentHash(revision.content);
   await db.transaction(async (tx) => {
     const [locked] = await tx
       .update(revisions)
@@ -244,8 +261,7 @@ export async function approveRevision(
       image: png,
       contentHash: hash,
     });
-    const pdf = await renderPack(tx, revisionId, key);
-    await storePack(tx, actor.organisationId, revisionId, pdf, "approved");
+    // Recorded before the pack is drawn: its signing record ends with this approval.
     await recordAudit(tx, {
       organisationId: actor.organisationId,
       actorId: actor.id,
@@ -253,7 +269,8 @@ export async function approveRevision(
       entityType: "revision",
       entityId: revisionId,
       contentHash: hash,
-      details: { signerName: data.name, signerRole: data.role, packSha256: sha256(pdf) },
+      details: { signerName: data.name, signerRole: data.role },
+      auth,
     });
     for (const s of superseded)
       await recordAudit(tx, {
@@ -264,6 +281,17 @@ export async function approveRevision(
         entityId: s.id,
         details: { by: revisionId },
       });
+    const pdf = await renderPack(tx, revisionId, key);
+    await storePack(tx, actor.organisationId, revisionId, pdf, "approved");
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.pack-issued",
+      entityType: "revision",
+      entityId: revisionId,
+      contentHash: hash,
+      details: { kind: "approved", packSha256: sha256(pdf) },
+    });
   });
   return { mail: notify ? await notifyAuthor(actor, revisionId, "approved") : null };
 }
@@ -299,6 +327,7 @@ export async function returnRevision(
       entityId: revisionId,
       contentHash: revision.contentHash,
       details: { sections: Object.keys(comments) },
+      auth: actor.auth,
     });
   });
   return { mail: await notifyAuthor(actor, revisionId, "returned", comments) };
@@ -387,6 +416,7 @@ export async function startNewRevision(actor: Actor | null, revisionId: string):
       entityId: created.id,
       contentHash: contentHash(revision.content),
       details: { from: revision.id },
+      auth: actor.auth,
     });
     return { revisionId: created.id };
   });

@@ -119,6 +119,7 @@ export async function createAssessment(
       entityId: revision.id,
       contentHash: contentHash(content),
       details: { templateId: data.templateId ?? null },
+      auth: actor.auth,
     });
     return { assessmentId: assessment.id, revisionId: revision.id };
   });

@@ -4,6 +4,8 @@ declare module "next-auth" {
   interface User {
     role: Role;
     organisationId: string;
+    /** How and from where this sign-in was made, kept on the server-side session record. */
+    signedIn: { method: string; address: string | null; client: string | null };
   }
   interface Session {
     user: { id: string; role: Role; organisationId: string; name?: string | null; email?: string | null };

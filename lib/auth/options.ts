@@ -21,16 +21,23 @@ export const authOptions: NextAuthOptions = {
   providers: [
     CredentialsProvider({
       name: "E-mail and password",
-      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      credentials: {
+        email: { label: "E-mail", type: "email" },
+        password: { label: "Password", type: "password" },
+        code: { label: "Code", type: "text" },
+      },
       async authorize(credentials, req) {
         // A thrown error's message reaches the sign-in form; it never says which part was wrong.
-        const actor = await checkCredentials(credentials, clientAddress(req?.headers));
+        const address = clientAddress(req?.headers);
+        const { actor, method } = await checkCredentials(credentials, address);
+        const agent = req?.headers?.["user-agent"];
         return {
           id: actor.id,
           name: actor.name,
           email: actor.email,
           role: actor.role,
           organisationId: actor.organisationId,
+          signedIn: { method, address, client: typeof agent === "string" ? agent.slice(0, 200) : null },
         };
       },
     }),
@@ -42,7 +49,7 @@ export const authOptions: NextAuthOptions = {
         token.userId = user.id;
         token.role = user.role;
         token.organisationId = user.organisationId;
-        token.sessionId = await openSession(user.id);
+        token.sessionId = await openSession(user.id, user.signedIn);
       }
       return token;
     },

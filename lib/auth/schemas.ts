@@ -9,6 +9,8 @@ import * as zm from "zod/mini";
 export const signInSchema = zm.object({
   email: zm.pipe(zm.string().check(zm.trim(), zm.toLowerCase()), zm.email("Enter an e-mail address")),
   password: zm.string().check(zm.minLength(1, "Enter your password"), zm.maxLength(200)),
+  /** A code from the authenticator app, or a recovery code; asked for once the password is right. */
+  code: zm.optional(zm.string().check(zm.trim(), zm.maxLength(20, "Enter the code"))),
 });
 
 export const PASSWORD_MIN = 10;

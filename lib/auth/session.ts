@@ -18,6 +18,7 @@ import { users, userSessions } from "@/db/schema";
 import { isUuid } from "@/lib/ids";
 import type { Actor } from "@/lib/permissions";
 import { config } from "@/lib/config";
+import { requestOrigin } from "./request-context";
 import { recallSession, rememberSession, sessionGeneration } from "./session-cache";
 
 /** next-auth's cookie name: the __Secure- prefix when the site is served over https. */
@@ -67,6 +68,7 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
       active: users.active,
       passwordHash: users.passwordHash,
       expiresAt: userSessions.expiresAt,
+      method: userSessions.method,
     })
     .from(users)
     .innerJoin(
@@ -81,6 +83,7 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
     role: row.role,
     name: row.name,
     email: row.email,
+    auth: { via: "session", method: row.method, address: null, client: null },
   };
   if (embedded) rememberSession(sessionId, actor, row.expiresAt, generation);
   return actor;
@@ -90,7 +93,8 @@ export const getActor = cache(async (): Promise<Actor | null> => {
   // Who is calling is known only at request time: never prerender a page that asks.
   await connection();
   const claims = await readSessionClaims(await cookies());
-  return claims ? lookUp(claims.userId, claims.sessionId) : null;
+  const actor = claims ? await lookUp(claims.userId, claims.sessionId) : null;
+  return actor && { ...actor, auth: { ...actor.auth!, ...(await requestOrigin()) } };
 });
 
 /** For pages: the actor, or a redirect to the sign-in page. */

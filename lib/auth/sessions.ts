@@ -3,7 +3,7 @@
  * everywhere" and deactivation close all of a user's. Every request checks its record, so a copied
  * token dies with its session.
  */
-import { and, eq, gt } from "drizzle-orm";
+import { and, eq, gt, ne } from "drizzle-orm";
 import { getDb, type Queryable } from "@/db/client";
 import { userSessions } from "@/db/schema";
 import { forgetSessions } from "./session-cache";
@@ -11,11 +11,18 @@ import { isUuid } from "@/lib/ids";
 
 export const SESSION_MAX_AGE_S = 12 * 60 * 60;
 
-export async function openSession(userId: string): Promise<string> {
+export async function openSession(
+  userId: string,
+  signedIn: { method: string; address: string | null; client: string | null } = {
+    method: "password",
+    address: null,
+    client: null,
+  },
+): Promise<string> {
   const db = await getDb();
   const [row] = await db
     .insert(userSessions)
-    .values({ userId, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) })
+    .values({ userId, ...signedIn, expiresAt: new Date(Date.now() + SESSION_MAX_AGE_S * 1000) })
     .returning({ id: userSessions.id });
   return row.id;
 }
@@ -46,4 +53,11 @@ export async function closeSession(sessionId: string | undefined): Promise<void>
 export async function closeAllSessions(userId: string, tx?: Queryable): Promise<void> {
   await (tx ?? (await getDb())).delete(userSessions).where(eq(userSessions.userId, userId));
   forgetSessions();
+}
+
+/** Every session of a user but one: a password change keeps the session that made it. */
+export async function closeOtherSessions(userId: string, keep: string | undefined, tx: Queryable): Promise<void> {
+  await tx
+    .delete(userSessions)
+    .where(and(eq(userSessions.userId, userId), ...(keep && isUuid(keep) ? [ne(userSessions.id, keep)] : [])));
 }

@@ -258,7 +258,8 @@ export async function acceptInvite(token: string, input: unknown): Promise<{ ema
     if (!invite) throw new AppError("conflict", inviteStateMessage("used"));
     const [user] = await tx
       .update(users)
-      .set({ passwordHash, updatedAt: new Date() })
+      // The link reached this address: that proves it.
+      .set({ passwordHash, emailVerifiedAt: new Date(), updatedAt: new Date() })
       .where(eq(users.id, invite.userId))
       .returning();
     await recordAudit(tx, {

@@ -21,6 +21,7 @@ import {
 } from "@/assessments/revisions/approval";
 import { getRevision, saveRevision } from "@/assessments/revisions/service";
 import { listAssessments } from "@/assessments/revisions/queries";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import { AppError } from "@/lib/errors";
 import { startMailFake, type MailFake } from "@/lib/mail/fake-server";
 import { drawnSignaturePng, encodePng } from "@/lib/png";
@@ -129,6 +130,8 @@ describe("submit and countersign", () => {
       version: revision.version,
       name: "",
       role: "Contracts manager",
+      contentHash: revision.contentHash!,
+      password: DEMO_PASSWORD,
       signature: "no image",
     }).catch((e: AppError) => e);
     expect((noName as AppError).issues!.map((i) => i.path).sort()).toEqual(["name", "signature"]);
@@ -136,6 +139,8 @@ describe("submit and countersign", () => {
       version: revision.version,
       name: "Ruth",
       role: "Contracts manager",
+      contentHash: revision.contentHash!,
+      password: DEMO_PASSWORD,
       signature: "data:image/png;base64,AAAA",
     }).catch((e: AppError) => e);
     expect((notPng as AppError).issues!.map((i) => i.path)).toEqual(["signature"]);
@@ -151,6 +156,8 @@ describe("submit and countersign", () => {
         version: revision.version,
         name: "Ruth",
         role: "Contracts manager",
+        contentHash: revision.contentHash!,
+        password: DEMO_PASSWORD,
         signature: `data:image/png;base64,${png.toString("base64")}`,
       }).catch((e: AppError) => e);
       expect((refused as AppError).issues).toEqual([{ path: "signature", message: "Draw your signature" }]);
@@ -165,6 +172,8 @@ describe("submit and countersign", () => {
       version: revision.version,
       name: "Ruth Okonjo-Vale",
       role: "Contracts manager",
+      contentHash: revision.contentHash!,
+      password: DEMO_PASSWORD,
       signature: SIGNATURE,
     });
     expect(mail!.status).toBe("sent");
@@ -181,6 +190,8 @@ describe("submit and countersign", () => {
           version: after.revision.version,
           name: "Ruth Okonjo-Vale",
           role: "Contracts manager",
+          contentHash: after.revision.contentHash!,
+          password: DEMO_PASSWORD,
           signature: SIGNATURE,
         }),
       ),
@@ -241,6 +252,8 @@ describe("submit and countersign", () => {
       version: revision.version,
       name: "Ruth Okonjo-Vale",
       role: "Contracts manager",
+      contentHash: revision.contentHash!,
+      password: DEMO_PASSWORD,
       signature: SIGNATURE,
     });
     expect((await getRevision(adviser, first)).revision.status).toBe("superseded");

@@ -277,7 +277,7 @@ describe("signing in", () => {
     for (let i = 0; i < 3; i++)
       await checkCredentials({ email, password: `guess-${i}-password` }, "10.1.0.9").catch(() => undefined);
     const actor = await checkCredentials({ email, password: DEMO_PASSWORD }, "10.2.0.1");
-    expect(actor.email).toBe(email);
+    expect(actor.actor.email).toBe(email);
   });
 
   it("an address that tries many accounts waits, for any account", async () => {
@@ -289,7 +289,8 @@ describe("signing in", () => {
       checkCredentials({ email: "adviser@brackenfold.example", password: DEMO_PASSWORD }, "10.3.0.3"),
     ).rejects.toThrow(/Too many attempts/);
     expect(
-      (await checkCredentials({ email: "adviser@brackenfold.example", password: DEMO_PASSWORD }, "10.3.0.4")).email,
+      (await checkCredentials({ email: "adviser@brackenfold.example", password: DEMO_PASSWORD }, "10.3.0.4")).actor
+        .email,
     ).toBe("adviser@brackenfold.example");
   });
 });

@@ -30,6 +30,8 @@ export function packInput(taskCount: number, overrides: Partial<PackInput> = {})
   }
   return {
     organisation: "Brackenfold Lineside Ltd",
+    logo: null,
+    signingRecord: [],
     title: `Pack of ${taskCount} handling tasks`,
     job: {
       name: "Hollin Vale loop",

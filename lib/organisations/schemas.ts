@@ -1,0 +1,18 @@
+import { z } from "zod";
+import { ROLES } from "@/db/schema";
+
+export const REVIEW_PERIODS = [1, 3, 6, 12, 24] as const;
+
+export const organisationSettingsSchema = z.object({
+  name: z.string().trim().min(2, "Enter the organisation's name").max(120, "Use at most 120 characters"),
+  reviewPeriodMonths: z.coerce
+    .number({ error: "Choose a review period" })
+    .int()
+    .refine((n) => (REVIEW_PERIODS as readonly number[]).includes(n), "Choose one of the listed periods"),
+  secondFactorRoles: z.array(z.enum(ROLES, { error: "Unknown role" })).max(ROLES.length),
+});
+
+export type OrganisationSettingsInput = z.input<typeof organisationSettingsSchema>;
+
+export const LOGO_MAX_BYTES = 300_000;
+export const LOGO_TYPES = ["image/png", "image/jpeg"] as const;
