@@ -69,10 +69,16 @@ export interface Actor {
   permissions?: readonly Action[];
   /** How this request was authenticated, for the audit trail. */
   auth?: AuthRecord;
+  /** The organisation requires a second factor for this role and none is set up: only the account pages work. */
+  mustEnrolSecondFactor?: boolean;
 }
 
+/** What someone who must still set up a second factor may do: see and change their own account. */
+const BEFORE_SECOND_FACTOR: readonly Action[] = ["profile:read"];
+
 /** What this actor may do: the role's permissions, or a token's narrower set. */
-export const permissionsOf = (actor: Actor): readonly Action[] => actor.permissions ?? PERMISSIONS[actor.role];
+export const permissionsOf = (actor: Actor): readonly Action[] =>
+  actor.mustEnrolSecondFactor ? BEFORE_SECOND_FACTOR : (actor.permissions ?? PERMISSIONS[actor.role]);
 
 export interface OwnedResource {
   organisationId: string;
@@ -101,6 +107,8 @@ export function authorize(
       "forbidden",
       actor.auth?.via === "token"
         ? `This token's scope does not include the permission "${action}"`
-        : "Your role does not allow this",
+        : actor.mustEnrolSecondFactor
+          ? "Your organisation requires a second factor: set one up under Account first"
+          : "Your role does not allow this",
     );
 }

@@ -14,7 +14,7 @@ import { redirect } from "next/navigation";
 import { connection } from "next/server";
 import { cache } from "react";
 import { getDb, writesAreLocal } from "@/db/client";
-import { users, userSessions } from "@/db/schema";
+import { organisations, users, userSessions } from "@/db/schema";
 import { isUuid } from "@/lib/ids";
 import type { Actor } from "@/lib/permissions";
 import { config } from "@/lib/config";
@@ -69,12 +69,15 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
       passwordHash: users.passwordHash,
       expiresAt: userSessions.expiresAt,
       method: userSessions.method,
+      totpEnabledAt: users.totpEnabledAt,
+      secondFactorRoles: organisations.secondFactorRoles,
     })
     .from(users)
     .innerJoin(
       userSessions,
       and(eq(userSessions.userId, users.id), eq(userSessions.id, sessionId), gt(userSessions.expiresAt, new Date())),
     )
+    .innerJoin(organisations, eq(organisations.id, users.organisationId))
     .where(eq(users.id, userId));
   if (!row || !row.active || !row.passwordHash) return null;
   const actor: Actor = {
@@ -84,6 +87,7 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
     name: row.name,
     email: row.email,
     auth: { via: "session", method: row.method, address: null, client: null },
+    ...(row.secondFactorRoles.includes(row.role) && !row.totpEnabledAt ? { mustEnrolSecondFactor: true } : {}),
   };
   if (embedded) rememberSession(sessionId, actor, row.expiresAt, generation);
   return actor;

@@ -25,6 +25,8 @@ import {
 export interface StepUpInput {
   password: string;
   code?: string;
+  /** Changing one's own password asks for the current one only. */
+  passwordOnly?: boolean;
 }
 
 const fieldError = (path: string, message: string) =>
@@ -62,7 +64,7 @@ export async function confirmIdentity(actor: Actor, input: StepUpInput, origin: 
     throw fieldError("password", "That password is not right");
   }
   let method = "password";
-  if (user.totpEnabledAt) {
+  if (user.totpEnabledAt && !input.passwordOnly) {
     if (!input.code?.trim()) throw fieldError("code", "Enter the code from your authenticator app");
     const factor = await spendSecondFactor(user, input.code);
     if (!factor) {

@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { readFileSync, writeFileSync } from "node:fs";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import { signIn, steps, waitForMail } from "./helpers";
 
 // One story in order: the adviser plans the lifts and submits; the approver countersigns from the
@@ -95,6 +96,14 @@ test("the approver opens the e-mailed link, draws a signature and approves; the 
   await approver.getByRole("button", { name: "Countersign and approve…" }).click();
   const dialog = approver.getByRole("dialog");
   await expect(dialog).toContainText("Approve this revision?");
+  // Step-up: an open session is not enough; a wrong password is refused inside the dialog.
+  await dialog.getByRole("button", { name: "Approve and sign" }).click();
+  await expect(dialog.getByText("Enter your password to confirm it is you")).toBeVisible();
+  await dialog.getByLabel("Your password").fill("not-the-password");
+  await dialog.getByRole("button", { name: "Approve and sign" }).click();
+  await expect(dialog.getByText("That password is not right")).toBeVisible();
+  await expect(approver.getByTestId("review-status")).toHaveText("Waiting for your decision");
+  await dialog.getByLabel("Your password").fill(DEMO_PASSWORD);
   await dialog.getByRole("button", { name: "Approve and sign" }).click();
   await expect(approver.getByText(/Countersigned by Ruth Okonjo-Vale, Contracts manager/)).toBeVisible();
   await expect(approver.getByText("Approved and countersigned. The signed pack is issued")).toBeVisible();

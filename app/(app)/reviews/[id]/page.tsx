@@ -5,6 +5,7 @@ import { getReview } from "@/assessments/revisions/approval";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
+import { hasSecondFactor } from "@/lib/auth/step-up";
 import { ReadOnlyRevision } from "../../revisions/[id]/read-only-revision";
 import { ReviewActions } from "./review-actions";
 import { foundOr404 } from "@/lib/pages";
@@ -51,7 +52,13 @@ export default async function ReviewPage({
         worstBand={revision.worstBand as Band | null}
       />
       {revision.status === "submitted" ? (
-        <ReviewActions revisionId={revision.id} version={revision.version} defaultName={actor.name} />
+        <ReviewActions
+          revisionId={revision.id}
+          version={revision.version}
+          contentHash={revision.contentHash ?? ""}
+          secondFactor={await hasSecondFactor(actor.id)}
+          defaultName={actor.name}
+        />
       ) : (
         <p className="rounded-lg border border-rule bg-white p-4">
           {signatures

@@ -22,10 +22,16 @@ type Issues = Record<string, string>;
 export function ReviewActions({
   revisionId,
   version,
+  contentHash,
+  secondFactor,
   defaultName,
 }: {
   revisionId: string;
   version: number;
+  /** The fingerprint of the content on this page: the approval is bound to it. */
+  contentHash: string;
+  /** The approver has an authenticator app: the confirmation asks for a code too. */
+  secondFactor: boolean;
   defaultName: string;
 }) {
   const router = useRouter();
@@ -34,6 +40,9 @@ export function ReviewActions({
   const [role, setRole] = useState("");
   const [issues, setIssues] = useState<Issues>({});
   const [confirmOpen, setConfirmOpen] = useState(false);
+  const [password, setPassword] = useState("");
+  const [code, setCode] = useState("");
+  const [stepUpIssues, setStepUpIssues] = useState<Issues>({});
   const [drawn, setDrawn] = useState<string | null>(null);
   const [comments, setComments] = useState<Record<string, string>>({});
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string } | null>(null);
@@ -68,11 +77,35 @@ export function ReviewActions({
   };
 
   const countersign = async () => {
-    setConfirmOpen(false);
-    const answer = await post("approve", { version, name, role, signature: drawn });
-    if (answer) {
+    const found: Issues = {};
+    if (!password) found.password = "Enter your password to confirm it is you";
+    if (secondFactor && !code.trim()) found.code = "Enter the code from your authenticator app";
+    setStepUpIssues(found);
+    if (Object.keys(found).length) return;
+    setBusy(true);
+    try {
+      const answer = await apiRequest<{ mail?: { status: string } }>(`/api/v1/revisions/${revisionId}/approve`, {
+        json: { version, contentHash, name, role, signature: drawn, password, code: code || undefined },
+      });
+      setConfirmOpen(false);
       router.replace(`/reviews/${revisionId}?notice=${answer.mail?.status === "failed" ? "mail-failed" : "approved"}`);
       router.refresh();
+    } catch (err) {
+      // Step-up refusals stay in the dialog, on their fields; anything else closes it and shows beside the form.
+      const issues = err instanceof ApiError ? err.issues : [];
+      const onDialog = issues.filter((i) => i.path === "password" || i.path === "code");
+      if (onDialog.length || (err instanceof ApiError && err.status === 429)) {
+        setStepUpIssues(Object.fromEntries(onDialog.map((i) => [i.path, i.message])));
+        if (!onDialog.length) setStepUpIssues({ password: messageOf(err) });
+        setPassword("");
+        setCode("");
+        return;
+      }
+      setConfirmOpen(false);
+      setIssues(Object.fromEntries(issues.map((i) => [i.path, i.message])));
+      setOutcome({ tone: "error", text: messageOf(err) });
+    } finally {
+      setBusy(false);
     }
   };
 
@@ -130,14 +163,45 @@ export function ReviewActions({
                 // eslint-disable-next-line @next/next/no-img-element -- a data URL of the drawing just made
                 <img src={drawn} alt="Your signature" className="mt-3 h-20 rounded border border-rule bg-white" />
               )}
-              <div className="mt-5 flex justify-end gap-2">
-                <Dialog.Close asChild>
-                  <SecondaryButton type="button">Not yet</SecondaryButton>
-                </Dialog.Close>
-                <PrimaryButton type="button" onClick={countersign}>
-                  Approve and sign
-                </PrimaryButton>
-              </div>
+              <form
+                className="mt-4 space-y-3"
+                onSubmit={(e) => {
+                  e.preventDefault();
+                  void countersign();
+                }}
+              >
+                <p className="text-sm">
+                  Confirm it is you: a signature is accepted only with your password
+                  {secondFactor ? " and a code from your authenticator app" : ""}, so an open session cannot sign.
+                </p>
+                <TextField
+                  label="Your password"
+                  type="password"
+                  autoComplete="current-password"
+                  value={password}
+                  onChange={(e) => setPassword(e.target.value)}
+                  error={stepUpIssues.password}
+                />
+                {secondFactor && (
+                  <TextField
+                    label="Code from your authenticator app"
+                    hint="Six digits, or one of your recovery codes."
+                    autoComplete="one-time-code"
+                    value={code}
+                    onChange={(e) => setCode(e.target.value)}
+                    error={stepUpIssues.code}
+                  />
+                )}
+                <p className="break-all text-xs text-muted">Content fingerprint (SHA-256): {contentHash}</p>
+                <div className="flex justify-end gap-2">
+                  <Dialog.Close asChild>
+                    <SecondaryButton type="button">Not yet</SecondaryButton>
+                  </Dialog.Close>
+                  <PrimaryButton type="submit" disabled={busy}>
+                    {busy ? "Signing…" : "Approve and sign"}
+                  </PrimaryButton>
+                </div>
+              </form>
             </Dialog.Content>
           </Dialog.Portal>
         </Dialog.Root>
