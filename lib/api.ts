@@ -3,6 +3,7 @@
  * and turn any AppError into its status and `{"error": {...}}` body. Handlers stay thin: parse,
  * authorize, call the domain.
  */
+import { AsyncLocalStorage } from "node:async_hooks";
 import { NextResponse } from "next/server";
 import { config } from "./config";
 import { AppError, toAppError } from "./errors";
@@ -121,13 +122,24 @@ export function refuseCrossSite(request: Request, publicOrigin: string): void {
   if (origin === "null") throw new AppError("forbidden", "Requests from another site are refused");
 }
 
-/** Wraps a route handler so that cross-site writes are refused and every thrown error becomes a JSON error response. */
+const handling = new AsyncLocalStorage<Request>();
+
+/** The request a route handler is answering (for its credentials), or undefined outside one. */
+export const currentRequest = (): Request | undefined => handling.getStore();
+
+/**
+ * Wraps a route handler so that cross-site writes are refused, every thrown error becomes a JSON
+ * error response, and `requireApiActor` can read the request's own credentials (a bearer token).
+ */
 export function handler<Args extends unknown[]>(fn: (...args: Args) => Promise<Response>) {
   return async (...args: Args): Promise<Response> => {
+    const request = args[0];
     try {
-      const request = args[0];
-      if (request instanceof Request) refuseCrossSite(request, new URL(config().NEXTAUTH_URL).origin);
-      return await fn(...args);
+      if (!(request instanceof Request)) return await fn(...args);
+      // A bearer token is not sent by a browser on its own: cross-site rules are for cookies.
+      if (!request.headers.get("authorization")?.startsWith("Bearer "))
+        refuseCrossSite(request, new URL(config().NEXTAUTH_URL).origin);
+      return await handling.run(request, () => fn(...args));
     } catch (err) {
       return errorResponse(err);
     }

@@ -1,0 +1,30 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AuthFrame } from "@/app/_components/auth-frame";
+import { inspectAccountLink } from "@/lib/account/service";
+import { ConfirmButton } from "./confirm-button";
+
+export const metadata: Metadata = { title: "Confirm your address", robots: { index: false } };
+
+// Opening the link changes nothing (mail scanners open links too); the button confirms.
+export default async function ConfirmEmailPage({ params }: { params: Promise<{ token: string }> }) {
+  const { token } = await params;
+  const link = await inspectAccountLink(token, "verify-email");
+  if (link.state !== "valid")
+    return (
+      <AuthFrame title="This link cannot be used">
+        <p data-testid="link-problem" className="text-muted">
+          {link.message}
+        </p>
+        <Link href="/sign-in" className="mt-6 inline-block font-bold text-accent underline">
+          Go to sign-in
+        </Link>
+      </AuthFrame>
+    );
+  return (
+    <AuthFrame title="Confirm your address">
+      <p className="mb-4 text-muted">One step left: confirm that this address is yours, then sign in.</p>
+      <ConfirmButton token={token} />
+    </AuthFrame>
+  );
+}
