@@ -16,3 +16,18 @@ export type OrganisationSettingsInput = z.input<typeof organisationSettingsSchem
 
 export const LOGO_MAX_BYTES = 300_000;
 export const LOGO_TYPES = ["image/png", "image/jpeg"] as const;
+
+/** `npm run org:create`: the organisation and its first administrator. */
+export const organisationCliSchema = z.object({
+  organisation: z
+    .string({ error: "Give the organisation's name" })
+    .trim()
+    .min(2, "Give the organisation's name")
+    .max(120),
+  name: z.string({ error: "Give the administrator's name" }).trim().min(2, "Give the administrator's name").max(120),
+  email: z
+    .string({ error: "Give the administrator's e-mail address" })
+    .trim()
+    .toLowerCase()
+    .pipe(z.email("Give a valid e-mail address")),
+});

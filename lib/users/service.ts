@@ -171,6 +171,19 @@ export async function inviteUser(
   return { userId: user.id, mail };
 }
 
+/**
+ * The first administrator of an organisation made from the command line: the same one-time link as
+ * an invitation, in the name of the operator. The e-mail is sent after the caller's commit.
+ */
+export async function inviteFirstAdministrator(
+  tx: Tx,
+  admin: { id: string; organisationId: string; name: string; email: string; role: Role },
+): Promise<() => Promise<SendOutcome>> {
+  const operator: Actor = { ...admin, name: "The Heftwise operator" };
+  const token = await recordInvite(tx, operator, admin);
+  return () => sendInvite(operator, admin, token);
+}
+
 export async function resendInvite(actor: Actor | null, input: unknown): Promise<SendOutcome> {
   authorize(actor, "users:manage");
   const { userId } = parseOrThrow(resendInviteSchema, input);
