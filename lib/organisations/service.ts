@@ -133,3 +133,13 @@ export async function setOrganisationLogo(actor: Actor | null, data: Uint8Array 
     });
   });
 }
+
+export async function getOrganisationLogo(actor: Actor | null): Promise<{ data: Uint8Array; type: string } | null> {
+  authorize(actor, "profile:read");
+  const db = await getDb();
+  const [org] = await db
+    .select({ logo: organisations.logo, type: organisations.logoType })
+    .from(organisations)
+    .where(eq(organisations.id, actor.organisationId));
+  return org?.logo && org.type ? { data: org.logo, type: org.type } : null;
+}

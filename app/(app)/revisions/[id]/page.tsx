@@ -1,3 +1,4 @@
+import { getOrganisationSettings } from "@/lib/organisations/service";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
@@ -92,6 +93,7 @@ export default async function RevisionPage({
           initialContent={content}
           register={register}
           approvers={can(actor, "assessments:submit") ? await listApprovers(actor) : []}
+          reviewPeriodMonths={(await getOrganisationSettings(actor)).reviewPeriodMonths}
           library={can(actor, "hazard-library:read") ? await listLibrary(actor) : []}
           initialStep={initialStep}
         />

@@ -31,6 +31,8 @@ interface Props {
   initialContent: Content;
   register: RegisterEntry[];
   approvers: { id: string; name: string }[];
+  /** The organisation's default review period: the submit step suggests a review date that far ahead. */
+  reviewPeriodMonths: number;
   /** The organisation's hazard library, for the hazards step. */
   library: LibraryEntry[];
   initialStep?: StepKey;
@@ -44,6 +46,7 @@ export function Wizard({
   initialContent,
   register,
   approvers,
+  reviewPeriodMonths,
   library,
   initialStep = "scope",
 }: Props) {
@@ -163,6 +166,7 @@ export function Wizard({
               missing={review.missing}
               worstBand={review.worstBand}
               approvers={approvers}
+              reviewPeriodMonths={reviewPeriodMonths}
               saveNow={saveNow}
               version={version}
               goTo={go}
@@ -228,6 +232,7 @@ function ReviewStep({
   missing,
   worstBand,
   approvers,
+  reviewPeriodMonths,
   saveNow,
   version,
   goTo,
@@ -236,17 +241,22 @@ function ReviewStep({
   missing: ReviewItem[];
   worstBand: import("@/assessments/rules/types").Band | null;
   approvers: { id: string; name: string }[];
+  reviewPeriodMonths: number;
   saveNow: () => Promise<boolean>;
   version: React.RefObject<number>;
   goTo: (key: StepKey) => void;
 }) {
   const router = useRouter();
   const [outcome, setOutcome] = useState<{ tone: "error" | "success"; text: string; items?: string[] } | null>(null);
-  // Fixed when the step opens: the accepted range, and six months ahead as the suggestion.
-  const [dates] = useState(() => ({
-    ...reviewDateRange(),
-    suggested: new Date(Date.now() + 182 * 86_400_000).toISOString().slice(0, 10),
-  }));
+  // Fixed when the step opens: the accepted range, and the organisation's review period ahead as
+  // the suggestion (kept within the range).
+  const [dates] = useState(() => {
+    const range = reviewDateRange();
+    const ahead = new Date();
+    ahead.setUTCMonth(ahead.getUTCMonth() + reviewPeriodMonths);
+    const suggested = ahead.toISOString().slice(0, 10);
+    return { ...range, suggested: suggested > range.latest ? range.latest : suggested < range.earliest ? range.earliest : suggested };
+  });
   const { register, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
     resolver: zodResolver(submitFormSchema),
     defaultValues: { approverId: approvers[0]?.id ?? "", reviewDate: dates.suggested },
