@@ -25,9 +25,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
             <NavLinks items={items} />
           </div>
           <div className="order-2 ml-auto flex items-center gap-3 text-sm md:order-3">
-            <span data-testid="signed-in-as">
+            <Link href="/account" data-testid="signed-in-as" className="hover:underline" title="Your account">
               {actor.name} · <span className="opacity-80">{ROLE_LABELS[actor.role]}</span>
-            </span>
+            </Link>
             <Link href="/sign-out" className="rounded border border-frame-ink/40 px-2 py-1 hover:bg-white/10">
               Sign out
             </Link>

@@ -11,4 +11,5 @@ export const NAVIGATION: { href: string; label: string; action: Action | null }[
   { href: "/briefings", label: "Briefings", action: "briefings:run" },
   { href: "/admin/users", label: "People", action: "users:manage" },
   { href: "/admin/mail", label: "Sent e-mail", action: "mail-log:read" },
+  { href: "/admin/organisation", label: "Organisation", action: "organisation:manage" },
 ];

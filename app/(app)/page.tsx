@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { redirect } from "next/navigation";
 import { countJobs } from "@/assessments/jobs/queries";
 import { countComponents } from "@/assessments/load-register/queries";
 import { listForemanJobs } from "@/assessments/briefing/queries";
@@ -55,6 +56,7 @@ async function AdviserOverview({ actor }: { actor: Actor }) {
 
 export default async function OverviewPage() {
   const actor = await requireActor();
+  if (actor.mustEnrolSecondFactor) redirect("/account/security");
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-bold">Good to see you, {actor.name.split(" ")[0]}</h1>

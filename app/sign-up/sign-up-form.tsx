@@ -28,12 +28,7 @@ export function SignUpForm() {
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {outcome && <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>}
       <TextField label="Organisation" error={formState.errors.organisation?.message} {...register("organisation")} />
-      <TextField
-        label="Your name"
-        autoComplete="name"
-        error={formState.errors.name?.message}
-        {...register("name")}
-      />
+      <TextField label="Your name" autoComplete="name" error={formState.errors.name?.message} {...register("name")} />
       <TextField
         label="Your work e-mail"
         type="email"

@@ -95,20 +95,22 @@ export async function* exportAuditCsv(actor: Actor | null): AsyncGenerator<strin
   const db = await getDb();
   yield Papa.unparse({ fields: CSV_FIELDS, data: [] }) + "\r\n";
   for await (const rows of chainPages(db, actor.organisationId)) {
-    yield Papa.unparse(
-      rows.map((r) => [
-        r.seq,
-        r.createdAt.toISOString(),
-        neutraliseFormula(r.actorName ?? ""),
-        neutraliseFormula(r.actorEmail ?? ""),
-        r.action,
-        r.entityType,
-        r.entityId ?? "",
-        r.contentHash ?? "",
-        neutraliseFormula(r.details ? JSON.stringify(r.details) : ""),
-        r.prevHash ?? "",
-        r.hash ?? "",
-      ]),
-    ) + "\r\n";
+    yield (
+      Papa.unparse(
+        rows.map((r) => [
+          r.seq,
+          r.createdAt.toISOString(),
+          neutraliseFormula(r.actorName ?? ""),
+          neutraliseFormula(r.actorEmail ?? ""),
+          r.action,
+          r.entityType,
+          r.entityId ?? "",
+          r.contentHash ?? "",
+          neutraliseFormula(r.details ? JSON.stringify(r.details) : ""),
+          r.prevHash ?? "",
+          r.hash ?? "",
+        ]),
+      ) + "\r\n"
+    );
   }
 }

@@ -9,7 +9,14 @@ import { getDb } from "@/db/client";
 import { accountLinks, organisations, recoveryCodes, users, userSessions } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { hashPassword } from "@/lib/auth/passwords";
-import { replaceRecoveryCodes, enrolmentCode, matchTotp, newTotpSecret, openSecret, sealSecret } from "@/lib/auth/second-factor";
+import {
+  replaceRecoveryCodes,
+  enrolmentCode,
+  matchTotp,
+  newTotpSecret,
+  openSecret,
+  sealSecret,
+} from "@/lib/auth/second-factor";
 import { closeAllSessions, closeOtherSessions } from "@/lib/auth/sessions";
 import { forgetSessions } from "@/lib/auth/session-cache";
 import { clearAttempts, throttleKeys } from "@/lib/auth/throttle";
@@ -53,7 +60,10 @@ export async function signUp(input: unknown): Promise<{ deliver: Deliver }> {
     return { deliver: () => sendAlreadyRegistered(data.email) };
   const token = await db.transaction(async (tx) => {
     if (existing) {
-      const [{ n }] = await tx.select({ n: count() }).from(users).where(eq(users.organisationId, existing.organisationId));
+      const [{ n }] = await tx
+        .select({ n: count() })
+        .from(users)
+        .where(eq(users.organisationId, existing.organisationId));
       if (n === 1) await tx.delete(organisations).where(eq(organisations.id, existing.organisationId));
       else await tx.delete(users).where(eq(users.id, existing.id));
     }
@@ -339,7 +349,10 @@ export async function startSecondFactor(actor: Actor | null) {
   const [user] = await db.select({ at: users.totpEnabledAt }).from(users).where(eq(users.id, actor.id));
   if (user.at) throw new AppError("conflict", "A second factor is already set up. Turn it off first to change phones.");
   const secret = newTotpSecret();
-  await db.update(users).set({ totpSecret: sealSecret(secret), totpLastStep: null }).where(eq(users.id, actor.id));
+  await db
+    .update(users)
+    .set({ totpSecret: sealSecret(secret), totpLastStep: null })
+    .where(eq(users.id, actor.id));
   return { secret, ...(await enrolmentCode(secret, actor.email)) };
 }
 
@@ -378,7 +391,10 @@ export async function disableSecondFactor(actor: Actor | null, input: unknown): 
   const data = parseOrThrow(confirmPasswordSchema.extend({ code: totpCodeSchema.shape.code.optional() }), input);
   const account = await getAccount(actor);
   if (account.secondFactorRequired)
-    throw new AppError("conflict", "Your organisation requires a second factor for your role: it cannot be turned off.");
+    throw new AppError(
+      "conflict",
+      "Your organisation requires a second factor for your role: it cannot be turned off.",
+    );
   await confirmIdentity(actor, { password: data.password, code: data.code }, originOf(actor));
   const db = await getDb();
   await db.transaction(async (tx) => {
@@ -419,4 +435,3 @@ export async function renewRecoveryCodes(actor: Actor | null, input: unknown): P
   });
   return { recoveryCodes: codes };
 }
-

@@ -68,7 +68,7 @@ export async function createApiToken(actor: Actor | null, input: unknown): Promi
 export async function listApiTokens(actor: Actor | null) {
   authorize(actor, "api-tokens:manage");
   const db = await getDb();
-  return db
+  const rows = await db
     .select({
       id: apiTokens.id,
       name: apiTokens.name,
@@ -84,6 +84,15 @@ export async function listApiTokens(actor: Actor | null) {
     .innerJoin(users, eq(users.id, apiTokens.createdBy))
     .where(eq(apiTokens.organisationId, actor.organisationId))
     .orderBy(desc(apiTokens.createdAt));
+  const now = Date.now();
+  return rows.map((r) => ({
+    ...r,
+    state: r.revokedAt
+      ? ("revoked" as const)
+      : r.expiresAt.getTime() <= now
+        ? ("expired" as const)
+        : ("active" as const),
+  }));
 }
 
 export async function revokeApiToken(actor: Actor | null, input: unknown): Promise<void> {
@@ -150,7 +159,10 @@ export async function actorForToken(
       `This token made more than ${TOKEN_REQUESTS_PER_MINUTE} requests this minute. Wait ${wait} s.`,
     );
   if (!row.token.lastUsedAt || now - row.token.lastUsedAt.getTime() > LAST_USED_EVERY_MS)
-    await db.update(apiTokens).set({ lastUsedAt: new Date(now) }).where(eq(apiTokens.id, row.token.id));
+    await db
+      .update(apiTokens)
+      .set({ lastUsedAt: new Date(now) })
+      .where(eq(apiTokens.id, row.token.id));
   const creator = PERMISSIONS[row.user.role];
   return {
     id: row.user.id,

@@ -57,8 +57,8 @@ export function SettingsForm({ settings }: { settings: OrganisationSettings }) {
       <fieldset>
         <legend className="font-bold">Second factor required for</legend>
         <p className="text-sm text-muted">
-          People in these roles must set up an authenticator app; until they do, they can only reach their account
-          page. Approvers, who countersign, and administrators are the usual choice.
+          People in these roles must set up an authenticator app; until they do, they can only reach their account page.
+          Approvers, who countersign, and administrators are the usual choice.
         </p>
         <div className="mt-2 flex flex-wrap gap-4">
           {ROLES.map((role) => (

@@ -255,7 +255,10 @@ function ReviewStep({
     const ahead = new Date();
     ahead.setUTCMonth(ahead.getUTCMonth() + reviewPeriodMonths);
     const suggested = ahead.toISOString().slice(0, 10);
-    return { ...range, suggested: suggested > range.latest ? range.latest : suggested < range.earliest ? range.earliest : suggested };
+    return {
+      ...range,
+      suggested: suggested > range.latest ? range.latest : suggested < range.earliest ? range.earliest : suggested,
+    };
   });
   const { register, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
     resolver: zodResolver(submitFormSchema),

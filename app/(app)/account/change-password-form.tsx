@@ -1,0 +1,53 @@
+"use client";
+
+import { FormMessage, PrimaryButton, TextField } from "@/app/_components/form";
+import { useActionForm } from "@/app/_components/use-action-form";
+import { changePasswordSchema, type ChangePasswordInput } from "@/lib/account/schemas";
+import { PASSWORD_MIN } from "@/lib/auth/schemas";
+import { changePasswordAction } from "./actions";
+
+export function ChangePasswordForm() {
+  const { register, onSubmit, formState, outcome, reset } = useActionForm<ChangePasswordInput>(
+    changePasswordSchema,
+    changePasswordAction,
+    { onSuccess: () => reset({ current: "", password: "", confirm: "" }) },
+  );
+  return (
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="space-y-3 rounded-lg border border-rule bg-white p-4"
+      aria-labelledby="password-heading"
+    >
+      <h2 id="password-heading" className="text-lg font-bold">
+        Change password
+      </h2>
+      {outcome && <FormMessage tone={outcome.tone}>{outcome.text}</FormMessage>}
+      <TextField
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={formState.errors.current?.message}
+        {...register("current")}
+      />
+      <TextField
+        label="New password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.password?.message}
+        {...register("password")}
+      />
+      <TextField
+        label="Repeat the new password"
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.confirm?.message}
+        {...register("confirm")}
+      />
+      <PrimaryButton type="submit" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Changing…" : "Change password"}
+      </PrimaryButton>
+    </form>
+  );
+}
