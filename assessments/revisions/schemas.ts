@@ -1,6 +1,6 @@
 /** Inputs of the revision workflow: one schema each, shared by forms and the server. */
 import { z } from "zod";
-import { contentSchema } from "../method-statement/content";
+import { contentSchema, taskSchema } from "../method-statement/content";
 
 export const createAssessmentSchema = z.object({
   jobId: z.uuid("Choose a job"),
@@ -52,3 +52,8 @@ export type SubmitFormInput = z.infer<typeof submitFormSchema>;
 
 /** The wizard's sections, by key: return comments and the review list name them. */
 export const STEP_KEYS = ["scope", "sequence", "loads", "hazards", "people", "emergency"] as const;
+
+/** Adding or replacing one task of a draft, at the version the client last saw. */
+export const taskBodySchema = z.object({ version: z.number().int().min(1), task: taskSchema });
+/** Removing a task: only the version. */
+export const versionBodySchema = z.object({ version: z.number().int().min(1) });

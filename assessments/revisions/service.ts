@@ -13,10 +13,10 @@ import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
 import { authorize, type Actor } from "@/lib/permissions";
-import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
+import { contentSchema, emptyContent, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
-import { createAssessmentSchema, saveRevisionSchema } from "./schemas";
+import { createAssessmentSchema, saveRevisionSchema, taskBodySchema, versionBodySchema } from "./schemas";
 
 export function contentHash(content: unknown): string {
   return createHash("sha256").update(JSON.stringify(content)).digest("hex");
@@ -207,9 +207,6 @@ async function changeTasks(
   const content = { ...current.content, tasks: change(current.content.tasks) };
   return saveRevision(actor, revisionId, { version, content });
 }
-
-const taskBodySchema = z.object({ version: z.number().int().min(1), task: taskSchema });
-const versionBodySchema = z.object({ version: z.number().int().min(1) });
 
 export async function listTasks(actor: Actor | null, revisionId: string) {
   const { content, register: entries, revision } = await getRevision(actor, revisionId);

@@ -47,9 +47,15 @@ export const totpCodeSchema = z.object({
 /** Turning the second factor off, or making new recovery codes: the password again. */
 export const confirmPasswordSchema = z.object({ password: z.string().min(1, "Enter your password").max(200) });
 
+/** The password and a code from the app (or a recovery code): for changes to the second factor itself. */
+export const confirmWithCodeSchema = confirmPasswordSchema.extend({
+  code: z.string().trim().min(1, "Enter a code from your app, or a recovery code").max(20),
+});
+
 export type ProfileInput = z.infer<typeof profileSchema>;
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 export type ForgotPasswordInput = z.infer<typeof forgotPasswordSchema>;
 export type SignUpInput = z.infer<typeof signUpSchema>;
 export type TotpCodeInput = z.input<typeof totpCodeSchema>;
 export type ConfirmPasswordInput = z.infer<typeof confirmPasswordSchema>;
+export type ConfirmWithCodeInput = z.infer<typeof confirmWithCodeSchema>;

@@ -30,7 +30,7 @@ import { createOrganisation } from "@/lib/organisations/service";
 import { inspectLink, issueLink, LINK_PROBLEMS, LINK_TTL_MS, spendLink, type LinkPurpose } from "./links";
 import {
   changePasswordSchema,
-  confirmPasswordSchema,
+  confirmWithCodeSchema,
   forgotPasswordSchema,
   profileSchema,
   resetPasswordSchema,
@@ -388,7 +388,7 @@ export async function confirmSecondFactor(actor: Actor | null, input: unknown): 
 /** Turns the second factor off (password and a code again); refused where the organisation requires one. */
 export async function disableSecondFactor(actor: Actor | null, input: unknown): Promise<void> {
   authorize(actor, "profile:read");
-  const data = parseOrThrow(confirmPasswordSchema.extend({ code: totpCodeSchema.shape.code.optional() }), input);
+  const data = parseOrThrow(confirmWithCodeSchema, input);
   const account = await getAccount(actor);
   if (account.secondFactorRequired)
     throw new AppError(
@@ -418,7 +418,7 @@ export async function disableSecondFactor(actor: Actor | null, input: unknown): 
 /** Ten new recovery codes (the old ones stop working), after the password and a code again. */
 export async function renewRecoveryCodes(actor: Actor | null, input: unknown): Promise<{ recoveryCodes: string[] }> {
   authorize(actor, "profile:read");
-  const data = parseOrThrow(confirmPasswordSchema.extend({ code: totpCodeSchema.shape.code.optional() }), input);
+  const data = parseOrThrow(confirmWithCodeSchema, input);
   if (!(await getAccount(actor)).secondFactor) throw new AppError("conflict", "Set up a second factor first.");
   await confirmIdentity(actor, { password: data.password, code: data.code }, originOf(actor));
   const db = await getDb();

@@ -4,16 +4,10 @@ import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { FormMessage, PrimaryButton, SecondaryButton, TextField } from "@/app/_components/form";
 import { useActionForm } from "@/app/_components/use-action-form";
-import { confirmPasswordSchema } from "@/lib/account/schemas";
+import { confirmWithCodeSchema, type ConfirmWithCodeInput } from "@/lib/account/schemas";
 import { disableSecondFactorAction, renewRecoveryCodesAction } from "../actions";
 import { RecoveryCodes } from "./recovery-codes";
-import { z } from "zod";
 import type { ActionResult } from "@/lib/actions";
-
-const confirmSchema = confirmPasswordSchema.extend({
-  code: z.string().trim().min(1, "Enter a code from your app").max(20),
-});
-type ConfirmInput = z.infer<typeof confirmSchema>;
 
 export function ManageSecondFactor({
   since,
@@ -28,8 +22,11 @@ export function ManageSecondFactor({
   const [codes, setCodes] = useState<string[] | null>(null);
   // Which button submitted: read when the form submits, in the same event (a ref, not state).
   const intent = useRef<"renew" | "disable">("renew");
-  const { register, onSubmit, formState, outcome, reset } = useActionForm<ConfirmInput, { recoveryCodes: string[] }>(
-    confirmSchema,
+  const { register, onSubmit, formState, outcome, reset } = useActionForm<
+    ConfirmWithCodeInput,
+    { recoveryCodes: string[] }
+  >(
+    confirmWithCodeSchema,
     async (values) =>
       intent.current === "renew"
         ? renewRecoveryCodesAction(values)
