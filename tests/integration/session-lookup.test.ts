@@ -18,6 +18,7 @@ vi.mock("next/headers", () => ({
     get: (name: string) => (jar.cookies.has(name) ? { name, value: jar.cookies.get(name)! } : undefined),
     getAll: () => [...jar.cookies].map(([name, value]) => ({ name, value })),
   }),
+  headers: async () => new Headers({ "x-forwarded-for": "10.30.0.4", "user-agent": "Test client" }),
 }));
 vi.mock("next/server", async (original) => ({ ...(await original<object>()), connection: async () => undefined }));
 const { getActor, readSessionClaims, sessionCookieName } = await import("@/lib/auth/session");
@@ -73,6 +74,13 @@ describe("reading the session cookie", () => {
       [`${cookieName()}.0`, token.slice(0, half)],
     ]);
     expect((await getActor())?.id).toBe(adviser.id);
+    // How the session was opened, and where this request comes from, for the audit trail.
+    expect((await getActor())?.auth).toEqual({
+      via: "session",
+      method: "password",
+      address: "10.30.0.4",
+      client: "Test client",
+    });
   });
 });
 

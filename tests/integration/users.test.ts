@@ -91,7 +91,7 @@ describe("inviting someone", () => {
       { email: "new.person@brackenfold.example", password: "a-new-long-password" },
       null,
     );
-    expect(actor).toMatchObject({ role: "foreman", organisationId });
+    expect(actor.actor).toMatchObject({ role: "foreman", organisationId });
 
     // The link is spent.
     expect((await inspectInvite(token)).state).toBe("used");
