@@ -138,7 +138,8 @@ test("the administrator turns on a second factor; signing in then needs a code",
   await page.getByRole("button", { name: /I have saved them/ }).click();
 
   await page.getByRole("link", { name: "Sign out" }).click();
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
+  await expect(page.getByRole("button", { name: "Sign in" })).toBeVisible();
   await signInWithCode(page, "000000");
   await expect(page.locator("form").getByRole("alert")).toContainText("That code was not recognised");
   // The code just used for enrolment cannot be replayed; a recovery code stands in for the phone.

@@ -40,9 +40,8 @@ export async function startSecondFactorAction() {
 
 export async function confirmSecondFactorAction(values: unknown) {
   return runAction(async () => {
-    const result = await confirmSecondFactor(await getActor(), values);
-    revalidatePath("/account/security");
-    return { data: result };
+    // No revalidation here: the page must keep showing the recovery codes until they are saved.
+    return { data: await confirmSecondFactor(await getActor(), values) };
   });
 }
 
