@@ -19,6 +19,7 @@ export function ApiReference() {
         forceDarkModeState: "light",
         hideModels: false,
         metaData: { title: "Heftwise API reference" },
+        agent: { disabled: true },
       }}
     />
   );

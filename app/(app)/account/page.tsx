@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { describeAuth } from "@/assessments/revisions/signing-record";
 import { getAccount } from "@/lib/account/service";
+import { cookies } from "next/headers";
 import { requirePermission } from "@/lib/auth/guard";
+import { readSessionClaims } from "@/lib/auth/session";
 import { ROLE_LABELS } from "@/lib/users/schemas";
 import { ChangePasswordForm } from "./change-password-form";
 import { ProfileForm } from "./profile-form";
@@ -12,6 +14,7 @@ export const metadata: Metadata = { title: "Your account" };
 export default async function AccountPage() {
   const actor = await requirePermission("profile:read");
   const account = await getAccount(actor);
+  const current = (await readSessionClaims(await cookies()))?.sessionId;
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-bold">Your account</h1>
@@ -34,6 +37,7 @@ export default async function AccountPage() {
             <li key={s.id} className="py-2">
               Since {s.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC —{" "}
               {describeAuth({ via: "session", method: s.method, address: s.address, client: s.client })}
+              {s.id === current && <strong> — this session</strong>}
             </li>
           ))}
         </ul>
