@@ -20,6 +20,7 @@ export function ApiReference() {
         hideModels: false,
         metaData: { title: "Heftwise API reference" },
         agent: { disabled: true },
+        showDeveloperTools: "never",
       }}
     />
   );

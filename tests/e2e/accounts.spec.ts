@@ -80,6 +80,11 @@ test("the administrator invites an approver, sets the organisation up, and check
 
   await page.getByRole("navigation", { name: "Organisation" }).getByRole("link", { name: "Audit trail" }).click();
   await expect(page.getByTestId("chain-intact")).toContainText("Intact");
+
+  // The API reference, drawn from the description of every route.
+  await page.getByRole("navigation", { name: "Organisation" }).getByRole("link", { name: "API reference" }).click();
+  await expect(page.getByRole("heading", { name: "Heftwise API", level: 1 })).toBeVisible();
+  await expect(page.getByText("Countersign: the approver's drawn signature").first()).toBeVisible();
 });
 
 test("an API token lists assessments with a bearer header, and stops working once revoked", async ({
@@ -96,6 +101,8 @@ test("an API token lists assessments with a bearer header, and stops working onc
   const token = (await page.getByTestId("new-token").textContent())!.trim();
   expect(token).toMatch(/^hw_/);
 
+  const me = await request.get("/api/v1/me", { headers: { authorization: `Bearer ${token}` } });
+  expect(await me.json()).toMatchObject({ email: ADMIN, role: "adviser", via: "token" });
   const listed = await request.get("/api/v1/assessments", { headers: { authorization: `Bearer ${token}` } });
   expect(listed.status()).toBe(200);
   expect(await listed.json()).toMatchObject({ items: [], total: 0 });
