@@ -207,4 +207,37 @@ describe("the pack PDF", () => {
     expect(all).toContain("Nearest hospital (A&E): Carrowby General");
     expect(all).toContain("Caution:");
   });
+
+  it("prints the organisation's logo on the cover, and a signing record from the trail", async () => {
+    const logo = encodePng(160, 40, new Uint8Array(160 * 40 * 4).fill(200));
+    const signingRecord = [
+      {
+        seq: 41,
+        hash: "ab12cd34ef56".padEnd(64, "0"),
+        event: "Approved and countersigned",
+        who: "Ruth Okonjo-Vale",
+        at: new Date("2027-01-11T14:05:00Z"),
+        contentHash: "9f8e7d6c5b4a".padEnd(64, "1"),
+        how: "re-confirmed at signing: password + authenticator; from 10.20.0.9",
+      },
+    ];
+    const withLogo = write(
+      "logo.pdf",
+      await savePack(await buildPack(packInput(1, { logo: { data: logo, type: "image/png" }, signingRecord }), fonts)),
+    );
+    const without = write("no-logo.pdf", await savePack(await buildPack(packInput(1), fonts)));
+    const cover = (file: string) =>
+      execFileSync("pdfimages", ["-list", "-f", "1", "-l", "1", file], { encoding: "utf8" })
+        .split("\n")
+        .slice(2)
+        .filter(Boolean)
+        .map((line) => line.trim().split(/\s+/).slice(3, 5).join("x"));
+    expect(cover(withLogo)).toContain("160x40");
+    expect(cover(without)).not.toContain("160x40");
+    const all = flat(text(withLogo));
+    expect(all).toContain("Signing record");
+    expect(all).toContain("ab12cd34ef56");
+    expect(all).toMatch(/re-confirmed at signing: password \+ .*authenticator; from 10\.20\.0\.9/);
+    expect(flat(text(without))).not.toContain("Signing record");
+  });
 });
