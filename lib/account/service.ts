@@ -44,6 +44,26 @@ const hours = (purpose: LinkPurpose) => LINK_TTL_MS[purpose] / 3600_000;
 
 const originOf = (actor: Actor) => ({ address: actor.auth?.address ?? null, client: actor.auth?.client ?? null });
 
+/** One e-mail of each kind a minute per account at most: repeated clicks do not flood an inbox. */
+const RESEND_AFTER_MS = 60_000;
+
+async function recentLink(userId: string, purpose: LinkPurpose): Promise<boolean> {
+  const db = await getDb();
+  const [recent] = await db
+    .select({ id: accountLinks.id })
+    .from(accountLinks)
+    .where(
+      and(
+        eq(accountLinks.userId, userId),
+        eq(accountLinks.purpose, purpose),
+        isNull(accountLinks.usedAt),
+        gt(accountLinks.createdAt, new Date(Date.now() - RESEND_AFTER_MS)),
+      ),
+    )
+    .limit(1);
+  return !!recent;
+}
+
 // ---- Sign-up -----------------------------------------------------------------------------------
 
 /**
@@ -58,6 +78,9 @@ export async function signUp(input: unknown): Promise<{ deliver: Deliver }> {
   const existing = await db.query.users.findFirst({ where: eq(users.email, data.email) });
   if (existing?.emailVerifiedAt || (existing && existing.passwordHash === null))
     return { deliver: () => sendAlreadyRegistered(data.email) };
+  // Signing up again with an unconfirmed address sends a new link, at most one a minute: repeated
+  // sign-ups cannot flood someone's inbox.
+  if (existing && (await recentLink(existing.id, "verify-email"))) return { deliver: nothing };
   const token = await db.transaction(async (tx) => {
     if (existing) {
       const [{ n }] = await tx
@@ -147,29 +170,13 @@ export async function confirmEmail(token: string): Promise<void> {
 
 // ---- Password reset ----------------------------------------------------------------------------
 
-/** One reset e-mail a minute per account at most: repeated clicks do not flood an inbox. */
-const RESET_RESEND_MS = 60_000;
-
 /** Always the same answer; an e-mail goes only to an active account that has a password. */
 export async function requestPasswordReset(input: unknown): Promise<{ deliver: Deliver }> {
   const { email } = parseOrThrow(forgotPasswordSchema, input);
   const db = await getDb();
   const user = await db.query.users.findFirst({ where: eq(users.email, email) });
   if (!user || !user.active || !user.passwordHash) return { deliver: nothing };
-  const [recent] = await db
-    .select({ id: accountLinks.id })
-    .from(accountLinks)
-    .where(
-      and(
-        eq(accountLinks.userId, user.id),
-        eq(accountLinks.purpose, "reset-password"),
-        isNull(accountLinks.usedAt),
-        gt(accountLinks.createdAt, new Date(Date.now() - RESET_RESEND_MS)),
-      ),
-    )
-    .orderBy(desc(accountLinks.createdAt))
-    .limit(1);
-  if (recent) return { deliver: nothing };
+  if (await recentLink(user.id, "reset-password")) return { deliver: nothing };
   const token = await db.transaction((tx) => issueLink(tx, user.id, "reset-password"));
   return {
     deliver: () =>

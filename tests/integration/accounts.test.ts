@@ -73,6 +73,9 @@ describe("signing up a new organisation", () => {
     const mail = lastMailTo("wren@culverdale.example")!;
     expect(mail.subject).toBe("Confirm your address to start with Heftwise");
     const token = linkToken(mail.text, "/sign-up/confirm");
+    // Signing up again at once sends nothing more (and changes nothing): no flooding an inbox.
+    await (await signUp(signUpInput("wren@culverdale.example"))).deliver();
+    expect(fake.messages.filter((m) => m.to.includes("wren@culverdale.example"))).toHaveLength(1);
 
     await expect(
       checkCredentials({ email: "wren@culverdale.example", password: "a-long-enough-password" }, "10.9.0.1"),
