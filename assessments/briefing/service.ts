@@ -4,6 +4,7 @@
  * the briefing sheet.
  */
 import "server-only";
+import { createHash } from "node:crypto";
 import { and, eq, inArray, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import {
@@ -152,8 +153,7 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
       .where(and(eq(briefings.id, briefingId), isNull(briefings.completedAt)))
       .returning({ id: briefings.id });
     if (!claimed) throw new AppError("conflict", "This briefing is already signed off.");
-    const pdf = await renderPack(tx, briefing.revisionId, key);
-    await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
+    // Recorded before the pack is drawn, so the re-issued pack's signing record ends with it.
     await recordAudit(tx, {
       organisationId: actor.organisationId,
       actorId: actor.id,
@@ -162,6 +162,21 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
       entityId: briefing.revisionId,
       details: { briefingId, attendees: attendees.length },
       auth: actor.auth,
+    });
+    const pdf = await renderPack(tx, briefing.revisionId, key);
+    await storePack(tx, actor.organisationId, briefing.revisionId, pdf, "approved");
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.pack-issued",
+      entityType: "revision",
+      entityId: briefing.revisionId,
+      details: {
+        kind: "approved",
+        reason: "briefing",
+        briefingId,
+        packSha256: createHash("sha256").update(pdf).digest("hex"),
+      },
     });
   });
 }

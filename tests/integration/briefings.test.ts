@@ -135,6 +135,8 @@ describe("a briefing", () => {
       writeFileSync(file, pack.data);
       const text = execFileSync("pdftotext", [file, "-"], { encoding: "utf8" });
       expect(text).toContain("Briefing record");
+      // The signing record ends with the briefing, recorded before the pack was re-issued.
+      expect(text).toContain("Briefed and signed off");
       expect(text).toContain("Aled Menhenick (Brackenfold Lineside), card PTS 77120");
     }
   });
