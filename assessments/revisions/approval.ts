@@ -6,7 +6,7 @@
  */
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, asc, desc, eq, ne } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, ne } from "drizzle-orm";
 import { z } from "zod";
 import { getDb, type Tx } from "@/db/client";
 import {
@@ -530,7 +530,7 @@ export async function verifyPack(data: Uint8Array): Promise<Verification> {
   return { result: "unknown" };
 }
 
-/** Every audit event of an assessment's revisions, oldest first. */
+/** Every audit event of an assessment's revisions, in the order of the organisation's chain. */
 export async function listAssessmentAudit(actor: Actor | null, assessmentId: string) {
   authorize(actor, "assessments:read");
   const db = await getDb();
@@ -546,6 +546,8 @@ export async function listAssessmentAudit(actor: Actor | null, assessmentId: str
   const events = await db
     .select({
       id: auditEvents.id,
+      seq: auditEvents.seq,
+      hash: auditEvents.hash,
       action: auditEvents.action,
       entityId: auditEvents.entityId,
       contentHash: auditEvents.contentHash,
@@ -555,12 +557,16 @@ export async function listAssessmentAudit(actor: Actor | null, assessmentId: str
     })
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorId))
-    .where(and(eq(auditEvents.organisationId, actor.organisationId), eq(auditEvents.entityType, "revision")))
-    .orderBy(asc(auditEvents.createdAt));
-  return {
-    assessment,
-    events: events
-      .filter((e) => e.entityId && numberOf.has(e.entityId))
-      .map((e) => ({ ...e, revision: numberOf.get(e.entityId!)! })),
-  };
+    .where(
+      and(
+        eq(auditEvents.organisationId, actor.organisationId),
+        eq(auditEvents.entityType, "revision"),
+        inArray(
+          auditEvents.entityId,
+          revs.map((r) => r.id),
+        ),
+      ),
+    )
+    .orderBy(asc(auditEvents.seq));
+  return { assessment, events: events.map((e) => ({ ...e, revision: numberOf.get(e.entityId!)! })) };
 }

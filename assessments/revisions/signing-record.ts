@@ -8,7 +8,8 @@ import type { Queryable } from "@/db/client";
 import { auditEvents, users } from "@/db/schema";
 import type { AuthRecord } from "@/lib/audit";
 
-const LIFE_EVENTS: Record<string, string> = {
+/** What each event of a revision's life is called, in the pack and on the audit page alike. */
+export const LIFE_EVENTS: Record<string, string> = {
   "assessment.created": "Drafted (new assessment)",
   "revision.started": "Drafted (new revision)",
   "revision.submitted": "Submitted for approval",

@@ -16,6 +16,7 @@ import {
   approveRevision,
   getPackFile,
   getReview,
+  listAssessmentAudit,
   startNewRevision,
   submitRevision,
 } from "@/assessments/revisions/approval";
@@ -147,6 +148,13 @@ describe("step-up at countersignature", () => {
     expect(text).toContain("Approved and");
     expect(text).toMatch(/re-confirmed at signing: password;/);
     expect(text).toContain("10.20.0.9");
+
+    // The assessment's audit page lists the same events, in chain order, with the same numbers.
+    const assessmentId = (await getRevision(adviser, r.id)).revision.assessmentId;
+    const trail = await listAssessmentAudit(adviser, assessmentId);
+    const seqs = trail.events.map((e) => e.seq);
+    expect(seqs).toEqual([...seqs].sort((a, b) => a - b));
+    for (const e of events) expect(trail.events.find((t) => t.id === e.id)).toMatchObject({ seq: e.seq, hash: e.hash });
   });
 
   it("an approver with a second factor must give a code too", async () => {
