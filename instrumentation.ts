@@ -7,4 +7,13 @@ export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   const { startServer } = await import("./lib/server-start");
   await startServer();
+  // The reminder job inside the server, for installs without a scheduler (the demo): the server
+  // owns the embedded database, so `npm run reminders` could not open it while it runs.
+  if (process.env.HEFTWISE_REMINDERS === "in-process") {
+    const { runReminders } = await import("./assessments/reminders/service");
+    const run = () =>
+      runReminders().catch((err: unknown) => console.error("The reminder job failed:", (err as Error).message));
+    setTimeout(run, 15_000).unref();
+    setInterval(run, 60 * 60_000).unref();
+  }
 }

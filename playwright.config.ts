@@ -33,7 +33,7 @@ export default defineConfig({
   },
   projects: [{ name: "chromium", use: { ...devices["Desktop Chrome"], channel: undefined } }],
   webServer: {
-    command: `npx tsx --conditions=react-server assessments/cli/demo.ts --port ${PORT} --smtp-port 2626 --inbox-port 1181 --data-dir .e2e-data --fresh`,
+    command: `npx tsx --conditions=react-server assessments/cli/demo.ts --port ${PORT} --smtp-port 2626 --inbox-port 1181 --data-dir .e2e-data --fresh --no-reminders`,
     url: `http://localhost:${PORT}/sign-in`,
     timeout: 240_000,
     reuseExistingServer: false,

@@ -49,6 +49,10 @@ export const organisations = pgTable("organisations", {
   logoType: text("logo_type"),
   /** What the submit step suggests as the review date, in months from submission. */
   reviewPeriodMonths: integer("review_period_months").notNull().default(6),
+  /** Days before a review date when its author and the administrators are reminded (Heftwise policy default). */
+  reviewReminderDays: integer("review_reminder_days").array().notNull().default(sql`'{30,7}'::integer[]`),
+  /** Days a review request may wait before its approver is reminded. */
+  approvalReminderDays: integer("approval_reminder_days").notNull().default(3),
   /** The roles that must use a second factor (an authenticator app) to sign in. */
   secondFactorRoles: roleEnum("second_factor_roles")
     .array()
@@ -554,4 +558,26 @@ export const siteChangeNotes = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("site_change_notes_revision_idx").on(t.revisionId)],
+);
+
+/**
+ * Reminders sent, one row per revision, kind and person: the reminder job inserts before it sends,
+ * and only a row it inserted is sent, so running the job twice (or twice at once) sends nothing twice.
+ */
+export const remindersSent = pgTable(
+  "reminders_sent",
+  {
+    id: id(),
+    organisationId: organisationId(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
+    /** "review-due-30", "review-due-7", "review-overdue", "approval-waiting". */
+    kind: text("kind").notNull(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("reminders_sent_once_idx").on(t.revisionId, t.kind, t.userId)],
 );

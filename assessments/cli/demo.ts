@@ -3,7 +3,8 @@
  * embedded database, starts the local mail fake, then serves the app on http://localhost:3000.
  *
  * Options (also used by the browser tests): --port N, --smtp-port N, --inbox-port N,
- * --data-dir DIR, --fresh (delete DIR first), --no-build-check.
+ * --data-dir DIR, --fresh (delete DIR first), --no-build-check, --no-reminders (the hourly reminder job
+ * otherwise runs inside the server).
  */
 import { spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -21,6 +22,8 @@ const { values: args } = parseArgs({
     "data-dir": { type: "string", default: process.env.HEFTWISE_DATA_DIR || "./data" },
     fresh: { type: "boolean", default: false },
     "no-build-check": { type: "boolean", default: false },
+    // The browser tests read the inbox and must not find reminders in it they did not cause.
+    "no-reminders": { type: "boolean", default: false },
   },
 });
 
@@ -50,6 +53,8 @@ async function main() {
     SMTP_URL: `smtp://127.0.0.1:${args["smtp-port"]}`,
     NEXTAUTH_URL: origin,
     NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET || demoSecret(),
+    // Reminders are sent by the server itself, hourly (the demo has no system scheduler).
+    ...(args["no-reminders"] ? {} : { HEFTWISE_REMINDERS: "in-process" }),
   };
   // The seed below runs in this process: it must see the server's configuration (the signing key's
   // passphrase is derived from NEXTAUTH_SECRET).

@@ -58,6 +58,9 @@ export interface OrganisationSettings {
   name: string;
   reviewPeriodMonths: number;
   secondFactorRoles: Role[];
+  /** A key of REVIEW_REMINDER_PRESETS, e.g. "30,7". */
+  reviewReminders: string;
+  approvalReminderDays: number;
   hasLogo: boolean;
 }
 
@@ -69,11 +72,20 @@ export async function getOrganisationSettings(actor: Actor | null): Promise<Orga
       name: organisations.name,
       reviewPeriodMonths: organisations.reviewPeriodMonths,
       secondFactorRoles: organisations.secondFactorRoles,
+      reviewReminderDays: organisations.reviewReminderDays,
+      approvalReminderDays: organisations.approvalReminderDays,
       logoType: organisations.logoType,
     })
     .from(organisations)
     .where(eq(organisations.id, actor.organisationId));
-  return { ...org, hasLogo: !!org.logoType };
+  return {
+    name: org.name,
+    reviewPeriodMonths: org.reviewPeriodMonths,
+    secondFactorRoles: org.secondFactorRoles,
+    reviewReminders: org.reviewReminderDays.join(","),
+    approvalReminderDays: org.approvalReminderDays,
+    hasLogo: !!org.logoType,
+  };
 }
 
 export async function updateOrganisationSettings(actor: Actor | null, input: unknown): Promise<void> {
@@ -82,9 +94,15 @@ export async function updateOrganisationSettings(actor: Actor | null, input: unk
   const before = await getOrganisationSettings(actor);
   const db = await getDb();
   await db.transaction(async (tx) => {
+    const { reviewReminders, ...rest } = data;
     await tx
       .update(organisations)
-      .set({ ...data, secondFactorRoles: [...new Set(data.secondFactorRoles)], updatedAt: new Date() })
+      .set({
+        ...rest,
+        secondFactorRoles: [...new Set(data.secondFactorRoles)],
+        reviewReminderDays: reviewReminders.split(",").map(Number),
+        updatedAt: new Date(),
+      })
       .where(eq(organisations.id, actor.organisationId));
     await recordAudit(tx, {
       organisationId: actor.organisationId,

@@ -268,14 +268,28 @@ describe("the second factor", () => {
       name: "Brackenfold Lineside Ltd",
       reviewPeriodMonths: 6,
       secondFactorRoles: ["adviser"],
+      reviewReminders: "30,7",
+      approvalReminderDays: 3,
     });
     const pending: Actor = { ...(await actorFor("adviser", organisationId)), mustEnrolSecondFactor: true };
     expect(can(pending, "assessments:read")).toBe(false);
     expect(can(pending, "profile:read")).toBe(true);
     expect(() => authorize(pending, "assessments:read")).toThrow(/requires a second factor/);
     const refused = await failure(
-      updateOrganisationSettings(admin, { name: "B", reviewPeriodMonths: 5, secondFactorRoles: ["pilot"] }),
+      updateOrganisationSettings(admin, {
+        name: "B",
+        reviewPeriodMonths: 5,
+        secondFactorRoles: ["pilot"],
+        reviewReminders: "every day",
+        approvalReminderDays: 0,
+      }),
     );
-    expect(refused.issues!.map((i) => i.path).sort()).toEqual(["name", "reviewPeriodMonths", "secondFactorRoles.0"]);
+    expect(refused.issues!.map((i) => i.path).sort()).toEqual([
+      "approvalReminderDays",
+      "name",
+      "reviewPeriodMonths",
+      "reviewReminders",
+      "secondFactorRoles.0",
+    ]);
   });
 });

@@ -7,6 +7,7 @@ import type { OrganisationSettings } from "@/lib/organisations/service";
 import {
   organisationSettingsSchema,
   REVIEW_PERIODS,
+  REVIEW_REMINDER_PRESETS,
   type OrganisationSettingsInput,
 } from "@/lib/organisations/schemas";
 import { ROLE_LABELS } from "@/lib/users/schemas";
@@ -21,6 +22,8 @@ export function SettingsForm({ settings }: { settings: OrganisationSettings }) {
         name: settings.name,
         reviewPeriodMonths: settings.reviewPeriodMonths,
         secondFactorRoles: settings.secondFactorRoles,
+        reviewReminders: settings.reviewReminders as OrganisationSettingsInput["reviewReminders"],
+        approvalReminderDays: settings.approvalReminderDays,
       },
     },
   );
@@ -53,6 +56,28 @@ export function SettingsForm({ settings }: { settings: OrganisationSettings }) {
             </option>
           ))}
         </SelectField>
+      </div>
+      <div className="grid gap-3 md:grid-cols-2">
+        <SelectField
+          label="Review reminders (to the author and administrators)"
+          error={formState.errors.reviewReminders?.message}
+          {...register("reviewReminders")}
+        >
+          {Object.entries(REVIEW_REMINDER_PRESETS).map(([value, label]) => (
+            <option key={value} value={value}>
+              {label}, and once overdue
+            </option>
+          ))}
+        </SelectField>
+        <TextField
+          label="Remind an approver after (days waiting)"
+          type="number"
+          inputMode="numeric"
+          min={1}
+          max={30}
+          error={formState.errors.approvalReminderDays?.message}
+          {...register("approvalReminderDays")}
+        />
       </div>
       <fieldset>
         <legend className="font-bold">Second factor required for</legend>
