@@ -32,6 +32,15 @@ export interface SigningRecordEntry {
   how: string;
 }
 
+/** Events Heftwise records as the consequence of another (the pack issued on approval, a revision superseded). */
+const FOLLOW_ON = new Set(["revision.pack-issued", "revision.superseded"]);
+
+/** How the person behind an event was authenticated, in words; a follow-on event says so (pure). */
+export function describeEventAuth(action: string, details: unknown): string {
+  const auth = (details as { auth?: AuthRecord } | null)?.auth;
+  return !auth && FOLLOW_ON.has(action) ? "follows from the event before" : describeAuth(auth);
+}
+
 /** How someone was authenticated, in words (pure). */
 export function describeAuth(auth: AuthRecord | undefined | null): string {
   if (!auth) return "not recorded";

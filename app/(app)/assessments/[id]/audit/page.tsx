@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
 import { DataTable } from "@/app/_components/table";
 import { listAssessmentAudit } from "@/assessments/revisions/approval";
-import { describeAuth, LIFE_EVENTS } from "@/assessments/revisions/signing-record";
-import type { AuthRecord } from "@/lib/audit";
+import { describeEventAuth, LIFE_EVENTS } from "@/assessments/revisions/signing-record";
 import { requirePermission } from "@/lib/auth/guard";
 import { foundOr404 } from "@/lib/pages";
 
@@ -31,7 +30,7 @@ export default async function AuditPage({ params }: { params: Promise<{ id: stri
             <td className="px-3 py-2">{e.revision}</td>
             <td className="px-3 py-2">{LIFE_EVENTS[e.action] ?? e.action}</td>
             <td className="px-3 py-2">{e.actorName ?? "—"}</td>
-            <td className="px-3 py-2 text-sm">{describeAuth((e.details as { auth?: AuthRecord } | null)?.auth)}</td>
+            <td className="px-3 py-2 text-sm">{describeEventAuth(e.action, e.details)}</td>
             <td className="px-3 py-2 font-mono text-xs break-all">
               {e.contentHash?.slice(0, 12) ?? "—"} / {e.hash?.slice(0, 12) ?? "—"}
             </td>
