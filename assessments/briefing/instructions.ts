@@ -2,6 +2,7 @@
  * Plain words for the gang: each load's handling instruction derived from the assessment and its
  * stored result, for the briefing screens and the briefing sheet. Pure.
  */
+import { ukDate } from "@/lib/dates";
 import {
   NEAR_LINE_LABELS,
   PROTECTION_LABELS,
@@ -132,7 +133,10 @@ export function lineBriefing(content: Content): LineBriefing | null {
     name: permitName(p),
     reference: p.reference,
     issuedBy: p.issuedBy,
-    valid: p.validFrom || p.validTo ? `${p.validFrom || "…"} to ${p.validTo || "…"}` : "",
+    valid:
+      p.validFrom || p.validTo
+        ? `${p.validFrom ? ukDate(p.validFrom) : "…"} to ${p.validTo ? ukDate(p.validTo) : "…"}`
+        : "",
   }));
   const digging: string[] = [];
   if (content.buriedServices.rule) digging.push(content.buriedServices.rule);

@@ -2,6 +2,7 @@
  * The lineside sections as label–value rows, and their caution: one wording for the read-only
  * revision, the approver's review and the pack.
  */
+import { ukDate } from "@/lib/dates";
 import { fmt } from "../rules/format";
 import { NEAR_LINE_LABELS, PERMIT_LABELS, PROTECTION_LABELS, SUPPORT_LABELS, type Content } from "./content";
 
@@ -38,7 +39,9 @@ export function permitRows(content: Content): string[][] {
     permitName(p),
     p.reference || "— none",
     p.issuedBy || "—",
-    p.validFrom || p.validTo ? `${p.validFrom || "…"} to ${p.validTo || "…"}` : "—",
+    p.validFrom || p.validTo
+      ? `${p.validFrom ? ukDate(p.validFrom) : "…"} to ${p.validTo ? ukDate(p.validTo) : "…"}`
+      : "—",
   ]);
 }
 
@@ -48,7 +51,7 @@ export function buriedServicesRows(content: Content): Rows {
     ["Service records", b.recordsObtained ? `obtained${b.recordsRef ? `, ${b.recordsRef}` : ""}` : "— not recorded"],
     [
       "Scan with a cable locating tool",
-      b.scanned ? `by ${b.scannedBy || "—"} on ${b.scanDate || "—"}` : "— not recorded",
+      b.scanned ? `by ${b.scannedBy || "—"} on ${b.scanDate ? ukDate(b.scanDate) : "—"}` : "— not recorded",
     ],
     ["Trial holes", b.trialHoles || "—"],
     ["Hand-dig within", b.handDigWithinM !== null ? `${fmt(b.handDigWithinM, 2)} m of a located service` : "—"],

@@ -9,6 +9,7 @@ import { LINE_CAUTION } from "../method-statement/lineside";
 import type { PackFonts } from "./fonts";
 import { embedPng } from "./images";
 import { COLOURS, Writer } from "./layout";
+import { ukDateTime } from "@/lib/dates";
 
 export interface BriefingSheetInput {
   title: string;
@@ -90,10 +91,9 @@ export async function buildBriefingSheet(input: BriefingSheetInput, fonts: PackF
   if (input.record) {
     w.newPage();
     w.heading("Briefing record");
-    w.text(
-      `Held at ${input.record.place}, ${input.record.startedAt.toISOString().slice(0, 16).replace("T", " ")} UTC, by ${input.record.foremanName}.`,
-      { size: 12 },
-    );
+    w.text(`Held at ${input.record.place}, ${ukDateTime(input.record.startedAt)}, by ${input.record.foremanName}.`, {
+      size: 12,
+    });
     for (const a of input.record.attendees) {
       const image = embedPng(doc, a.signature);
       const scale = Math.min(140 / image.width, 40 / image.height, 1);
@@ -105,7 +105,7 @@ export async function buildBriefingSheet(input: BriefingSheetInput, fonts: PackF
         font: fonts.bold,
         color: COLOURS.ink,
       });
-      w.page.drawText(`signed ${a.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC`, {
+      w.page.drawText(`signed ${ukDateTime(a.signedAt)}`, {
         x: 48,
         y: w.y - 28,
         size: 9,

@@ -36,6 +36,7 @@ import type { PackFonts } from "./fonts";
 import { embedPng } from "./images";
 import { COLOURS, MARGIN, Writer } from "./layout";
 import type { SigningRecordEntry } from "../revisions/signing-record";
+import { ukDate, ukDateTime } from "@/lib/dates";
 
 export const PACK_CAUTION =
   "Heftwise supports, and does not replace, the judgement of a competent person. Check every result on site, and follow local regulations, your organisation's procedures and licensed practice.";
@@ -85,7 +86,8 @@ export interface PackInput {
   verifyUrl: string;
 }
 
-const date = (d: Date | null | undefined) => (d ? d.toISOString().slice(0, 16).replace("T", " ") + " UTC" : "—");
+/** Dates in the pack as on site: day-month-year, 24-hour UK time. */
+const date = (d: Date | null | undefined) => ukDateTime(d);
 
 /** Builds the pack; the caller saves it (and signs it, for an approved revision). */
 export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDFDocument> {
@@ -164,7 +166,7 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
     ["Approver", revision.approverName ?? "—"],
     ["Submitted", date(revision.submittedAt)],
     ["Approved", date(revision.approvedAt)],
-    ["Review by", revision.reviewDate ?? "—"],
+    ["Review by", ukDate(revision.reviewDate)],
     ["Content hash (SHA-256)", revision.contentHash],
   ]);
   w.space(8);
@@ -346,9 +348,12 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
   w.heading("Scope", 3);
   w.text(content.scope.summary || "—");
   if (content.scope.startDate || content.scope.durationShifts)
-    w.text(`Planned start ${content.scope.startDate || "—"}; ${content.scope.durationShifts} shift(s).`, {
-      color: COLOURS.muted,
-    });
+    w.text(
+      `Planned start ${content.scope.startDate ? ukDate(content.scope.startDate) : "—"}; ${content.scope.durationShifts} shift(s).`,
+      {
+        color: COLOURS.muted,
+      },
+    );
   linesideSections(w, content);
   w.heading("Sequence of work", 3);
   content.sequence.forEach((s, i) => w.text(`${i + 1}. ${s.text}`, { indent: 4 }));
@@ -566,9 +571,13 @@ function liftSection(w: Writer, lift: LiftResult, exclusionZoneM?: number, groun
       `${fmt(lift.legTension)} kg per ${single ? "part" : "leg"} — ${lift.slingOk ? "passes" : "FAILS"}`,
     ],
     ["Category because", lift.categoryReasons.join("; ")],
-    ["Lift date", lift.inputs.liftDate ?? "—"],
+    ["Lift date", ukDate(lift.inputs.liftDate)],
     ...lift.examinations.map(
-      (e) => [`Examined: ${e.item}`, `${e.lastExamined}, due ${e.dueDate} (${e.status})`] as [string, string],
+      (e) =>
+        [`Examined: ${e.item}`, `${ukDate(e.lastExamined)}, due ${ukDate(e.dueDate)} (${e.status})`] as [
+          string,
+          string,
+        ],
     ),
     [
       "Wind",

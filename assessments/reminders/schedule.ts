@@ -4,12 +4,9 @@
  * did not run for a while sends one reminder, not a burst), and once the date has passed. Dates are
  * calendar days in the UK (Europe/London), where the work is.
  */
-export const REMINDER_ZONE = "Europe/London";
+import { ukDate, ukToday } from "@/lib/dates";
 
-/** Today's date in the UK as YYYY-MM-DD. */
-export function ukToday(now: Date): string {
-  return new Intl.DateTimeFormat("en-CA", { timeZone: REMINDER_ZONE }).format(now);
-}
+export { ukDate, ukToday };
 
 /** Whole days from `from` to `to`, both YYYY-MM-DD. */
 export function daysBetween(from: string, to: string): number {
@@ -27,9 +24,3 @@ export function reviewReminderKind(reviewDate: string, today: string, leadDays: 
 /** Whether a review request submitted at `submittedAt` has waited long enough to remind its approver. */
 export const approvalIsWaiting = (submittedAt: Date, now: Date, waitDays: number) =>
   now.getTime() - submittedAt.getTime() >= waitDays * 86_400_000;
-
-/** A date as the UK writes it: day-month-year. */
-export function ukDate(isoDate: string): string {
-  const [y, m, d] = isoDate.split("-");
-  return `${d}-${m}-${y}`;
-}

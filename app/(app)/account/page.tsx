@@ -8,6 +8,7 @@ import { readSessionClaims } from "@/lib/auth/session";
 import { ROLE_LABELS } from "@/lib/users/schemas";
 import { ChangePasswordForm } from "./change-password-form";
 import { ProfileForm } from "./profile-form";
+import { ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Your account" };
 
@@ -35,7 +36,7 @@ export default async function AccountPage() {
         <ul className="mt-2 divide-y divide-rule text-sm">
           {account.sessions.map((s) => (
             <li key={s.id} className="py-2">
-              Since {s.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC —{" "}
+              Since {ukDateTime(s.createdAt)} —{" "}
               {describeAuth({ via: "session", method: s.method, address: s.address, client: s.client })}
               {s.id === current && <strong> — this session</strong>}
             </li>

@@ -5,6 +5,7 @@ import Link from "next/link";
 import { BandChip } from "@/app/_components/results/band";
 import { ServerTable, type FilterSpec } from "@/app/_components/server-table";
 import type { Band } from "@/assessments/rules/types";
+import { ukDate, ukDateTime } from "@/lib/dates";
 
 interface Row {
   revisionId: string;
@@ -42,10 +43,10 @@ const columns: ColumnDef<Row, unknown>[] = [
       const { reviewDate, status } = row.original;
       if (!reviewDate) return "—";
       const due = status === "approved" && Date.parse(reviewDate) <= Date.now() + 30 * 86_400_000;
-      if (!due) return <span className="whitespace-nowrap">{reviewDate}</span>;
+      if (!due) return <span className="whitespace-nowrap">{ukDate(reviewDate)}</span>;
       return (
         <>
-          <span className="whitespace-nowrap">{reviewDate}</span>{" "}
+          <span className="whitespace-nowrap">{ukDate(reviewDate)}</span>{" "}
           <span className="inline-block whitespace-nowrap rounded bg-band-watch px-1.5 py-0.5 text-xs font-bold text-white">
             Review due
           </span>
@@ -53,7 +54,7 @@ const columns: ColumnDef<Row, unknown>[] = [
       );
     },
   },
-  { id: "updatedAt", header: "Last saved", cell: ({ row }) => row.original.updatedAt.slice(0, 16).replace("T", " ") },
+  { id: "updatedAt", header: "Last saved", cell: ({ row }) => ukDateTime(new Date(row.original.updatedAt)) },
 ];
 
 export function AssessmentsTable({

@@ -6,6 +6,7 @@ import { listForemanJobs } from "@/assessments/briefing/queries";
 import type { Band } from "@/assessments/rules/types";
 import { requirePermission } from "@/lib/auth/guard";
 import { EmailSheetButton } from "./email-sheet-button";
+import { ukDate, ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Briefings" };
 
@@ -37,7 +38,7 @@ export default async function BriefingsPage() {
                 <BandChip band={r.worstBand as Band | null} />
               </div>
               <p className="text-sm">
-                Revision {r.number} · review by {r.reviewDate ?? "—"}
+                Revision {r.number} · review by {ukDate(r.reviewDate)}
                 {r.needsReview && <strong className="ml-2 text-band-act">Site change reported — needs review</strong>}
               </p>
               {r.briefingsToday.length > 0 && (
@@ -49,7 +50,7 @@ export default async function BriefingsPage() {
                       href={`/briefings/record/${b.id}`}
                       className="mr-2 font-bold text-accent underline"
                     >
-                      {b.startedAt.toISOString().slice(11, 16)} at {b.place}
+                      {ukDateTime(b.startedAt)} at {b.place}
                       {b.completedAt ? "" : " (not signed off)"}
                     </Link>
                   ))}

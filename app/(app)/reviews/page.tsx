@@ -3,6 +3,7 @@ import Link from "next/link";
 import { DataTable, EmptyState } from "@/app/_components/table";
 import { listAwaitingReview } from "@/assessments/revisions/queries";
 import { requirePermission } from "@/lib/auth/guard";
+import { ukDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "For review" };
 
@@ -26,7 +27,7 @@ export default async function ReviewsPage() {
               </td>
               <td className="px-3 py-2">{r.jobName}</td>
               <td className="px-3 py-2">{r.number}</td>
-              <td className="px-3 py-2">{r.submittedAt?.toISOString().slice(0, 10) ?? "—"}</td>
+              <td className="px-3 py-2">{ukDate(r.submittedAt)}</td>
             </tr>
           ))}
         </DataTable>

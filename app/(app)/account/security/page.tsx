@@ -5,6 +5,7 @@ import { requirePermission } from "@/lib/auth/guard";
 import { FormMessage } from "@/app/_components/form";
 import { EnrolSecondFactor } from "./enrol-second-factor";
 import { ManageSecondFactor } from "./manage-second-factor";
+import { ukDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Second factor" };
 
@@ -31,7 +32,7 @@ export default async function SecurityPage() {
       </p>
       {account.secondFactor ? (
         <ManageSecondFactor
-          since={account.secondFactor.toISOString().slice(0, 10)}
+          since={ukDate(account.secondFactor)}
           recoveryCodesLeft={account.recoveryCodesLeft}
           required={account.secondFactorRequired}
         />

@@ -2,10 +2,11 @@ import type { Metadata } from "next";
 import { DataTable, EmptyState } from "@/app/_components/table";
 import { requirePermission } from "@/lib/auth/guard";
 import { listOutboundEmails } from "@/lib/mail/log";
+import { ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Sent e-mail" };
 
-const when = (d: Date | null) => (d ? d.toISOString().replace("T", " ").slice(0, 16) + " UTC" : "—");
+const when = (d: Date | null) => ukDateTime(d);
 
 export default async function MailLogPage() {
   const actor = await requirePermission("mail-log:read");

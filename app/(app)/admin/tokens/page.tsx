@@ -5,10 +5,11 @@ import { ROLE_LABELS } from "@/lib/users/schemas";
 import { AdminTabs } from "../admin-tabs";
 import { CreateTokenForm } from "./create-token-form";
 import { RevokeButton } from "./revoke-button";
+import { ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "API tokens" };
 
-const when = (d: Date | null) => (d ? `${d.toISOString().slice(0, 16).replace("T", " ")} UTC` : "—");
+const when = (d: Date | null) => ukDateTime(d);
 
 export default async function TokensPage() {
   const actor = await requirePermission("api-tokens:manage");

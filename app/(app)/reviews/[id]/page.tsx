@@ -9,6 +9,7 @@ import { hasSecondFactor } from "@/lib/auth/step-up";
 import { ReadOnlyRevision } from "../../revisions/[id]/read-only-revision";
 import { ReviewActions } from "./review-actions";
 import { foundOr404 } from "@/lib/pages";
+import { ukDate, ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Review" };
 
@@ -30,9 +31,8 @@ export default async function ReviewPage({
         <p className="text-sm text-muted">{job.name}</p>
         <h1 className="text-2xl font-bold">Review: {assessment.title}</h1>
         <p className="text-sm">
-          Revision {revision.number} by {author?.name ?? "—"}, submitted{" "}
-          {revision.submittedAt?.toISOString().slice(0, 16).replace("T", " ")} UTC · review by{" "}
-          {revision.reviewDate ?? "—"} ·{" "}
+          Revision {revision.number} by {author?.name ?? "—"}, submitted {ukDateTime(revision.submittedAt)} · review by{" "}
+          {ukDate(revision.reviewDate)} ·{" "}
           <strong data-testid="review-status">
             {revision.status === "submitted"
               ? "Waiting for your decision"
@@ -61,12 +61,7 @@ export default async function ReviewPage({
         />
       ) : (
         <p className="rounded-lg border border-rule bg-white p-4">
-          {signatures
-            .map(
-              (s) =>
-                `Countersigned by ${s.name}, ${s.role}, ${s.signedAt.toISOString().slice(0, 16).replace("T", " ")} UTC.`,
-            )
-            .join(" ")}
+          {signatures.map((s) => `Countersigned by ${s.name}, ${s.role}, ${ukDateTime(s.signedAt)}.`).join(" ")}
         </p>
       )}
       <SafetyCaution />

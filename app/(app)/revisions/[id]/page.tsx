@@ -14,6 +14,7 @@ import { NewRevisionButton } from "./new-revision-button";
 import { ReadOnlyRevision } from "./read-only-revision";
 import { RescoredNotice } from "./rescored-notice";
 import { foundOr404 } from "@/lib/pages";
+import { ukDate } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Assessment" };
 
@@ -56,7 +57,7 @@ export default async function RevisionPage({
         <h1 className="text-2xl font-bold">{assessment.title}</h1>
         <p className="text-sm">
           Revision {revision.number} · <strong data-testid="revision-status">{STATUS_TEXT[revision.status]}</strong>
-          {revision.reviewDate ? ` · review by ${revision.reviewDate}` : ""}
+          {revision.reviewDate ? ` · review by ${ukDate(revision.reviewDate)}` : ""}
         </p>
       </header>
       <Notice code={notice} />

@@ -4,6 +4,7 @@ import { listAssessmentAudit } from "@/assessments/revisions/approval";
 import { describeEventAuth, LIFE_EVENTS } from "@/assessments/revisions/signing-record";
 import { requirePermission } from "@/lib/auth/guard";
 import { foundOr404 } from "@/lib/pages";
+import { ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Audit trail" };
 
@@ -20,13 +21,13 @@ export default async function AuditPage({ params }: { params: Promise<{ id: stri
         printed in each signed pack&apos;s signing record.
       </p>
       <DataTable
-        head={["No.", "When (UTC)", "Revision", "What", "Who", "How authenticated", "Content / event hash"]}
+        head={["No.", "When", "Revision", "What", "Who", "How authenticated", "Content / event hash"]}
         caption="Audit trail"
       >
         {events.map((e) => (
           <tr key={e.id} className="border-t border-rule align-top">
             <td className="px-3 py-2 tabular-nums">{e.seq}</td>
-            <td className="px-3 py-2 tabular-nums">{e.createdAt.toISOString().slice(0, 19).replace("T", " ")}</td>
+            <td className="px-3 py-2 tabular-nums">{ukDateTime(e.createdAt)}</td>
             <td className="px-3 py-2">{e.revision}</td>
             <td className="px-3 py-2">{LIFE_EVENTS[e.action] ?? e.action}</td>
             <td className="px-3 py-2">{e.actorName ?? "—"}</td>

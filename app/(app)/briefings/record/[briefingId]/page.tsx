@@ -5,10 +5,11 @@ import { requireActor } from "@/lib/auth/session";
 import { can } from "@/lib/permissions";
 import { PrintButton } from "./print-button";
 import { foundOr404 } from "@/lib/pages";
+import { ukDateTime } from "@/lib/dates";
 
 export const metadata: Metadata = { title: "Briefing record" };
 
-const when = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
+const when = (d: Date) => ukDateTime(d);
 
 export default async function BriefingRecordPage({ params }: { params: Promise<{ briefingId: string }> }) {
   const actor = await requireActor();
