@@ -50,7 +50,10 @@ export const organisations = pgTable("organisations", {
   /** What the submit step suggests as the review date, in months from submission. */
   reviewPeriodMonths: integer("review_period_months").notNull().default(6),
   /** Days before a review date when its author and the administrators are reminded (Heftwise policy default). */
-  reviewReminderDays: integer("review_reminder_days").array().notNull().default(sql`'{30,7}'::integer[]`),
+  reviewReminderDays: integer("review_reminder_days")
+    .array()
+    .notNull()
+    .default(sql`'{30,7}'::integer[]`),
   /** Days a review request may wait before its approver is reminded. */
   approvalReminderDays: integer("approval_reminder_days").notNull().default(3),
   /** The roles that must use a second factor (an authenticator app) to sign in. */
