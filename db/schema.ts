@@ -559,6 +559,14 @@ export const siteChangeNotes = pgTable(
     text: text("text").notNull(),
     photoFileId: uuid("photo_file_id").references(() => storedFiles.id, { onDelete: "set null" }),
     createdAt: createdAt(),
+    /**
+     * The adviser's decision on the note: "no-change" (the assessment still holds, with their reason)
+     * or "new-revision" (a new revision was started). Null while the revision needs review.
+     */
+    decision: text("decision"),
+    decisionNote: text("decision_note"),
+    decidedBy: uuid("decided_by").references(() => users.id, { onDelete: "set null" }),
+    decidedAt: timestamp("decided_at", { withTimezone: true }),
   },
   (t) => [index("site_change_notes_revision_idx").on(t.revisionId)],
 );

@@ -3,7 +3,7 @@
  * record, the foremen of a job. Writes are in service.ts.
  */
 import "server-only";
-import { and, asc, desc, eq, gte, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, gte, inArray, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import {
   assessments,
@@ -119,7 +119,8 @@ export async function getBriefingScript(actor: Actor | null, revisionId: string)
   const notes = await db
     .select()
     .from(siteChangeNotes)
-    .where(eq(siteChangeNotes.revisionId, revisionId))
+    // Only notes the adviser has not decided on: a decided one no longer warns.
+    .where(and(eq(siteChangeNotes.revisionId, revisionId), isNull(siteChangeNotes.decision)))
     .orderBy(desc(siteChangeNotes.createdAt));
   const content = contentSchema.parse(revision.content);
   return {
@@ -190,4 +191,27 @@ export async function listForemen(actor: Actor | null, jobId: string) {
     ? await db.select({ userId: jobAssignments.userId }).from(jobAssignments).where(eq(jobAssignments.jobId, jobId))
     : [];
   return foremen.map((f) => ({ ...f, assigned: assigned.some((a) => a.userId === f.id) }));
+}
+
+/** A revision's site change notes still waiting for the adviser's decision, newest first. */
+export async function listOpenSiteChanges(actor: Actor | null, revisionId: string) {
+  authorize(actor, "assessments:read");
+  const db = await getDb();
+  return db
+    .select({
+      id: siteChangeNotes.id,
+      text: siteChangeNotes.text,
+      by: siteChangeNotes.authorName,
+      at: siteChangeNotes.createdAt,
+      photo: siteChangeNotes.photoFileId,
+    })
+    .from(siteChangeNotes)
+    .where(
+      and(
+        eq(siteChangeNotes.organisationId, actor.organisationId),
+        eq(siteChangeNotes.revisionId, revisionId),
+        isNull(siteChangeNotes.decision),
+      ),
+    )
+    .orderBy(desc(siteChangeNotes.createdAt));
 }

@@ -25,7 +25,17 @@ export const siteChangeSchema = z.object({
   text: z.string().trim().min(10, "Describe what is different (at least 10 characters)").max(2000),
 });
 
+/** The adviser's decision that a site change needs no new revision, with the reason. */
+export const siteChangeDecisionSchema = z.object({
+  note: z
+    .string()
+    .trim()
+    .min(10, "Say why the assessment still holds (at least 10 characters)")
+    .max(2000, "Use at most 2000 characters"),
+});
+
 export type AttendeeInput = z.infer<typeof attendeeSchema>;
+export type SiteChangeDecisionInput = z.infer<typeof siteChangeDecisionSchema>;
 
 /** The foremen assigned to a job (replaces the list). */
 export const assignmentSchema = z.object({ foremanIds: z.array(z.uuid()).max(50) });

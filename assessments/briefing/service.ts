@@ -7,6 +7,7 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { and, eq, inArray, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
+import { closeSiteChanges } from "./site-changes";
 import {
   briefingAttendees,
   briefings,
@@ -33,6 +34,7 @@ import {
   completeBriefingSchema,
   siteChangeSchema,
   startBriefingSchema,
+  siteChangeDecisionSchema,
 } from "./schemas";
 import { briefableRevision, getBriefingRecord, getBriefingScript, ownBriefing } from "./queries";
 import { isUuid } from "@/lib/ids";
@@ -177,6 +179,32 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
         briefingId,
         packSha256: createHash("sha256").update(pdf).digest("hex"),
       },
+    });
+  });
+}
+
+/**
+ * The adviser's decision on a revision's open site change notes: the assessment still holds (with the
+ * reason). The revision no longer needs review and briefings stop warning of those notes. Starting a
+ * new revision is the other decision (`startNewRevision` records it).
+ */
+export async function decideSiteChanges(actor: Actor | null, revisionId: string, input: unknown): Promise<void> {
+  authorize(actor, "assessments:write");
+  const db = await getDb();
+  const [revision] = isUuid(revisionId) ? await db.select().from(revisions).where(eq(revisions.id, revisionId)) : [];
+  if (!revision || revision.organisationId !== actor.organisationId) throw AppError.notFound("Revision");
+  const { note } = parseOrThrow(siteChangeDecisionSchema, input);
+  await db.transaction(async (tx) => {
+    const decided = await closeSiteChanges(tx, actor, revisionId, "no-change", note);
+    if (!decided) throw new AppError("conflict", "There is no site change waiting for a decision on this revision.");
+    await recordAudit(tx, {
+      organisationId: actor.organisationId,
+      actorId: actor.id,
+      action: "revision.site-change-reviewed",
+      entityType: "revision",
+      entityId: revisionId,
+      details: { decision: "no-change", note, notes: decided },
+      auth: actor.auth,
     });
   });
 }

@@ -35,6 +35,7 @@ import { contentHash, getRevision, loadRevision } from "./service";
 import { isAssignedToJob } from "../briefing/assignment";
 import { isUuid } from "@/lib/ids";
 import { confirmIdentity } from "@/lib/auth/step-up";
+import { closeSiteChanges } from "../briefing/site-changes";
 
 const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 
@@ -418,6 +419,19 @@ export async function startNewRevision(actor: Actor | null, revisionId: string):
       details: { from: revision.id },
       auth: actor.auth,
     });
+    // A new revision is the adviser's answer to any site change reported against the old one.
+    if (revision.needsReview) {
+      const decided = await closeSiteChanges(tx, actor, revision.id, "new-revision", null);
+      await recordAudit(tx, {
+        organisationId: actor.organisationId,
+        actorId: actor.id,
+        action: "revision.site-change-reviewed",
+        entityType: "revision",
+        entityId: revision.id,
+        details: { decision: "new-revision", revision: created.id, notes: decided },
+        auth: actor.auth,
+      });
+    }
     return { revisionId: created.id };
   });
 }

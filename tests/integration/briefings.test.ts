@@ -4,16 +4,23 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { getPackFile, verifyPack } from "@/assessments/revisions/approval";
+import { getPackFile, startNewRevision, verifyPack } from "@/assessments/revisions/approval";
 import {
   briefingSheetPdf,
   completeBriefing,
   createSiteChangeNote,
+  decideSiteChanges,
   recordAttendee,
   setJobForemen,
   startBriefing,
 } from "@/assessments/briefing/service";
-import { getBriefingRecord, getBriefingScript, listForemanJobs, listForemen } from "@/assessments/briefing/queries";
+import {
+  getBriefingRecord,
+  getBriefingScript,
+  listForemanJobs,
+  listForemen,
+  listOpenSiteChanges,
+} from "@/assessments/briefing/queries";
 import { listAssessments } from "@/assessments/revisions/queries";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
@@ -177,5 +184,31 @@ describe("a briefing", () => {
     expect(
       await code(createSiteChangeNote(adviser, { revisionId: approvedId, text: "Access point moved again." })),
     ).toBe("forbidden");
+  });
+
+  it("the revision needs review until the adviser decides: no change (with the reason), or a new revision", async () => {
+    // The note from the test before is still open.
+    expect((await listOpenSiteChanges(adviser, approvedId)).length).toBeGreaterThan(0);
+    expect(await code(decideSiteChanges(adviser, approvedId, { note: "ok" }))).toBe("validation");
+    expect(await code(decideSiteChanges(foreman, approvedId, { note: "Carry checked: still within limits." }))).toBe(
+      "forbidden",
+    );
+    await decideSiteChanges(adviser, approvedId, {
+      note: "Carry re-measured at 55 m; the trolley task already covers it.",
+    });
+    expect(await listOpenSiteChanges(adviser, approvedId)).toEqual([]);
+    const script = await getBriefingScript(foreman, approvedId);
+    expect(script.revision.needsReview).toBe(false);
+    expect(script.siteChanges).toEqual([]);
+    expect(await code(decideSiteChanges(adviser, approvedId, { note: "Nothing open any more, so refused." }))).toBe(
+      "conflict",
+    );
+
+    // A new note; this time the adviser answers with a new revision.
+    await createSiteChangeNote(foreman, { revisionId: approvedId, text: "Cable route now crosses a drain." });
+    expect((await getBriefingScript(foreman, approvedId)).revision.needsReview).toBe(true);
+    await startNewRevision(adviser, approvedId);
+    expect(await listOpenSiteChanges(adviser, approvedId)).toEqual([]);
+    expect((await getBriefingScript(foreman, approvedId)).revision.needsReview).toBe(false);
   });
 });

@@ -14,7 +14,9 @@ import { NewRevisionButton } from "./new-revision-button";
 import { ReadOnlyRevision } from "./read-only-revision";
 import { RescoredNotice } from "./rescored-notice";
 import { foundOr404 } from "@/lib/pages";
-import { ukDate } from "@/lib/dates";
+import { ukDate, ukDateTime } from "@/lib/dates";
+import { listOpenSiteChanges } from "@/assessments/briefing/queries";
+import { SiteChangeDecision } from "./site-change-review";
 
 export const metadata: Metadata = { title: "Assessment" };
 
@@ -38,6 +40,7 @@ export default async function RevisionPage({
   const data = await foundOr404(getRevision(actor, id));
   const { revision, assessment, job, content, register } = data;
   const editable = revision.status === "draft" && can(actor, "assessments:write");
+  const siteChanges = revision.status === "draft" ? [] : await listOpenSiteChanges(actor, revision.id);
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
   // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
@@ -61,6 +64,30 @@ export default async function RevisionPage({
         </p>
       </header>
       <Notice code={notice} />
+      {siteChanges.length > 0 && (
+        <section
+          data-testid="needs-review"
+          role="alert"
+          className="space-y-3 rounded-lg border-4 border-band-act bg-white p-4"
+        >
+          <h2 className="text-lg font-bold text-band-act">Needs review: site change reported</h2>
+          <ul className="space-y-1">
+            {siteChanges.map((c) => (
+              <li key={c.id}>
+                {c.text}{" "}
+                <span className="text-sm text-muted">
+                  — {c.by}, {ukDateTime(c.at)}
+                </span>
+              </li>
+            ))}
+          </ul>
+          <p className="text-sm">
+            Decide before the next briefing: start a new revision if the work or its controls must change, or record why
+            this one still holds. Briefings warn of these notes until then.
+          </p>
+          {can(actor, "assessments:write") && <SiteChangeDecision revisionId={revision.id} />}
+        </section>
+      )}
       <nav className="flex flex-wrap gap-4 text-sm">
         {revision.status !== "draft" && (
           <a href={`/api/v1/revisions/${revision.id}/pack`} className="font-bold text-accent underline">
