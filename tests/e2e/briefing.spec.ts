@@ -137,7 +137,10 @@ test("a foreman cannot see drafts or another organisation's work", async ({ page
   expect(api).toBe(404);
 });
 
-test("a site change note reaches the adviser's inbox and warns the next briefing", async ({ page }) => {
+test("a site change note reaches the adviser's inbox and warns the next briefing until the adviser decides", async ({
+  page,
+  browser,
+}) => {
   await signIn(page, "foreman@brackenfold.example");
   await page.goto("/briefings");
   await page.getByRole("link", { name: "Report a site change" }).first().click();
@@ -156,4 +159,23 @@ test("a site change note reaches the adviser's inbox and warns the next briefing
   await expect(page.getByRole("alert").filter({ hasText: "Site change reported" })).toContainText(
     "carry distance now 60 m",
   );
+
+  // The adviser opens the e-mailed link: the revision needs review until they decide.
+  const adviserContext = await browser.newContext();
+  const adviser = await adviserContext.newPage();
+  await signIn(adviser, "adviser@brackenfold.example");
+  await adviser.goto(mail.text.match(/https?:\/\/\S+\/revisions\/[0-9a-f-]+/)![0]);
+  const review = adviser.getByTestId("needs-review");
+  await expect(review).toContainText("carry distance now 60 m");
+  await review.getByRole("button", { name: "Record: no change needed" }).click();
+  await expect(review.getByText(/Say why the assessment still holds/).last()).toBeVisible();
+  await review
+    .getByLabel(/No change needed\? Say why/)
+    .fill("Carry re-measured: 55 m, within the trolley task's plan.");
+  await review.getByRole("button", { name: "Record: no change needed" }).click();
+  await expect(adviser.getByTestId("needs-review")).toHaveCount(0);
+  await adviserContext.close();
+
+  await page.goto("/briefings");
+  await expect(page.getByText("Site change reported — needs review")).toHaveCount(0);
 });
