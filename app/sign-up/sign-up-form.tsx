@@ -1,10 +1,10 @@
 "use client";
 
 import { useState } from "react";
+import { NewPasswordFields } from "@/app/_components/new-password-fields";
 import { FormMessage, PrimaryButton, TextField } from "@/app/_components/form";
 import { useActionForm } from "@/app/_components/use-action-form";
 import { signUpSchema, type SignUpInput } from "@/lib/account/schemas";
-import { PASSWORD_MIN } from "@/lib/auth/schemas";
 import { signUpAction } from "./actions";
 
 export function SignUpForm() {
@@ -36,21 +36,7 @@ export function SignUpForm() {
         error={formState.errors.email?.message}
         {...register("email")}
       />
-      <TextField
-        label="Password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.password?.message}
-        {...register("password")}
-      />
-      <TextField
-        label="Repeat the password"
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.confirm?.message}
-        {...register("confirm")}
-      />
+      <NewPasswordFields register={register} errors={formState.errors} label="Password" />
       <PrimaryButton type="submit" disabled={formState.isSubmitting} className="w-full py-3 text-lg">
         {formState.isSubmitting ? "Setting up…" : "Set up the organisation"}
       </PrimaryButton>

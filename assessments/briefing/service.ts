@@ -4,7 +4,6 @@
  * the briefing sheet.
  */
 import "server-only";
-import { createHash } from "node:crypto";
 import { and, eq, inArray, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { closeSiteChanges } from "./site-changes";
@@ -19,6 +18,7 @@ import {
   users,
 } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { sha256Hex } from "@/lib/hash";
 import { appUrl } from "@/lib/config";
 import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
 import { renderMail } from "@/lib/mail/layout";
@@ -177,7 +177,7 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
         kind: "approved",
         reason: "briefing",
         briefingId,
-        packSha256: createHash("sha256").update(pdf).digest("hex"),
+        packSha256: sha256Hex(pdf),
       },
     });
   });

@@ -5,7 +5,6 @@
  * verification of an uploaded pack, and the audit trail.
  */
 import "server-only";
-import { createHash } from "node:crypto";
 import { and, asc, desc, eq, inArray, ne } from "drizzle-orm";
 import { z } from "zod";
 import { getDb, type Tx } from "@/db/client";
@@ -20,6 +19,7 @@ import {
   users,
 } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { sha256Hex } from "@/lib/hash";
 import { appUrl } from "@/lib/config";
 import { drawnSignatureSchema } from "@/lib/drawn-signature";
 import { AppError, parseOrThrow, parseOrThrowAsync } from "@/lib/errors";
@@ -36,8 +36,6 @@ import { isAssignedToJob } from "../briefing/assignment";
 import { isUuid } from "@/lib/ids";
 import { confirmIdentity } from "@/lib/auth/step-up";
 import { closeSiteChanges } from "../briefing/site-changes";
-
-const sha256 = (data: Uint8Array) => createHash("sha256").update(data).digest("hex");
 
 export async function storePack(
   tx: Tx,
@@ -291,7 +289,7 @@ export async function approveRevision(
       entityType: "revision",
       entityId: revisionId,
       contentHash: hash,
-      details: { kind: "approved", packSha256: sha256(pdf) },
+      details: { kind: "approved", packSha256: sha256Hex(pdf) },
     });
   });
   return { mail: notify ? await notifyAuthor(actor, revisionId, "approved") : null };
@@ -492,7 +490,7 @@ export type Verification =
  */
 export async function verifyPack(data: Uint8Array): Promise<Verification> {
   const db = await getDb();
-  const hash = sha256(data);
+  const hash = sha256Hex(data);
   const describe = async (revisionId: string) => {
     const [row] = await db
       .select({

@@ -4,10 +4,11 @@
  * its SHA-256 is stored. Inspecting a link changes nothing; spending it is atomic, so of two
  * racing uses only one succeeds.
  */
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { getDb, type Queryable, type Tx } from "@/db/client";
 import { accountLinks } from "@/db/schema";
+import { sha256Hex } from "@/lib/hash";
 
 export type LinkPurpose = "verify-email" | "reset-password";
 
@@ -16,7 +17,6 @@ export const LINK_TTL_MS: Record<LinkPurpose, number> = {
   "reset-password": 3600_000,
 };
 
-const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 const TOKEN_SHAPE = /^[A-Za-z0-9_-]{20,100}$/;
 
 /** A new link for the user; any unused earlier link of the same purpose stops working. */
@@ -28,7 +28,7 @@ export async function issueLink(tx: Tx, userId: string, purpose: LinkPurpose): P
   await tx.insert(accountLinks).values({
     userId,
     purpose,
-    tokenHash: hashToken(token),
+    tokenHash: sha256Hex(token),
     expiresAt: new Date(Date.now() + LINK_TTL_MS[purpose]),
   });
   return token;
@@ -42,7 +42,7 @@ export async function inspectLink(token: string, purpose: LinkPurpose, db?: Quer
   const [link] = await q
     .select()
     .from(accountLinks)
-    .where(and(eq(accountLinks.tokenHash, hashToken(token)), eq(accountLinks.purpose, purpose)));
+    .where(and(eq(accountLinks.tokenHash, sha256Hex(token)), eq(accountLinks.purpose, purpose)));
   if (!link) return { state: "unknown" };
   if (link.usedAt) return { state: "used" };
   if (link.expiresAt.getTime() <= Date.now()) return { state: "expired" };
@@ -57,7 +57,7 @@ export async function spendLink(tx: Tx, token: string, purpose: LinkPurpose): Pr
     .set({ usedAt: new Date() })
     .where(
       and(
-        eq(accountLinks.tokenHash, hashToken(token)),
+        eq(accountLinks.tokenHash, sha256Hex(token)),
         eq(accountLinks.purpose, purpose),
         isNull(accountLinks.usedAt),
         gt(accountLinks.expiresAt, new Date()),

@@ -5,11 +5,12 @@
  * the creator's at that moment (a creator who leaves or loses a role takes the token's power with
  * them). Tokens expire, can be revoked, record when they were last used, and are rate-limited.
  */
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { apiTokens, ROLES, users, type Role } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { sha256Hex } from "@/lib/hash";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { authorize, PERMISSIONS, type Actor } from "@/lib/permissions";
 import { ROLE_LABELS } from "@/lib/users/schemas";
@@ -20,8 +21,6 @@ export const TOKEN_PREFIX = "hw_";
 export const TOKEN_REQUESTS_PER_MINUTE = 300;
 /** `last used` is written at most this often, so that reading with a token is not a write each time. */
 const LAST_USED_EVERY_MS = 60_000;
-
-const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
 /** The scopes an actor may give a token: roles whose every permission the actor has (pure). */
 export function grantableScopes(role: Role): Role[] {
@@ -46,7 +45,7 @@ export async function createApiToken(actor: Actor | null, input: unknown): Promi
         createdBy: actor.id,
         name: data.name,
         prefix: token.slice(0, 10),
-        tokenHash: hashToken(token),
+        tokenHash: sha256Hex(token),
         scope: data.scope,
         expiresAt: new Date(Date.now() + data.days * 86_400_000),
       })
@@ -148,7 +147,7 @@ export async function actorForToken(
     .select({ token: apiTokens, user: users })
     .from(apiTokens)
     .innerJoin(users, eq(users.id, apiTokens.createdBy))
-    .where(eq(apiTokens.tokenHash, hashToken(token)));
+    .where(eq(apiTokens.tokenHash, sha256Hex(token)));
   const now = Date.now();
   if (!row || row.token.revokedAt || row.token.expiresAt.getTime() <= now || !row.user.active) throw unusable();
   if (row.user.organisationId !== row.token.organisationId) throw unusable();

@@ -10,16 +10,7 @@ import type { Actor } from "@/lib/permissions";
 import { verifyPassword } from "./passwords";
 import { spendSecondFactor } from "./second-factor";
 import { signInSchema } from "./schemas";
-import {
-  clearAttempts,
-  FREE_ADDRESS_FAILURES,
-  FREE_PAIR_FAILURES,
-  readAttempts,
-  recordFailure,
-  slowdownAfter,
-  throttleKeys,
-  waitAfter,
-} from "./throttle";
+import { throttleAttempt } from "./throttle";
 
 export const SIGN_IN_FAILED = "E-mail or password not recognised.";
 /** Not a failure: the password was right and the account has a second factor. The form asks for it. */
@@ -42,26 +33,16 @@ export async function checkCredentials(
   const parsed = signInSchema.safeParse(input);
   if (!parsed.success) throw new SignInError(SIGN_IN_FAILED);
   const { email, password, code } = parsed.data;
-  const keys = throttleKeys(email, clientAddress);
-  const attempts = await readAttempts([keys.pair, keys.account, ...(keys.address ? [keys.address] : [])]);
-  const now = Date.now();
-  const wait = Math.max(
-    waitAfter(attempts.get(keys.pair), FREE_PAIR_FAILURES, now),
-    keys.address ? waitAfter(attempts.get(keys.address), FREE_ADDRESS_FAILURES, now) : 0,
-  );
-  if (wait > 0) {
-    const minutes = Math.ceil(wait / 60_000);
-    throw new SignInError(`Too many attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`);
-  }
+  const throttle = await throttleAttempt(email, clientAddress);
+  if (throttle.refusal) throw new SignInError(throttle.refusal);
   // Failures on this account from elsewhere slow the check down; they never lock its owner out.
-  const slow = slowdownAfter(attempts.get(keys.account), now);
-  if (slow > 0) await new Promise((resolve) => setTimeout(resolve, slow));
+  if (throttle.slowdown > 0) await new Promise((resolve) => setTimeout(resolve, throttle.slowdown));
 
   const db = await getDb();
   const user = await db.query.users.findFirst({ where: eq(users.email, email) });
   const ok = await verifyPassword(password, user?.passwordHash);
   const fail = async (message: string) => {
-    await recordFailure([keys.pair, keys.account, ...(keys.address ? [keys.address] : [])]);
+    await throttle.failed();
     return new SignInError(message);
   };
   if (!ok || !user || !user.active) throw await fail(SIGN_IN_FAILED);
@@ -74,7 +55,7 @@ export async function checkCredentials(
     method = `password+${factor}`;
   }
   if (!user.emailVerifiedAt) throw new SignInError(EMAIL_NOT_CONFIRMED);
-  await clearAttempts([keys.pair, keys.account]);
+  await throttle.succeeded();
   return {
     actor: { id: user.id, organisationId: user.organisationId, role: user.role, name: user.name, email: user.email },
     method,

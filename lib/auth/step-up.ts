@@ -12,15 +12,7 @@ import type { Actor } from "@/lib/permissions";
 import { verifyPassword } from "./passwords";
 import type { RequestOrigin } from "./request-context";
 import { spendSecondFactor } from "./second-factor";
-import {
-  clearAttempts,
-  FREE_ADDRESS_FAILURES,
-  FREE_PAIR_FAILURES,
-  readAttempts,
-  recordFailure,
-  throttleKeys,
-  waitAfter,
-} from "./throttle";
+import { throttleAttempt } from "./throttle";
 
 export interface StepUpInput {
   password: string;
@@ -42,25 +34,12 @@ export async function hasSecondFactor(userId: string): Promise<boolean> {
 /** Checks the password (and code) of the acting user; returns how they proved it, for the audit trail. */
 export async function confirmIdentity(actor: Actor, input: StepUpInput, origin: RequestOrigin): Promise<AuthRecord> {
   if (actor.auth?.via === "token") throw new AppError("forbidden", "Signing needs a person: an API token cannot sign");
-  const keys = throttleKeys(actor.email, origin.address);
-  const all = [keys.pair, keys.account, ...(keys.address ? [keys.address] : [])];
-  const attempts = await readAttempts(all);
-  const now = Date.now();
-  const wait = Math.max(
-    waitAfter(attempts.get(keys.pair), FREE_PAIR_FAILURES, now),
-    keys.address ? waitAfter(attempts.get(keys.address), FREE_ADDRESS_FAILURES, now) : 0,
-  );
-  if (wait > 0) {
-    const minutes = Math.ceil(wait / 60_000);
-    throw new AppError(
-      "rate_limited",
-      `Too many attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`,
-    );
-  }
+  const throttle = await throttleAttempt(actor.email, origin.address);
+  if (throttle.refusal) throw new AppError("rate_limited", throttle.refusal);
   const db = await getDb();
   const [user] = await db.select().from(users).where(eq(users.id, actor.id));
   if (!(await verifyPassword(input.password, user?.passwordHash))) {
-    await recordFailure(all);
+    await throttle.failed();
     throw fieldError("password", "That password is not right");
   }
   let method = "password";
@@ -68,11 +47,11 @@ export async function confirmIdentity(actor: Actor, input: StepUpInput, origin: 
     if (!input.code?.trim()) throw fieldError("code", "Enter the code from your authenticator app");
     const factor = await spendSecondFactor(user, input.code);
     if (!factor) {
-      await recordFailure(all);
+      await throttle.failed();
       throw fieldError("code", "That code was not recognised");
     }
     method = `password+${factor}`;
   }
-  await clearAttempts([keys.pair, keys.account]);
+  await throttle.succeeded();
   return { via: "step-up", method, address: origin.address, client: origin.client };
 }

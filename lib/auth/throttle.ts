@@ -71,3 +71,25 @@ export async function clearAttempts(keys: string[]): Promise<void> {
   const db = await getDb();
   await db.delete(signInAttempts).where(inArray(signInAttempts.key, keys));
 }
+
+/**
+ * One attempt's throttle, for sign-in and for step-up alike: whether it must wait first (and the
+ * message saying how long), how much to slow it, and what to record when it fails or succeeds.
+ */
+export async function throttleAttempt(email: string, address: string | null) {
+  const keys = throttleKeys(email, address);
+  const all = [keys.pair, keys.account, ...(keys.address ? [keys.address] : [])];
+  const attempts = await readAttempts(all);
+  const now = Date.now();
+  const wait = Math.max(
+    waitAfter(attempts.get(keys.pair), FREE_PAIR_FAILURES, now),
+    keys.address ? waitAfter(attempts.get(keys.address), FREE_ADDRESS_FAILURES, now) : 0,
+  );
+  const minutes = Math.ceil(wait / 60_000);
+  return {
+    refusal: wait > 0 ? `Too many attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.` : null,
+    slowdown: slowdownAfter(attempts.get(keys.account), now),
+    failed: () => recordFailure(all),
+    succeeded: () => clearAttempts([keys.pair, keys.account]),
+  };
+}

@@ -3,11 +3,12 @@
  * expiring), role changes and deactivation. Every function takes the acting user and checks the
  * permission table first.
  */
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { and, asc, eq, gt, isNull } from "drizzle-orm";
 import { getDb, type Tx } from "@/db/client";
 import { invites, users, type Role } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { sha256Hex } from "@/lib/hash";
 import { setPasswordSchema } from "@/lib/auth/schemas";
 import { hashPassword } from "@/lib/auth/passwords";
 import { appUrl, config } from "@/lib/config";
@@ -18,8 +19,6 @@ import { authorize, type Actor } from "@/lib/permissions";
 import { changeRoleSchema, inviteSchema, resendInviteSchema, ROLE_LABELS, setActiveSchema } from "./schemas";
 import { closeAllSessions } from "@/lib/auth/sessions";
 import { forgetSessions } from "@/lib/auth/session-cache";
-
-export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
 export interface UserRow {
   id: string;
@@ -68,7 +67,7 @@ async function recordInvite(tx: Tx, actor: Actor, user: { id: string; email: str
   await tx.insert(invites).values({
     organisationId: actor.organisationId,
     userId: user.id,
-    tokenHash: hashToken(token),
+    tokenHash: sha256Hex(token),
     expiresAt,
     createdBy: actor.id,
   });
@@ -245,7 +244,7 @@ export type InviteState = { state: "valid"; name: string; email: string } | { st
 export async function inspectInvite(token: string): Promise<InviteState> {
   if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) return { state: "unknown" };
   const db = await getDb();
-  const invite = await db.query.invites.findFirst({ where: eq(invites.tokenHash, hashToken(token)) });
+  const invite = await db.query.invites.findFirst({ where: eq(invites.tokenHash, sha256Hex(token)) });
   if (!invite) return { state: "unknown" };
   if (invite.usedAt) return { state: "used" };
   if (invite.expiresAt.getTime() <= Date.now()) return { state: "expired" };
@@ -266,7 +265,7 @@ export async function acceptInvite(token: string, input: unknown): Promise<{ ema
     const [invite] = await tx
       .update(invites)
       .set({ usedAt: new Date() })
-      .where(and(eq(invites.tokenHash, hashToken(token)), isNull(invites.usedAt), gt(invites.expiresAt, new Date())))
+      .where(and(eq(invites.tokenHash, sha256Hex(token)), isNull(invites.usedAt), gt(invites.expiresAt, new Date())))
       .returning();
     if (!invite) throw new AppError("conflict", inviteStateMessage("used"));
     const [user] = await tx

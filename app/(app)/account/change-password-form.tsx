@@ -1,9 +1,9 @@
 "use client";
 
+import { NewPasswordFields } from "@/app/_components/new-password-fields";
 import { FormMessage, PrimaryButton, TextField } from "@/app/_components/form";
 import { useActionForm } from "@/app/_components/use-action-form";
 import { changePasswordSchema, type ChangePasswordInput } from "@/lib/account/schemas";
-import { PASSWORD_MIN } from "@/lib/auth/schemas";
 import { changePasswordAction } from "./actions";
 
 export function ChangePasswordForm() {
@@ -30,21 +30,7 @@ export function ChangePasswordForm() {
         error={formState.errors.current?.message}
         {...register("current")}
       />
-      <TextField
-        label="New password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.password?.message}
-        {...register("password")}
-      />
-      <TextField
-        label="Repeat the new password"
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.confirm?.message}
-        {...register("confirm")}
-      />
+      <NewPasswordFields register={register} errors={formState.errors} repeatLabel="Repeat the new password" />
       <PrimaryButton type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Changing…" : "Change password"}
       </PrimaryButton>

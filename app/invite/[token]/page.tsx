@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { AuthFrame } from "@/app/_components/auth-frame";
+import { LinkProblem } from "@/app/_components/link-problem";
 import { inspectInvite, inviteStateMessage } from "@/lib/users/service";
 import { SetPasswordForm } from "./set-password-form";
 
@@ -11,14 +11,12 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   const invite = await inspectInvite(token);
   if (invite.state !== "valid")
     return (
-      <AuthFrame title="This link cannot be used">
-        <p data-testid="invite-problem" className="text-muted">
-          {inviteStateMessage(invite.state)}
-        </p>
-        <Link href="/sign-in" className="mt-6 inline-block font-bold text-accent underline">
-          Go to sign-in
-        </Link>
-      </AuthFrame>
+      <LinkProblem
+        message={inviteStateMessage(invite.state)}
+        href="/sign-in"
+        action="Go to sign-in"
+        testId="invite-problem"
+      />
     );
   return (
     <AuthFrame title="Set your password">

@@ -4,8 +4,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { FormMessage, PrimaryButton, TextField } from "@/app/_components/form";
-import { PASSWORD_MIN, setPasswordSchema, type SetPasswordInput } from "@/lib/auth/schemas";
+import { NewPasswordFields } from "@/app/_components/new-password-fields";
+import { FormMessage, PrimaryButton } from "@/app/_components/form";
+import { setPasswordSchema, type SetPasswordInput } from "@/lib/auth/schemas";
 import { acceptInviteAction } from "./actions";
 
 export function SetPasswordForm({ token }: { token: string }) {
@@ -29,21 +30,7 @@ export function SetPasswordForm({ token }: { token: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {failure && <FormMessage tone="error">{failure}</FormMessage>}
-      <TextField
-        label="New password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.password?.message}
-        {...register("password")}
-      />
-      <TextField
-        label="Repeat the password"
-        type="password"
-        autoComplete="new-password"
-        error={formState.errors.confirm?.message}
-        {...register("confirm")}
-      />
+      <NewPasswordFields register={register} errors={formState.errors} />
       <PrimaryButton type="submit" disabled={formState.isSubmitting} className="w-full py-3 text-lg">
         {formState.isSubmitting ? "Saving…" : "Set password"}
       </PrimaryButton>

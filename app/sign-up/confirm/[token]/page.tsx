@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { AuthFrame } from "@/app/_components/auth-frame";
+import { LinkProblem } from "@/app/_components/link-problem";
 import { inspectAccountLink } from "@/lib/account/service";
 import { ConfirmButton } from "./confirm-button";
 
@@ -10,17 +10,7 @@ export const metadata: Metadata = { title: "Confirm your address", robots: { ind
 export default async function ConfirmEmailPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const link = await inspectAccountLink(token, "verify-email");
-  if (link.state !== "valid")
-    return (
-      <AuthFrame title="This link cannot be used">
-        <p data-testid="link-problem" className="text-muted">
-          {link.message}
-        </p>
-        <Link href="/sign-in" className="mt-6 inline-block font-bold text-accent underline">
-          Go to sign-in
-        </Link>
-      </AuthFrame>
-    );
+  if (link.state !== "valid") return <LinkProblem message={link.message} href="/sign-in" action="Go to sign-in" />;
   return (
     <AuthFrame title="Confirm your address">
       <p className="mb-4 text-muted">One step left: confirm that this address is yours, then sign in.</p>
