@@ -1,3 +1,4 @@
+import { withSerwist } from "@serwist/turbopack";
 import type { NextConfig } from "next";
 
 /**
@@ -27,4 +28,5 @@ const nextConfig: NextConfig = {
   experimental: { authInterrupts: true },
 };
 
-export default nextConfig;
+// The service worker is bundled by a route handler (app/serwist/[path]/route.ts) with esbuild.
+export default withSerwist(nextConfig);

@@ -24,6 +24,9 @@ export function contentSecurityPolicy(nonce: string, development = process.env.N
     "img-src 'self' data: blob:",
     "font-src 'self'",
     "connect-src 'self'",
+    // The service worker (app/sw.ts) and the web app manifest come from this site only.
+    "worker-src 'self'",
+    "manifest-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

@@ -1,11 +1,15 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
+import { ServiceWorker } from "./_components/service-worker";
 import { hyperlegible } from "./fonts";
 import "./globals.css";
 
 export const metadata: Metadata = {
   title: { default: "Heftwise", template: "%s · Heftwise" },
   description: "Manual-handling and lift-plan risk assessments for lineside and civils work.",
+  applicationName: "Heftwise",
+  appleWebApp: { capable: true, title: "Heftwise", statusBarStyle: "default" },
+  icons: { apple: "/icons/apple-touch-icon.png" },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#16302b" };
@@ -16,7 +20,9 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en-GB" className={hyperlegible.variable}>
-      <body className="min-h-screen font-sans antialiased">{children}</body>
+      <body className="min-h-screen font-sans antialiased">
+        <ServiceWorker>{children}</ServiceWorker>
+      </body>
     </html>
   );
 }

@@ -299,9 +299,18 @@ export const OPERATIONS: Operation[] = [
     responses: { "200": "Sent, or why not" },
   },
   {
+    path: "/briefings/briefable",
+    method: "get",
+    summary: "The approved revisions the caller can brief from: what a foreman's phone keeps a copy of",
+    permission: "briefings:run",
+    responses: { "200": "The revisions, with the time they were checked" },
+  },
+  {
     path: "/briefings",
     method: "post",
-    summary: "Start a briefing against an approved revision",
+    summary:
+      "Start a briefing. A phone sends its key and start time: the same key again returns the same briefing; " +
+      "one taken offline against a superseded revision is recorded as such and reported",
     permission: "briefings:run",
     body: { json: startBriefingSchema },
     responses: { "201": "The briefing's id" },
@@ -317,7 +326,7 @@ export const OPERATIONS: Operation[] = [
   {
     path: `/briefings/${id}/complete`,
     method: "post",
-    summary: "Sign the briefing off with the foreman's signature",
+    summary: "Sign the briefing off with the foreman's signature (the same key twice is one sign-off)",
     permission: "briefings:run",
     body: { json: completeBriefingSchema },
     responses: { "200": "Completed" },

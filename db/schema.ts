@@ -515,11 +515,23 @@ export const briefings = pgTable(
     foremanId: uuid("foreman_id").references(() => users.id, { onDelete: "set null" }),
     foremanName: text("foreman_name").notNull(),
     place: text("place").notNull(),
+    /** When the foreman started it, by the phone's clock: a briefing taken without signal arrives later. */
     startedAt: timestamp("started_at", { withTimezone: true }).notNull().defaultNow(),
     completedAt: timestamp("completed_at", { withTimezone: true }),
     foremanSignature: bytea("foreman_signature"),
+    /** The phone's key for the briefing: sending the start again returns this briefing, never a second one. */
+    deviceKey: text("device_key"),
+    /** The phone's key for the sign-off, so a repeated sign-off is recognised as the same one. */
+    completionKey: text("completion_key"),
+    /** When the server received the start (later than started_at when the phone had no signal). */
+    receivedAt: createdAt(),
+    /** Taken against a revision that had been superseded (the phone was offline): reported to the adviser. */
+    againstSuperseded: boolean("against_superseded").notNull().default(false),
   },
-  (t) => [index("briefings_revision_idx").on(t.revisionId)],
+  (t) => [
+    index("briefings_revision_idx").on(t.revisionId),
+    uniqueIndex("briefings_device_key_unique").on(t.deviceKey),
+  ],
 );
 
 /** An operative's sign-on, sent once even when the phone retries: the device's key is unique. */

@@ -86,8 +86,40 @@ export async function listForemanJobs(actor: Actor | null) {
   }));
 }
 
-/** An approved revision of one of the foreman's jobs; anything else is "not found". */
-export async function briefableRevision(actor: Actor, revisionId: string) {
+/**
+ * What a foreman's phone keeps a copy of while it has signal: each approved revision of their jobs,
+ * with where its briefing page and sheet are. `checkedAt` is when this list was true.
+ */
+export async function listBriefableRevisions(actor: Actor | null) {
+  const jobs = await listForemanJobs(actor);
+  return {
+    checkedAt: new Date().toISOString(),
+    revisions: jobs.flatMap(({ job, revisions }) =>
+      revisions.map((r) => ({
+        revisionId: r.revisionId,
+        number: r.number,
+        title: r.title,
+        jobName: job.name,
+        reviewDate: r.reviewDate,
+        needsReview: r.needsReview,
+        page: `/briefings/${r.revisionId}`,
+        sheet: `/api/v1/revisions/${r.revisionId}/briefing-sheet`,
+      })),
+    ),
+  };
+}
+
+export type BriefableRevisions = Awaited<ReturnType<typeof listBriefableRevisions>>;
+
+/**
+ * An approved revision of one of the foreman's jobs; anything else is "not found". A superseded one is
+ * returned only where asked for: a phone without signal may have briefed from it.
+ */
+export async function briefableRevision(
+  actor: Actor,
+  revisionId: string,
+  { superseded = "refuse" }: { superseded?: "allow" | "refuse" } = {},
+) {
   const db = await getDb();
   const [row] = isUuid(revisionId)
     ? await db
@@ -97,7 +129,9 @@ export async function briefableRevision(actor: Actor, revisionId: string) {
         .innerJoin(jobs, eq(jobs.id, assessments.jobId))
         .where(eq(revisions.id, revisionId))
     : [];
-  if (!row || row.revision.organisationId !== actor.organisationId || row.revision.status !== "approved")
+  const briefable =
+    row?.revision.status === "approved" || (superseded === "allow" && row?.revision.status === "superseded");
+  if (!row || row.revision.organisationId !== actor.organisationId || !briefable)
     throw AppError.notFound("Approved revision");
   if (!(await isAssignedToJob(actor, row.job.id))) throw AppError.notFound("Approved revision");
   return row;

@@ -3,22 +3,52 @@ import { drawnSignatureSchema } from "@/lib/drawn-signature";
 
 const signature = drawnSignatureSchema("Sign in the box");
 
+/** A key made on the phone, so that sending the same thing again after lost signal records it once. */
+const deviceKey = (message: string) => z.string().regex(/^[A-Za-z0-9-]{16,64}$/, message);
+
+/**
+ * A time read from the phone's clock. A phone without signal sends its record later, so the time can be
+ * in the past, but not by more than 30 days, nor ahead of the server by more than 5 minutes
+ * (Heftwise policy: a clock that far out is wrong, and the record would mislead).
+ */
+export const DEVICE_CLOCK_TOLERANCE_MS = 5 * 60_000;
+export const OFFLINE_RECORD_MAX_AGE_DAYS = 30;
+const deviceTime = z.iso.datetime({ offset: true, error: "Invalid time" }).refine(
+  (value) => {
+    const at = Date.parse(value);
+    const now = Date.now();
+    return at <= now + DEVICE_CLOCK_TOLERANCE_MS && at >= now - OFFLINE_RECORD_MAX_AGE_DAYS * 86_400_000;
+  },
+  { error: "The phone's clock is wrong, or the record is older than 30 days: check the date and time on the phone" },
+);
+
+/**
+ * Starting a briefing. A phone sends its own key and the time it started, so a briefing taken without
+ * signal is recorded once, at the time it happened, when the signal returns.
+ */
 export const startBriefingSchema = z.object({
   revisionId: z.uuid("Choose an approved assessment"),
   place: z.string().trim().min(2, "Say where the briefing is held").max(200),
+  key: deviceKey("Invalid briefing key").optional(),
+  startedAt: deviceTime.optional(),
 });
 
 /** One operative's sign-on. The key is made on the device, so a retry after lost signal adds no duplicate. */
 export const attendeeSchema = z.object({
-  key: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, "Invalid sign-on key"),
+  key: deviceKey("Invalid sign-on key"),
   name: z.string().trim().min(2, "Enter your name").max(120),
   employer: z.string().trim().min(2, "Enter your employer").max(120),
   cardNumber: z.string().trim().min(3, "Enter your competence card number").max(40),
   signature,
-  signedAt: z.iso.datetime({ offset: true, error: "Invalid time" }),
+  signedAt: deviceTime,
 });
 
-export const completeBriefingSchema = z.object({ signature });
+/** The foreman's sign-off; with the phone's key and time when it was signed without signal. */
+export const completeBriefingSchema = z.object({
+  signature,
+  key: deviceKey("Invalid sign-off key").optional(),
+  signedAt: deviceTime.optional(),
+});
 
 export const siteChangeSchema = z.object({
   revisionId: z.uuid(),

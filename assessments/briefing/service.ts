@@ -39,13 +39,37 @@ import {
 import { briefableRevision, getBriefingRecord, getBriefingScript, ownBriefing } from "./queries";
 import { isUuid } from "@/lib/ids";
 import { requireFileType } from "@/lib/files";
+import { ukDateTime } from "@/lib/dates";
 
-export async function startBriefing(actor: Actor | null, input: unknown): Promise<{ briefingId: string }> {
+/** What the phone learns when its start reaches the server. */
+export interface StartedBriefing {
+  briefingId: string;
+  /** The same start was received before (the phone sent it again after losing the answer). */
+  duplicate: boolean;
+  /** Set when the revision had been superseded: the briefing is recorded as such and the adviser told. */
+  superseded: { revisionNumber: number; currentRevisionNumber: number | null } | null;
+}
+
+/**
+ * Starts a briefing. A phone sends its own key and the time it started: the same key again returns the
+ * same briefing. A phone that had no signal may have briefed from a revision superseded meanwhile; that
+ * briefing is recorded, flagged and reported to the adviser, never silently accepted. Without a key (a
+ * plain API call) only the current approved revision can be briefed.
+ */
+export async function startBriefing(actor: Actor | null, input: unknown): Promise<StartedBriefing> {
   authorize(actor, "briefings:run");
   const data = parseOrThrow(startBriefingSchema, input);
-  await briefableRevision(actor, data.revisionId);
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  if (data.key) {
+    const earlier = await briefingByDeviceKey(actor, data.key);
+    if (earlier) return earlier;
+  }
+  const { revision, assessment, job } = await briefableRevision(actor, data.revisionId, {
+    superseded: data.key ? "allow" : "refuse",
+  });
+  const againstSuperseded = revision.status === "superseded";
+  const current = againstSuperseded ? await currentApprovedRevision(revision.assessmentId) : null;
+  const started = await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(briefings)
       .values({
@@ -54,18 +78,127 @@ export async function startBriefing(actor: Actor | null, input: unknown): Promis
         foremanId: actor.id,
         foremanName: actor.name,
         place: data.place,
+        deviceKey: data.key ?? null,
+        ...(data.startedAt ? { startedAt: new Date(data.startedAt) } : {}),
+        againstSuperseded,
       })
+      .onConflictDoNothing({ target: briefings.deviceKey })
       .returning({ id: briefings.id });
+    // The same key arrived twice at once: the other request recorded it.
+    if (!row) return null;
     await recordAudit(tx, {
       organisationId: actor.organisationId,
       actorId: actor.id,
       action: "briefing.started",
       entityType: "revision",
       entityId: data.revisionId,
-      details: { briefingId: row.id, place: data.place },
+      details: {
+        briefingId: row.id,
+        place: data.place,
+        ...(data.startedAt ? { startedOnPhoneAt: data.startedAt } : {}),
+        ...(againstSuperseded ? { againstSuperseded: true, currentRevisionNumber: current?.number ?? null } : {}),
+      },
       auth: actor.auth,
     });
-    return { briefingId: row.id };
+    return row.id;
+  });
+  if (!started) {
+    const earlier = await briefingByDeviceKey(actor, data.key!);
+    if (earlier) return earlier;
+    throw new AppError("conflict", "This briefing could not be recorded: send it again.");
+  }
+  const superseded = againstSuperseded
+    ? { revisionNumber: revision.number, currentRevisionNumber: current?.number ?? null }
+    : null;
+  if (superseded) {
+    await reportSupersededBriefing(actor, {
+      briefingId: started,
+      title: assessment.title,
+      jobName: job.name,
+      place: data.place,
+      startedAt: data.startedAt ? new Date(data.startedAt) : new Date(),
+      revision,
+      current,
+    });
+  }
+  return { briefingId: started, duplicate: false, superseded };
+}
+
+/** A briefing this foreman's phone already sent under that key; another person's key is a conflict. */
+async function briefingByDeviceKey(actor: Actor, key: string): Promise<StartedBriefing | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select({
+      id: briefings.id,
+      foremanId: briefings.foremanId,
+      organisationId: briefings.organisationId,
+      againstSuperseded: briefings.againstSuperseded,
+      revisionNumber: revisions.number,
+      assessmentId: revisions.assessmentId,
+    })
+    .from(briefings)
+    .innerJoin(revisions, eq(revisions.id, briefings.revisionId))
+    .where(eq(briefings.deviceKey, key));
+  if (!row) return null;
+  if (row.organisationId !== actor.organisationId || row.foremanId !== actor.id)
+    throw new AppError("conflict", "This briefing key belongs to another briefing.");
+  const current = row.againstSuperseded ? await currentApprovedRevision(row.assessmentId) : null;
+  return {
+    briefingId: row.id,
+    duplicate: true,
+    superseded: row.againstSuperseded
+      ? { revisionNumber: row.revisionNumber, currentRevisionNumber: current?.number ?? null }
+      : null,
+  };
+}
+
+async function currentApprovedRevision(assessmentId: string) {
+  const db = await getDb();
+  const [row] = await db
+    .select({ id: revisions.id, number: revisions.number, authorId: revisions.authorId })
+    .from(revisions)
+    .where(and(eq(revisions.assessmentId, assessmentId), eq(revisions.status, "approved")));
+  return row ?? null;
+}
+
+/**
+ * Tells the adviser that a gang was briefed from a superseded revision: the author of the current
+ * revision (else of the superseded one) is e-mailed; the briefing record and the audit trail carry it.
+ */
+async function reportSupersededBriefing(
+  actor: Actor,
+  briefing: {
+    briefingId: string;
+    title: string;
+    jobName: string;
+    place: string;
+    startedAt: Date;
+    revision: { id: string; number: number; authorId: string | null };
+    current: { id: string; number: number; authorId: string | null } | null;
+  },
+): Promise<SendOutcome> {
+  const db = await getDb();
+  const authorId = briefing.current?.authorId ?? briefing.revision.authorId;
+  const adviser = authorId ? await db.query.users.findFirst({ where: eq(users.id, authorId) }) : undefined;
+  if (!adviser) return { id: "", status: "failed", error: "The assessment has no author to tell" };
+  const body = renderMail({
+    heading: `Briefed from a superseded revision: ${briefing.title}`,
+    paragraphs: [
+      `Hello ${adviser.name},`,
+      `${actor.name} briefed a gang at ${briefing.place} (${briefing.jobName}) on ${ukDateTime(briefing.startedAt)} ` +
+        `from revision ${briefing.revision.number}, which had been superseded` +
+        (briefing.current ? ` by revision ${briefing.current.number}.` : "."),
+      "The phone had no signal, so it still held the old revision. The briefing is recorded as taken against a " +
+        "superseded revision. Check whether the changes matter to the work and whether the gang must be briefed again.",
+    ],
+    action: { label: "Open the briefing record", url: appUrl(`/briefings/record/${briefing.briefingId}`) },
+  });
+  return sendMail({
+    organisationId: actor.organisationId,
+    kind: "briefing-superseded",
+    to: adviser.email,
+    subject: `Briefed from a superseded revision: ${briefing.title}`,
+    ...body,
   });
 }
 
@@ -129,11 +262,19 @@ export async function recordAttendee(
 }
 
 /** The foreman signs last; the briefing is then closed. */
-export async function completeBriefing(actor: Actor | null, briefingId: string, input: unknown): Promise<void> {
+export async function completeBriefing(
+  actor: Actor | null,
+  briefingId: string,
+  input: unknown,
+): Promise<{ duplicate: boolean }> {
   authorize(actor, "briefings:run");
   const briefing = await ownBriefing(actor, briefingId);
   const data = await parseOrThrowAsync(completeBriefingSchema, input);
-  if (briefing.completedAt) throw new AppError("conflict", "This briefing is already signed off.");
+  if (briefing.completedAt) {
+    // The phone sent its sign-off again after losing the answer: the same key is the same sign-off.
+    if (data.key && briefing.completionKey === data.key) return { duplicate: true };
+    throw new AppError("conflict", "This briefing is already signed off.");
+  }
   const db = await getDb();
   const attendees = await db
     .select({ id: briefingAttendees.id })
@@ -147,11 +288,40 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
   // signed and recorded for /verify (earlier issues stay verifiable). Key fetched before the transaction.
   const org = await db.query.organisations.findFirst({ where: eq(organisations.id, actor.organisationId) });
   const key = await getSigningKey(actor.organisationId, org!.name);
+  try {
+    await signOff(actor, briefing, attendees.length, data, key);
+  } catch (err) {
+    // The same sign-off sent twice at once: the other request recorded it.
+    if (err instanceof AppError && err.code === "conflict" && data.key) {
+      const again = await ownBriefing(actor, briefingId);
+      if (again.completionKey === data.key) return { duplicate: true };
+    }
+    throw err;
+  }
+  return { duplicate: false };
+}
+
+async function signOff(
+  actor: Actor,
+  briefing: typeof briefings.$inferSelect,
+  attendeeCount: number,
+  data: { signature: Uint8Array; key?: string; signedAt?: string },
+  key: Awaited<ReturnType<typeof getSigningKey>>,
+) {
+  const briefingId = briefing.id;
+  const db = await getDb();
   await db.transaction(async (tx) => {
     // Claim the sign-off: of two at once, only one updates the row and re-issues the pack.
     const [claimed] = await tx
       .update(briefings)
-      .set({ completedAt: new Date(), foremanSignature: data.signature })
+      .set({
+        // Signed on the phone without signal: the time it was signed, never before the briefing began.
+        completedAt: data.signedAt
+          ? new Date(Math.max(Date.parse(data.signedAt), briefing.startedAt.getTime()))
+          : new Date(),
+        foremanSignature: data.signature,
+        completionKey: data.key ?? null,
+      })
       .where(and(eq(briefings.id, briefingId), isNull(briefings.completedAt)))
       .returning({ id: briefings.id });
     if (!claimed) throw new AppError("conflict", "This briefing is already signed off.");
@@ -162,7 +332,7 @@ export async function completeBriefing(actor: Actor | null, briefingId: string, 
       action: "briefing.completed",
       entityType: "revision",
       entityId: briefing.revisionId,
-      details: { briefingId, attendees: attendees.length },
+      details: { briefingId, attendees: attendeeCount },
       auth: actor.auth,
     });
     const pdf = await renderPack(tx, briefing.revisionId, key);
