@@ -528,10 +528,7 @@ export const briefings = pgTable(
     /** Taken against a revision that had been superseded (the phone was offline): reported to the adviser. */
     againstSuperseded: boolean("against_superseded").notNull().default(false),
   },
-  (t) => [
-    index("briefings_revision_idx").on(t.revisionId),
-    uniqueIndex("briefings_device_key_unique").on(t.deviceKey),
-  ],
+  (t) => [index("briefings_revision_idx").on(t.revisionId), uniqueIndex("briefings_device_key_unique").on(t.deviceKey)],
 );
 
 /** An operative's sign-on, sent once even when the phone retries: the device's key is unique. */

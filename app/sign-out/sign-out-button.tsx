@@ -1,12 +1,23 @@
 "use client";
 
 import { signOut } from "next-auth/react";
-import { useState } from "react";
+import { useEffect, useState } from "react";
+import { forgetCopies, waitingOnPhone } from "@/app/(app)/briefings/device/copies";
 import { FormMessage, PrimaryButton, SecondaryButton } from "@/app/_components/form";
 import { signOutEverywhereAction } from "./actions";
 
+/** Signing out also removes the briefings kept on this phone; records waiting to be sent stay. */
+async function leave() {
+  await forgetCopies().catch(() => undefined);
+  await signOut({ callbackUrl: "/sign-in" });
+}
+
 export function SignOutButton() {
   const [failure, setFailure] = useState<string | null>(null);
+  const [waiting, setWaiting] = useState(0);
+  useEffect(() => {
+    waitingOnPhone().then(setWaiting, () => undefined);
+  }, []);
   const everywhere = async () => {
     setFailure(null);
     const result = await signOutEverywhereAction();
@@ -14,11 +25,17 @@ export function SignOutButton() {
       setFailure(result.message);
       return;
     }
-    await signOut({ callbackUrl: "/sign-in" });
+    await leave();
   };
   return (
     <div className="space-y-3">
-      <PrimaryButton type="button" className="w-full py-3 text-lg" onClick={() => signOut({ callbackUrl: "/sign-in" })}>
+      {waiting > 0 && (
+        <FormMessage tone="error">
+          {waiting} briefing record{waiting === 1 ? " is" : "s are"} still waiting on this phone to be sent. They stay
+          on the phone and are sent when the same person signs in again with signal.
+        </FormMessage>
+      )}
+      <PrimaryButton type="button" className="w-full py-3 text-lg" onClick={leave}>
         Sign out
       </PrimaryButton>
       <SecondaryButton type="button" className="w-full py-3" onClick={everywhere}>

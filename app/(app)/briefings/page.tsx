@@ -7,6 +7,7 @@ import type { Band } from "@/assessments/rules/types";
 import { requirePermission } from "@/lib/auth/guard";
 import { EmailSheetButton } from "./email-sheet-button";
 import { ukDate, ukDateTime } from "@/lib/dates";
+import { PhonePanel } from "./device/phone-panel";
 
 export const metadata: Metadata = { title: "Briefings" };
 
@@ -16,6 +17,7 @@ export default async function BriefingsPage() {
   return (
     <div className="space-y-5">
       <h1 className="text-2xl font-bold">Your jobs</h1>
+      <PhonePanel userId={actor.id} />
       {jobs.length === 0 && <EmptyState>You are not assigned to a job yet. Ask your safety adviser.</EmptyState>}
       {jobs.map(({ job, revisions }) => (
         <section key={job.id} className="space-y-3 rounded-lg border border-rule bg-white p-4" aria-label={job.name}>

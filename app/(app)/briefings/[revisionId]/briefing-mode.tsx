@@ -1,15 +1,19 @@
 "use client";
 
 import Link from "next/link";
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useRef, useState } from "react";
 import { BandChip } from "@/app/_components/results/band";
 import { SignatureField, type SignatureFieldHandle } from "@/app/_components/signature-field";
 import type { BriefingScript } from "@/assessments/briefing/instructions";
 import { LINE_CAUTION } from "@/assessments/method-statement/lineside";
-import { flush, loadQueue, newKey, saveQueue, type PendingSignOn } from "./sign-on-queue";
-import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
+import { ukDateTime } from "@/lib/dates";
+import { keepOnPhone, newKey, startOnPhone, type OutgoingRecord, type PhoneBriefing } from "../device/store";
+import { sendWaiting } from "../device/send";
+import { usePhone } from "../device/use-phone";
+import { RecordState, SupersededNotice } from "../device/record-state";
 
 interface Props {
+  userId: string;
   revisionId: string;
   title: string;
   revisionNumber: number;
@@ -33,7 +37,25 @@ type Screen =
 
 const big = "min-h-14 rounded-lg px-5 py-3 text-xl font-bold";
 
-export function BriefingMode({ revisionId, title, revisionNumber, job, script, siteChanges, foremanName }: Props) {
+/** An unfinished briefing can be carried on for this long after it started (Heftwise policy: one shift). */
+const CARRY_ON_HOURS = 12;
+
+/**
+ * The briefing, screen by screen, from the copy on this phone. Everything the foreman records waits on
+ * the phone and is sent in order when there is signal (../device/send.ts): with signal that is at once,
+ * without it when the signal returns. The screen always says what waits, what was sent and what was
+ * refused.
+ */
+export function BriefingMode({
+  userId,
+  revisionId,
+  title,
+  revisionNumber,
+  job,
+  script,
+  siteChanges,
+  foremanName,
+}: Props) {
   const screens: Screen[] = [
     ...(script.line ? [{ kind: "line" } as Screen] : []),
     { kind: "sequence" },
@@ -44,61 +66,56 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
     { kind: "sign-on" },
     { kind: "sign-off" },
   ];
+  const phone = usePhone(userId);
   const [position, setPosition] = useState(-1);
-  const [briefingId, setBriefingId] = useState<string | null>(null);
+  const [briefingKey, setBriefingKey] = useState<string | null>(null);
   const [place, setPlace] = useState(job.accessPoint ?? "");
   const [problem, setProblem] = useState<string | null>(null);
-  const [queue, setQueue] = useState<PendingSignOn[]>([]);
-  const [online, setOnline] = useState(true);
-  const [done, setDone] = useState(false);
-  const flushing = useRef(false);
-  const screen: Screen = done ? { kind: "done" } : position < 0 ? { kind: "start" } : screens[position];
+  const briefing = phone.briefings.find((b) => b.key === briefingKey) ?? null;
+  const records = phone.records.filter((r) => r.briefingKey === briefingKey);
+  const signOns = records.filter((r) => r.kind === "sign-on");
+  const signOff = records.find((r) => r.kind === "sign-off");
+  const screen: Screen = signOff ? { kind: "done" } : position < 0 || !briefing ? { kind: "start" } : screens[position];
 
-  const send = useCallback(async () => {
-    if (!briefingId || flushing.current) return;
-    flushing.current = true;
-    try {
-      setQueue(await flush(briefingId, loadQueue(briefingId)));
-    } finally {
-      flushing.current = false;
-    }
-  }, [briefingId]);
-
-  useEffect(() => {
-    const update = () => {
-      setOnline(navigator.onLine);
-      if (navigator.onLine) void send();
-    };
-    window.addEventListener("online", update);
-    window.addEventListener("offline", update);
-    const timer = setInterval(() => void send(), 5000);
-    return () => {
-      window.removeEventListener("online", update);
-      window.removeEventListener("offline", update);
-      clearInterval(timer);
-    };
-  }, [send]);
+  const unfinished = phone.briefings
+    .filter(
+      (b) =>
+        b.revisionId === revisionId &&
+        phone.readAt - Date.parse(b.startedAt) < CARRY_ON_HOURS * 3_600_000 &&
+        !phone.records.some(
+          (r) => r.briefingKey === b.key && (r.kind === "sign-off" || (r.kind === "start" && r.state === "refused")),
+        ),
+    )
+    .sort((a, b) => b.startedAt.localeCompare(a.startedAt));
 
   const start = async () => {
+    if (place.trim().length < 2) return setProblem("Say where the briefing is held");
     setProblem(null);
-    let body: { briefingId: string };
-    try {
-      body = await apiRequest("/api/v1/briefings", { json: { revisionId, place } });
-    } catch (err) {
-      setProblem(
-        err instanceof ApiError && err.offline
-          ? "No connection: the briefing needs signal to start. Sign-ons later can wait for signal."
-          : problemOf(err),
-      );
-      return;
-    }
-    setBriefingId(body.briefingId);
-    setQueue(loadQueue(body.briefingId));
+    const key = newKey();
+    await startOnPhone({
+      key,
+      userId,
+      revisionId,
+      revisionNumber,
+      title,
+      jobName: job.name,
+      place: place.trim(),
+      startedAt: new Date().toISOString(),
+    });
+    setBriefingKey(key);
     setPosition(0);
+    void sendWaiting(userId);
   };
 
-  const waiting = queue.filter((q) => q.state === "waiting").length;
-  const sent = queue.filter((q) => q.state === "sent").length;
+  const carryOn = (b: PhoneBriefing) => {
+    setBriefingKey(b.key);
+    const signedOn = phone.records.some((r) => r.briefingKey === b.key && r.kind === "sign-on");
+    setPosition(signedOn ? screens.findIndex((s) => s.kind === "sign-on") : 0);
+  };
+
+  const replaced = phone.copies?.replaced.find((r) => r.revisionId === revisionId);
+  const noLongerCurrent =
+    phone.copies?.updatedAt != null && !phone.copies.revisions.some((r) => r.revisionId === revisionId);
 
   return (
     <div className="mx-auto max-w-2xl space-y-5 text-lg" data-testid="briefing-mode">
@@ -107,16 +124,26 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
           {job.name} · revision {revisionNumber}
         </p>
         <h1 className="text-2xl font-bold">{title}</h1>
-        {briefingId && (
-          <p
-            role="status"
-            className={`rounded px-3 py-2 text-base font-bold ${waiting ? "bg-band-watch text-white" : "bg-teal-50"}`}
-            data-testid="sign-on-status"
-          >
-            {online ? "Online" : "No signal"} · {sent} signed on{waiting ? ` · ${waiting} waiting to send` : ""}
-          </p>
-        )}
+        <CopyLine online={phone.online} updatedAt={phone.copies?.updatedAt ?? null} />
+        {briefing && <RecordState records={records} online={phone.online} />}
       </header>
+
+      {noLongerCurrent && screen.kind !== "done" && (
+        <section role="alert" className="rounded-lg border-4 border-band-act bg-white p-4" data-testid="newer-revision">
+          <h2 className="text-xl font-bold text-band-act">
+            {replaced?.newer ? `A newer revision exists: revision ${replaced.newer}` : "No longer approved"}
+          </h2>
+          <p className="text-base">
+            This copy is not the approved revision any more. Do not brief from it: open{" "}
+            <Link href="/briefings" className="font-bold underline">
+              Briefings
+            </Link>{" "}
+            for the current one.
+          </p>
+        </section>
+      )}
+
+      {briefing?.superseded && <SupersededNotice briefing={briefing} />}
 
       {siteChanges.length > 0 && screen.kind !== "done" && (
         <section role="alert" className="rounded-lg border-4 border-band-act bg-white p-4">
@@ -136,11 +163,28 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
         {screen.kind === "start" && (
           <div className="space-y-4">
             <h2 className="text-2xl font-bold">Start the briefing</h2>
+            {unfinished.length > 0 && (
+              <div className="space-y-2 rounded border-2 border-band-watch p-3" data-testid="unfinished">
+                <p className="font-bold">Not yet signed off on this phone:</p>
+                {unfinished.map((b) => (
+                  <button
+                    key={b.key}
+                    type="button"
+                    onClick={() => carryOn(b)}
+                    className="block w-full rounded border-2 border-rule px-3 py-2 text-left"
+                  >
+                    Carry on: {b.place}, started {ukDateTime(new Date(b.startedAt))}
+                  </button>
+                ))}
+              </div>
+            )}
             <label className="block font-bold">
               Where are you briefing?
               <input
                 value={place}
                 onChange={(e) => setPlace(e.target.value)}
+                maxLength={200}
+                aria-invalid={problem ? true : undefined}
                 className="mt-2 block w-full rounded border-2 border-rule px-3 py-3 text-xl font-normal"
               />
             </label>
@@ -149,9 +193,20 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
                 {problem}
               </p>
             )}
-            <button type="button" onClick={start} className={`${big} w-full bg-accent text-white`}>
+            <button
+              type="button"
+              onClick={start}
+              disabled={!phone.loaded}
+              className={`${big} w-full bg-accent text-white`}
+            >
               Start
             </button>
+            {!phone.online && (
+              <p className="text-base text-muted">
+                No signal: you can brief, take sign-ons and sign off. They wait on this phone and are sent, once and in
+                order, when the signal returns and Heftwise is open.
+              </p>
+            )}
           </div>
         )}
         {screen.kind === "line" && script.line && <LineScreen line={script.line} />}
@@ -215,28 +270,14 @@ export function BriefingMode({ revisionId, title, revisionNumber, job, script, s
             )}
           </div>
         )}
-        {screen.kind === "sign-on" && briefingId && (
-          <SignOn briefingId={briefingId} queue={queue} setQueue={setQueue} send={send} />
+        {screen.kind === "sign-on" && briefing && (
+          <SignOn userId={userId} briefingKey={briefing.key} signOns={signOns} />
         )}
-        {screen.kind === "sign-off" && briefingId && (
-          <SignOff
-            briefingId={briefingId}
-            foremanName={foremanName}
-            waiting={waiting}
-            sent={sent}
-            onDone={() => setDone(true)}
-          />
+        {screen.kind === "sign-off" && briefing && (
+          <SignOff userId={userId} briefingKey={briefing.key} foremanName={foremanName} signOns={signOns} />
         )}
-        {screen.kind === "done" && briefingId && (
-          <div className="space-y-3">
-            <h2 className="text-2xl font-bold">Briefing recorded</h2>
-            <p>
-              {sent} operative{sent === 1 ? "" : "s"} signed on, and you signed it off.
-            </p>
-            <Link href={`/briefings/record/${briefingId}`} className={`${big} block bg-accent text-center text-white`}>
-              See the briefing record
-            </Link>
-          </div>
+        {screen.kind === "done" && briefing && signOff && (
+          <Done briefing={briefing} signOns={signOns} signOff={signOff} />
         )}
       </main>
 
@@ -368,22 +409,12 @@ function LoadScreen({ load, number, of }: { load: BriefingScript["loads"][number
   );
 }
 
-function SignOn({
-  briefingId,
-  queue,
-  setQueue,
-  send,
-}: {
-  briefingId: string;
-  queue: PendingSignOn[];
-  setQueue: (q: PendingSignOn[]) => void;
-  send: () => Promise<void>;
-}) {
+function SignOn({ userId, briefingKey, signOns }: { userId: string; briefingKey: string; signOns: OutgoingRecord[] }) {
   const signature = useRef<SignatureFieldHandle>(null);
   const [form, setForm] = useState({ name: "", employer: "", cardNumber: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
 
-  const signOn = () => {
+  const signOn = async () => {
     const image = signature.current?.toDataUrl() ?? null;
     const found: Record<string, string> = {};
     if (form.name.trim().length < 2) found.name = "Enter your name";
@@ -392,23 +423,26 @@ function SignOn({
     if (!image) found.signature = "Sign in the box";
     setErrors(found);
     if (Object.keys(found).length) return;
-    const next = [
-      ...loadQueue(briefingId),
-      { key: newKey(), ...form, signature: image!, signedAt: new Date().toISOString(), state: "waiting" as const },
-    ];
-    saveQueue(briefingId, next);
-    setQueue(next);
+    const person = { name: form.name.trim(), employer: form.employer.trim(), cardNumber: form.cardNumber.trim() };
+    await keepOnPhone({
+      userId,
+      briefingKey,
+      kind: "sign-on",
+      label: `${person.name} (${person.employer})`,
+      body: { key: newKey(), ...person, signature: image!, signedAt: new Date().toISOString() },
+    });
     setForm({ name: "", employer: "", cardNumber: "" });
     signature.current?.clear();
-    void send();
+    void sendWaiting(userId);
   };
 
-  const field = (key: keyof typeof form, label: string) => (
+  const field = (key: keyof typeof form, label: string, max: number) => (
     <label className="block font-bold">
       {label}
       <input
         value={form[key]}
         onChange={(e) => setForm({ ...form, [key]: e.target.value })}
+        maxLength={max}
         aria-invalid={errors[key] ? true : undefined}
         className={`mt-1 block w-full rounded border-2 px-3 py-3 text-xl font-normal ${errors[key] ? "border-danger" : "border-rule"}`}
       />
@@ -424,18 +458,17 @@ function SignOn({
     <div className="space-y-4">
       <h2 className="text-2xl font-bold">Sign on</h2>
       <p className="text-base">Each person signs to confirm they were briefed and understood. Hand the phone over.</p>
-      {field("name", "Your name")}
-      {field("employer", "Employer")}
-      {field("cardNumber", "Competence card number")}
+      {field("name", "Your name", 120)}
+      {field("employer", "Employer", 120)}
+      {field("cardNumber", "Competence card number", 40)}
       <SignatureField ref={signature} label="Sign with your finger" error={errors.signature} />
       <button type="button" onClick={signOn} className={`${big} w-full bg-accent text-white`}>
         Sign on
       </button>
       <ul className="space-y-1 text-base" data-testid="sign-on-list">
-        {queue.map((q) => (
-          <li key={q.key}>
-            {q.name} ({q.employer}) —{" "}
-            {q.state === "sent" ? "recorded" : q.state === "waiting" ? "waiting for signal" : `refused: ${q.problem}`}
+        {signOns.map((r) => (
+          <li key={r.seq}>
+            {r.label} — {recordWord(r)}
           </li>
         ))}
       </ul>
@@ -443,55 +476,119 @@ function SignOn({
   );
 }
 
+const recordWord = (r: OutgoingRecord) =>
+  r.state === "sent"
+    ? "recorded"
+    : r.state === "refused"
+      ? `refused: ${r.problem}`
+      : r.problem
+        ? r.problem.toLowerCase()
+        : "waiting for signal";
+
 function SignOff({
-  briefingId,
+  userId,
+  briefingKey,
   foremanName,
-  waiting,
-  sent,
-  onDone,
+  signOns,
 }: {
-  briefingId: string;
+  userId: string;
+  briefingKey: string;
   foremanName: string;
-  waiting: number;
-  sent: number;
-  onDone: () => void;
+  signOns: OutgoingRecord[];
 }) {
   const signature = useRef<SignatureFieldHandle>(null);
   const [problem, setProblem] = useState<string | null>(null);
+  const taken = signOns.filter((r) => r.state !== "refused").length;
+  const waiting = signOns.filter((r) => r.state === "waiting").length;
   const finish = async () => {
     const image = signature.current?.toDataUrl();
     if (!image) return setProblem("Sign in the box");
-    try {
-      await apiRequest(`/api/v1/briefings/${briefingId}/complete`, { json: { signature: image } });
-      onDone();
-    } catch (err) {
-      setProblem(
-        err instanceof ApiError && err.offline ? "No signal: try again when you have signal." : problemOf(err),
-      );
-    }
+    await keepOnPhone({
+      userId,
+      briefingKey,
+      kind: "sign-off",
+      label: `Signed off by ${foremanName}`,
+      body: { key: newKey(), signature: image, signedAt: new Date().toISOString() },
+    });
+    void sendWaiting(userId);
   };
   return (
     <div className="space-y-4">
       <h2 className="text-2xl font-bold">Foreman signs last</h2>
-      {waiting > 0 ? (
+      {taken === 0 ? (
         <p role="alert" className="font-bold text-band-act">
-          {waiting} sign-on{waiting === 1 ? " is" : "s are"} still waiting for signal. They are kept on this phone and
-          sent when the signal returns; sign off after that.
+          Nobody has signed on yet: at least one operative signs on before you sign off.
         </p>
       ) : (
         <p>
-          {sent} operative{sent === 1 ? "" : "s"} signed on. {foremanName}, sign to close the briefing.
+          {taken} operative{taken === 1 ? "" : "s"} signed on
+          {waiting > 0 ? ` (${waiting} still waiting for signal: they are sent first, then your sign-off)` : ""}.{" "}
+          {foremanName}, sign to close the briefing.
         </p>
       )}
       <SignatureField ref={signature} label="Foreman's signature" error={problem ?? undefined} />
       <button
         type="button"
-        disabled={waiting > 0 || sent === 0}
+        disabled={taken === 0}
         onClick={finish}
         className={`${big} w-full bg-accent text-white disabled:opacity-40`}
       >
         Sign off the briefing
       </button>
     </div>
+  );
+}
+
+function Done({
+  briefing,
+  signOns,
+  signOff,
+}: {
+  briefing: PhoneBriefing;
+  signOns: OutgoingRecord[];
+  signOff: OutgoingRecord;
+}) {
+  const taken = signOns.filter((r) => r.state !== "refused").length;
+  const allSent = signOff.state === "sent" && signOns.every((r) => r.state !== "waiting");
+  return (
+    <div className="space-y-3" data-testid="briefing-done">
+      <h2 className="text-2xl font-bold">{allSent ? "Briefing recorded" : "Briefing signed off on this phone"}</h2>
+      <p>
+        {taken} operative{taken === 1 ? "" : "s"} signed on, and you signed it off.
+      </p>
+      {signOff.state === "refused" && (
+        <p role="alert" className="font-bold text-danger">
+          The sign-off was refused: {signOff.problem}
+        </p>
+      )}
+      {!allSent && signOff.state !== "refused" && (
+        <p className="font-bold text-band-watch">
+          Waiting on this phone until there is signal. Keep Heftwise open when you are back in signal; nothing is lost
+          if the phone is switched off.
+        </p>
+      )}
+      {briefing.serverId && allSent && (
+        <Link
+          href={`/briefings/record/${briefing.serverId}`}
+          className={`${big} block bg-accent text-center text-white`}
+        >
+          See the briefing record
+        </Link>
+      )}
+      <Link href="/briefings" className={`${big} block border-2 border-rule bg-white text-center`}>
+        Back to your briefings
+      </Link>
+    </div>
+  );
+}
+
+/** Whether this screen comes from the network or from the copy kept on the phone, and how old that is. */
+function CopyLine({ online, updatedAt }: { online: boolean; updatedAt: string | null }) {
+  if (online) return null;
+  return (
+    <p className="rounded bg-frame px-3 py-2 text-base font-bold text-frame-ink" data-testid="copy-line">
+      No signal · the copy kept on this phone
+      {updatedAt ? `, brought up to date ${ukDateTime(new Date(updatedAt))}` : ""}
+    </p>
   );
 }

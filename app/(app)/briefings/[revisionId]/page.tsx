@@ -12,6 +12,7 @@ export default async function BriefingPage({ params }: { params: Promise<{ revis
   const data = await foundOr404(getBriefingScript(actor, revisionId));
   return (
     <BriefingMode
+      userId={actor.id}
       revisionId={revisionId}
       title={data.title}
       job={data.job}
