@@ -67,7 +67,7 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await expect(page.getByText("Sign in the box")).toBeVisible();
 
   await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
-  await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on");
+  await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on · all recorded");
 
   // The signal drops: the next sign-on waits on the phone.
   await context.setOffline(true);
@@ -75,28 +75,35 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await expect(page.getByTestId("sign-on-list")).toContainText(
     "Aled Menhenick (Tarnbrook Plant Hire) — waiting for signal",
   );
-  await expect(page.getByTestId("sign-on-status")).toContainText("1 waiting to send");
+  await expect(page.getByTestId("sign-on-status")).toContainText("No signal · 2 signed on · 1 waiting to send");
   await page.getByRole("button", { name: "Next" }).click();
-  await expect(page.getByText(/still waiting for signal/)).toBeVisible();
-  await expect(page.getByRole("button", { name: "Sign off the briefing" })).toBeDisabled();
+  await expect(page.getByText(/1 still waiting for signal: they are sent first, then your sign-off/)).toBeVisible();
   await page.getByRole("button", { name: "Back" }).click();
 
   // Signal back: sent, once.
   await context.setOffline(false);
   await expect(page.getByTestId("sign-on-list")).toContainText("Aled Menhenick (Tarnbrook Plant Hire) — recorded");
-  await expect(page.getByTestId("sign-on-status")).toContainText("2 signed on");
+  await expect(page.getByTestId("sign-on-status")).toContainText("Online · 2 signed on · all recorded");
   await signOn(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
-  await expect(page.getByTestId("sign-on-status")).toContainText("3 signed on");
+  await expect(page.getByTestId("sign-on-status")).toContainText("3 signed on · all recorded");
 
   // A phone retrying an old sign-on (same key) records nothing new.
   const replay = await page.evaluate(async () => {
-    const key = Object.keys(localStorage).find((k) => k.startsWith("heftwise-sign-ons-"))!;
-    const briefingId = key.replace("heftwise-sign-ons-", "");
-    const first = JSON.parse(localStorage.getItem(key)!)[0];
-    const res = await fetch(`/api/v1/briefings/${briefingId}/attendees`, {
+    const read = <T>(store: string) =>
+      new Promise<T[]>((resolve, reject) => {
+        const open = indexedDB.open("heftwise-phone");
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const all = open.result.transaction(store).objectStore(store).getAll();
+          all.onsuccess = () => resolve(all.result as T[]);
+        };
+      });
+    const [briefing] = await read<{ serverId: string }>("briefings");
+    const first = (await read<{ kind: string; body: unknown }>("outbox")).find((r) => r.kind === "sign-on")!;
+    const res = await fetch(`/api/v1/briefings/${briefing.serverId}/attendees`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify(first),
+      body: JSON.stringify(first.body),
     });
     return { status: res.status, body: await res.json() };
   });

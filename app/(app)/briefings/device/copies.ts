@@ -7,7 +7,8 @@
 import type { BriefableRevisions } from "@/assessments/briefing/queries";
 import { apiRequest, problemOf } from "@/lib/api-client";
 import { DEVICE_COPIES_CACHE } from "@/lib/device-copies";
-import { announceChange, phoneDb, type CopiesState } from "./store";
+import { ApiError } from "@/lib/api-client";
+import { announceChange, noteContact, phoneDb, type CopiesState } from "./store";
 
 /** Without a secure connection (plain http on a site network) a browser keeps no copies. */
 export const canKeepCopies = () => typeof window !== "undefined" && "caches" in window && window.isSecureContext;
@@ -31,7 +32,9 @@ async function update(userId: string, force: boolean): Promise<CopiesState | und
   let list: BriefableRevisions;
   try {
     list = await apiRequest<BriefableRevisions>("/api/v1/briefings/briefable");
+    noteContact(true);
   } catch (err) {
+    noteContact(!(err instanceof ApiError && err.offline));
     const state = { ...emptyState(userId), ...previous, problem: problemOf(err) };
     await db.put("copies", state);
     announceChange();

@@ -4,8 +4,7 @@ import type { OutgoingRecord, PhoneBriefing } from "./store";
 
 /** One line for a briefing's records: signal, how many signed on, what waits, what was refused. */
 export function RecordState({ records, online }: { records: OutgoingRecord[]; online: boolean }) {
-  const signOns = records.filter((r) => r.kind === "sign-on");
-  const sent = signOns.filter((r) => r.state === "sent").length;
+  const signedOn = records.filter((r) => r.kind === "sign-on" && r.state !== "refused").length;
   const waiting = records.filter((r) => r.state === "waiting");
   const refused = records.filter((r) => r.state === "refused").length;
   const why = waiting.find((r) => r.problem)?.problem;
@@ -15,8 +14,8 @@ export function RecordState({ records, online }: { records: OutgoingRecord[]; on
       className={`rounded px-3 py-2 text-base font-bold ${refused ? "bg-danger text-white" : waiting.length ? "bg-band-watch text-white" : "bg-teal-50"}`}
       data-testid="sign-on-status"
     >
-      {online ? "Online" : "No signal"} · {sent} signed on
-      {waiting.length ? ` · ${waiting.length} waiting to send` : ""}
+      {online ? "Online" : "No signal"} · {signedOn} signed on
+      {waiting.length ? ` · ${waiting.length} waiting to send` : signedOn ? " · all recorded" : ""}
       {refused ? ` · ${refused} refused` : ""}
       {why ? ` · ${why}` : ""}
     </p>

@@ -7,7 +7,7 @@
  */
 import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
 import type { StartedBriefing } from "@/assessments/briefing/service";
-import { announceChange, phoneDb, type OutgoingRecord, type PhoneBriefing } from "./store";
+import { announceChange, noteContact, phoneDb, type OutgoingRecord, type PhoneBriefing } from "./store";
 
 let running: Promise<void> | null = null;
 
@@ -45,8 +45,10 @@ async function run(userId: string) {
     }
     try {
       await send(record, briefing);
+      noteContact(true);
       await settle(record, { state: "sent", problem: undefined, sentAt: new Date().toISOString() });
     } catch (err) {
+      noteContact(!(err instanceof ApiError && err.offline));
       if (err instanceof ApiError && err.status === 401) {
         await settle(record, { state: "waiting", problem: SIGNED_OUT });
         break;

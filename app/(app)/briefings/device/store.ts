@@ -91,6 +91,31 @@ export function onChange(listener: () => void): () => void {
   };
 }
 
+/**
+ * Whether Heftwise was reachable at the last attempt (null: not tried yet). The browser's own online
+ * flag only says a network is joined; at an access point a phone often has one without internet.
+ */
+let reachable: boolean | null = null;
+
+export const lastContact = () => reachable;
+
+export function noteContact(ok: boolean) {
+  if (reachable === ok) return;
+  reachable = ok;
+  announceChange();
+}
+
+/** Asks the server whether it can be reached, cheaply. */
+export async function probe(): Promise<boolean> {
+  try {
+    const response = await fetch("/api/health", { cache: "no-store" });
+    noteContact(response.ok);
+  } catch {
+    noteContact(false);
+  }
+  return reachable === true;
+}
+
 /** Starts a briefing on the phone: it exists at once, and its start waits to be sent. */
 export async function startOnPhone(briefing: PhoneBriefing): Promise<void> {
   const db = await phoneDb();

@@ -6,7 +6,9 @@ import { sendWaiting } from "./send";
 import {
   briefingsOf,
   copiesOf,
+  lastContact,
   onChange,
+  probe,
   recordsOf,
   type CopiesState,
   type OutgoingRecord,
@@ -22,6 +24,9 @@ export interface PhoneState {
   /** When this state was read (ms): "now" for anything shown from it. */
   readAt: number;
 }
+
+/** Signal as far as the phone can tell: a network joined, and Heftwise answering at the last try. */
+const online = () => navigator.onLine && lastContact() !== false;
 
 /** How often waiting records are tried again while a screen is open (Heftwise policy). */
 const RETRY_MS = 5_000;
@@ -49,19 +54,19 @@ export function usePhone(userId: string): PhoneState {
         recordsOf(userId),
         copiesOf(userId),
       ]);
-      if (alive) setState({ loaded: true, online: navigator.onLine, briefings, records, copies, readAt: Date.now() });
+      if (alive) setState({ loaded: true, online: online(), briefings, records, copies, readAt: Date.now() });
     };
-    const work = () => {
-      if (!navigator.onLine) return;
+    const work = async () => {
+      if (!navigator.onLine || !(await probe())) return;
       void sendWaiting(userId);
       void bringCopiesUpToDate(userId);
     };
     const connectivity = () => {
-      setState((s) => ({ ...s, online: navigator.onLine }));
-      work();
+      setState((s) => ({ ...s, online: online() }));
+      void work();
     };
     void read();
-    work();
+    void work();
     const stop = onChange(() => void read());
     window.addEventListener("online", connectivity);
     window.addEventListener("offline", connectivity);

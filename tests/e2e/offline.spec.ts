@@ -1,0 +1,150 @@
+import { expect, test, type BrowserContext, type Page, type Route } from "@playwright/test";
+import { signIn } from "./helpers";
+
+// A foreman's phone: the briefing must work at an access point without signal, after one visit with it.
+test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, serviceWorkers: "allow" });
+
+/** Airplane mode: the page and the service worker both lose the network. */
+const noNetwork = (route: Route) => route.abort("internetdisconnected");
+async function airplane(context: BrowserContext, on: boolean) {
+  if (on) {
+    await context.setOffline(true);
+    await context.route("**/*", noNetwork);
+  } else {
+    await context.unroute("**/*", noNetwork);
+    await context.setOffline(false);
+  }
+}
+
+async function sign(page: Page) {
+  const pad = page.getByTestId("signature-pad").last();
+  await pad.scrollIntoViewIfNeeded();
+  const box = (await pad.boundingBox())!;
+  await page.mouse.move(box.x + 15, box.y + box.height / 2);
+  await page.mouse.down();
+  for (let i = 1; i <= 12; i++)
+    await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.cos(i) * 20, { steps: 2 });
+  await page.mouse.up();
+}
+
+async function signOn(page: Page, name: string, employer: string, card: string) {
+  await page.getByLabel("Your name").fill(name);
+  await page.getByLabel("Employer").fill(employer);
+  await page.getByLabel("Competence card number").fill(card);
+  await sign(page);
+  await page.getByRole("button", { name: "Sign on" }).click();
+  await expect(page.getByTestId("sign-on-list")).toContainText(`${name} (${employer})`);
+}
+
+const packHash = async (page: Page, revisionId: string) =>
+  page.evaluate(async (id) => {
+    const bytes = await (await fetch(`/api/v1/revisions/${id}/pack`, { cache: "no-store" })).arrayBuffer();
+    return Array.from(new Uint8Array(await crypto.subtle.digest("SHA-256", bytes)), (b) =>
+      b.toString(16).padStart(2, "0"),
+    ).join("");
+  }, revisionId);
+
+test("installable, and a briefing taken in airplane mode is recorded once when the signal returns", async ({
+  page,
+  context,
+}) => {
+  await signIn(page, "foreman@brackenfold.example");
+  await page.goto("/briefings");
+
+  // Install prerequisites: a manifest with Heftwise's name and icons, and a registered service worker.
+  const manifestHref = await page.locator('link[rel="manifest"]').getAttribute("href");
+  const manifest = await (await page.request.get(manifestHref!)).json();
+  expect(manifest.name).toBe("Heftwise");
+  expect(manifest.display).toBe("standalone");
+  expect(manifest.icons.map((i: { sizes: string }) => i.sizes)).toEqual(expect.arrayContaining(["192x192", "512x512"]));
+  for (const icon of manifest.icons) expect((await page.request.get(icon.src)).status()).toBe(200);
+  const scope = await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
+  expect(new URL(scope).pathname).toBe("/");
+  await expect(page.getByTestId("copies-state")).toContainText("kept for use without signal");
+
+  const revisionId = (await page.getByRole("link", { name: "Brief the gang" }).first().getAttribute("href"))!.split(
+    "/",
+  )[2];
+  const packBefore = await packHash(page, revisionId);
+
+  // Airplane mode, and the app opened again from scratch.
+  await airplane(context, true);
+  expect(
+    await page.evaluate(() =>
+      fetch("/api/health").then(
+        () => "reached",
+        () => "no network",
+      ),
+    ),
+  ).toBe("no network");
+  await page.reload();
+  await expect(page.getByRole("heading", { name: "Your jobs" })).toBeVisible();
+  await expect(page.getByTestId("copies-state")).toContainText("No signal");
+  await page.screenshot({ path: "test-results/offline-list.png", fullPage: true });
+  await page.goto(`/briefings/${revisionId}`);
+  await expect(page.getByTestId("copy-line")).toContainText("No signal · the copy kept on this phone");
+
+  // Bad input first: no place.
+  await page.getByLabel("Where are you briefing?").fill("");
+  await page.getByRole("button", { name: "Start" }).click();
+  await expect(page.getByText("Say where the briefing is held")).toBeVisible();
+  await page.getByLabel("Where are you briefing?").fill("Gorsey Lane access gate (no signal)");
+  await page.getByRole("button", { name: "Start" }).click();
+  while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible()))
+    await page.getByRole("button", { name: "Next" }).click();
+  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await signOn(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
+  await signOn(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
+  await expect(page.getByTestId("sign-on-list")).toContainText(
+    "Bethan Quayle (Brackenfold Lineside) — waiting for signal",
+  );
+  await expect(page.getByTestId("sign-on-status")).toContainText("No signal · 3 signed on · 4 waiting to send");
+  await page.screenshot({ path: "test-results/offline-sign-on.png", fullPage: true });
+  await page.getByRole("button", { name: "Next" }).click();
+  await expect(page.getByText(/3 operatives signed on \(3 still waiting for signal/)).toBeVisible();
+  await sign(page);
+  await page.getByRole("button", { name: "Sign off the briefing" }).click();
+  await expect(page.getByRole("heading", { name: "Briefing signed off on this phone" })).toBeVisible();
+  await expect(page.getByTestId("sign-on-status")).toContainText("5 waiting to send");
+  await page.screenshot({ path: "test-results/offline-signed-off.png", fullPage: true });
+
+  // Signal returns: everything goes, in order, once.
+  await airplane(context, false);
+  await expect(page.getByRole("heading", { name: "Briefing recorded" })).toBeVisible({ timeout: 20_000 });
+  await expect(page.getByTestId("sign-on-status")).toContainText("Online · 3 signed on · all recorded");
+  await page.getByRole("link", { name: "See the briefing record" }).click();
+  await expect(page.getByTestId("record-state")).toContainText("Signed off");
+  await expect(page.getByTestId("attendees").locator("tbody tr")).toHaveCount(3);
+  const recordUrl = page.url();
+  // The approved pack was re-issued with the briefing's record.
+  expect(await packHash(page, revisionId)).not.toBe(packBefore);
+
+  // A second reconnection, with the phone sending every record again: nothing is duplicated.
+  await airplane(context, true);
+  await page.evaluate(
+    () =>
+      new Promise<void>((resolve, reject) => {
+        const open = indexedDB.open("heftwise-phone");
+        open.onerror = () => reject(open.error);
+        open.onsuccess = () => {
+          const tx = open.result.transaction("outbox", "readwrite");
+          const store = tx.objectStore("outbox");
+          store.getAll().onsuccess = (e) => {
+            for (const r of (e.target as IDBRequest).result) store.put({ ...r, state: "waiting" });
+          };
+          tx.oncomplete = () => resolve();
+        };
+      }),
+  );
+  await airplane(context, false);
+  await page.goto("/briefings");
+  const records = page.getByTestId("phone-records");
+  await expect(records).toContainText("Sign-off: Signed off by");
+  await expect(records.getByText(/waiting for signal/)).toHaveCount(0, { timeout: 20_000 });
+  await expect(records.getByText(/refused/)).toHaveCount(0);
+  await page.goto(recordUrl);
+  await expect(page.getByTestId("attendees").locator("tbody tr")).toHaveCount(3);
+  // One briefing on the server, not two.
+  await page.goto("/briefings");
+  await expect(page.getByRole("link", { name: /at Gorsey Lane access gate \(no signal\)/ })).toHaveCount(1);
+});
