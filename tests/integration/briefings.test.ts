@@ -4,7 +4,16 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { getPackFile, startNewRevision, verifyPack } from "@/assessments/revisions/approval";
+import {
+  approveRevision,
+  getPackFile,
+  getReview,
+  startNewRevision,
+  submitRevision,
+  verifyPack,
+} from "@/assessments/revisions/approval";
+import { getRevision } from "@/assessments/revisions/service";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
 import {
   briefingSheetPdf,
   completeBriefing,
@@ -24,11 +33,11 @@ import {
 import { listAssessments } from "@/assessments/revisions/queries";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { issuedPacks } from "@/db/schema";
+import { issuedPacks, outboundEmails } from "@/db/schema";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
 import { drawnSignaturePng } from "@/lib/png";
-import { actorFor, demoOrganisation, otherOrganisation } from "./helpers";
+import { actorFor, demoOrganisation, otherOrganisation, reviewDateIn } from "./helpers";
 
 let foreman: Actor;
 let adviser: Actor;
@@ -210,5 +219,97 @@ describe("a briefing", () => {
     await startNewRevision(adviser, approvedId);
     expect(await listOpenSiteChanges(adviser, approvedId)).toEqual([]);
     expect((await getBriefingScript(foreman, approvedId)).revision.needsReview).toBe(false);
+  });
+});
+
+describe("a briefing taken on a phone without signal", () => {
+  const hoursAgo = (h: number) => new Date(Date.now() - h * 3_600_000).toISOString();
+  const phoneKey = (n: number) => `phone-${String(n).padStart(12, "0")}-${Date.now().toString(36)}`;
+
+  it("is recorded once at the time it happened, however often the phone sends its start and sign-off", async () => {
+    const key = phoneKey(1);
+    const start = { revisionId: approvedId, place: "Gorsey Lane gate", key, startedAt: hoursAgo(3) };
+    const first = await startBriefing(foreman, start);
+    expect(first).toMatchObject({ duplicate: false, superseded: null });
+    expect(await startBriefing(foreman, start)).toEqual({ ...first, duplicate: true });
+    await recordAttendee(foreman, first.briefingId, { ...attendee(phoneKey(2)), signedAt: hoursAgo(2.9) });
+    const signOff = { signature, key: phoneKey(3), signedAt: hoursAgo(2.8) };
+    expect(await completeBriefing(foreman, first.briefingId, signOff)).toEqual({ duplicate: false });
+    expect(await completeBriefing(foreman, first.briefingId, signOff)).toEqual({ duplicate: true });
+    // Another sign-off of a closed briefing is still refused.
+    expect(await code(completeBriefing(foreman, first.briefingId, { ...signOff, key: phoneKey(4) }))).toBe("conflict");
+    const { briefing } = await getBriefingRecord(foreman, first.briefingId);
+    expect(briefing.startedAt.toISOString()).toBe(start.startedAt);
+    expect(briefing.completedAt!.toISOString()).toBe(signOff.signedAt);
+    expect(briefing.receivedAt.getTime()).toBeGreaterThan(briefing.startedAt.getTime());
+  });
+
+  it("refuses a phone clock far ahead or a record older than 30 days, naming the field", async () => {
+    const ahead = new Date(Date.now() + 60 * 60_000).toISOString();
+    const err = await startBriefing(foreman, {
+      revisionId: approvedId,
+      place: "Gorsey Lane gate",
+      key: phoneKey(5),
+      startedAt: ahead,
+    }).catch((e) => e);
+    expect(err).toBeInstanceOf(AppError);
+    expect(err.issues).toEqual([
+      expect.objectContaining({ path: "startedAt", message: expect.stringMatching(/clock/) }),
+    ]);
+    expect(
+      await code(
+        startBriefing(foreman, {
+          revisionId: approvedId,
+          place: "Gorsey Lane gate",
+          key: phoneKey(6),
+          startedAt: hoursAgo(24 * 31),
+        }),
+      ),
+    ).toBe("validation");
+    expect(await code(startBriefing(foreman, { revisionId: approvedId, place: "Gate", key: "short" }))).toBe(
+      "validation",
+    );
+  });
+
+  it("against a revision superseded meanwhile: recorded as such and reported to the adviser, never silently accepted", async () => {
+    // The draft revision 2 started in the test before is approved: revision 1 is superseded.
+    const approver = await actorFor("approver", foreman.organisationId);
+    const next = (await listAssessments(adviser)).find((a) => a.status === "draft" && a.number === 2)!;
+    const draft = await getRevision(adviser, next.revisionId);
+    await submitRevision(
+      adviser,
+      next.revisionId,
+      { version: draft.revision.version, approverId: approver.id, reviewDate: reviewDateIn(200) },
+      { notify: false },
+    );
+    const { revision } = await getReview(approver, next.revisionId);
+    await approveRevision(
+      approver,
+      next.revisionId,
+      {
+        version: revision.version,
+        name: "Ruth Okonjo-Vale",
+        role: "Contracts manager",
+        contentHash: revision.contentHash!,
+        password: DEMO_PASSWORD,
+        signature,
+      },
+      { notify: false },
+    );
+
+    // Without the phone's key (a plain API call), the old revision cannot be briefed.
+    expect(await code(startBriefing(foreman, { revisionId: approvedId, place: "Gorsey Lane gate" }))).toBe("not_found");
+    // The phone that briefed from its copy while offline is recorded, flagged, and the adviser told.
+    const start = { revisionId: approvedId, place: "Gorsey Lane gate", key: phoneKey(7), startedAt: hoursAgo(1) };
+    const started = await startBriefing(foreman, start);
+    expect(started.superseded).toEqual({ revisionNumber: 1, currentRevisionNumber: 2 });
+    expect(await startBriefing(foreman, start)).toEqual({ ...started, duplicate: true });
+    const { briefing } = await getBriefingRecord(adviser, started.briefingId);
+    expect(briefing.againstSuperseded).toBe(true);
+    const db = await getDb();
+    const mails = await db.select().from(outboundEmails).where(eq(outboundEmails.kind, "briefing-superseded"));
+    expect(mails).toEqual([
+      expect.objectContaining({ toAddress: adviser.email, subject: expect.stringContaining("superseded revision") }),
+    ]);
   });
 });
