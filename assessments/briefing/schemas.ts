@@ -22,6 +22,10 @@ const deviceTime = z.iso.datetime({ offset: true, error: "Invalid time" }).refin
   { error: "The phone's clock is wrong, or the record is older than 30 days: check the date and time on the phone" },
 );
 
+/** A record that reached the server more than five minutes after it was taken: it waited on a phone. */
+export const sentLater = (takenAt: Date, receivedAt: Date) =>
+  receivedAt.getTime() - takenAt.getTime() > DEVICE_CLOCK_TOLERANCE_MS;
+
 /**
  * Starting a briefing. A phone sends its own key and the time it started, so a briefing taken without
  * signal is recorded once, at the time it happened, when the signal returns.

@@ -5,6 +5,7 @@
  * caution, the revision, its content hash and the page number.
  */
 import { PDFDocument, PDFName, PDFString, rgb } from "pdf-lib";
+import { sentLater } from "../briefing/schemas";
 import QRCode from "qrcode";
 import type { LiftResult } from "../lift-plan/lift";
 import { HITCH_LABELS, SINGLE_SLING_HITCHES } from "../lift-plan/sling";
@@ -80,6 +81,10 @@ export interface PackInput {
     completedAt: Date;
     foremanName: string;
     foremanSignature: Uint8Array | null;
+    /** When the server received it: later than the start when the phone had no signal. */
+    receivedAt?: Date;
+    /** Taken from this revision after it had been superseded (the phone was offline). */
+    againstSuperseded?: boolean;
     attendees: { name: string; employer: string; cardNumber: string; signedAt: Date; png: Uint8Array }[];
   }[];
   /** The public check page; printed on the cover with a QR code of it. */
@@ -427,6 +432,13 @@ export async function buildPack(input: PackInput, fonts: PackFonts): Promise<PDF
       w.text(`Briefed at ${b.place}, ${date(b.startedAt)}, by ${b.foremanName}; signed off ${date(b.completedAt)}.`, {
         font: fonts.bold,
       });
+      if (b.receivedAt && sentLater(b.startedAt, b.receivedAt))
+        w.text(`Taken on the foreman's phone without signal; received ${date(b.receivedAt)}.`);
+      if (b.againstSuperseded)
+        w.text(
+          "Briefed from this revision after it had been superseded (the phone had no signal): reported to the adviser.",
+          { font: fonts.bold },
+        );
       for (const a of b.attendees) {
         const image = embedPng(doc, a.png);
         const scale = Math.min(120 / image.width, 32 / image.height, 1);

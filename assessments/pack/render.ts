@@ -124,6 +124,8 @@ export async function renderPack(
         completedAt: b.completedAt!,
         foremanName: b.foremanName,
         foremanSignature: b.foremanSignature,
+        receivedAt: b.receivedAt,
+        againstSuperseded: b.againstSuperseded,
         attendees: attendees
           .filter((a) => a.briefingId === b.id)
           .map((a) => ({

@@ -147,4 +147,11 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   // One briefing on the server, not two.
   await page.goto("/briefings");
   await expect(page.getByRole("link", { name: /at Gorsey Lane access gate \(no signal\)/ })).toHaveCount(1);
+
+  // Signing out leaves no copy of the foreman's work readable on a shared phone.
+  expect(await page.evaluate(() => caches.has("heftwise-briefing-copies"))).toBe(true);
+  await page.goto("/sign-out");
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  expect(await page.evaluate(() => caches.has("heftwise-briefing-copies"))).toBe(false);
 });

@@ -242,6 +242,11 @@ describe("a briefing taken on a phone without signal", () => {
     expect(briefing.startedAt.toISOString()).toBe(start.startedAt);
     expect(briefing.completedAt!.toISOString()).toBe(signOff.signedAt);
     expect(briefing.receivedAt.getTime()).toBeGreaterThan(briefing.startedAt.getTime());
+    // The re-issued pack says it was taken without signal and when it arrived.
+    const pack = await getPackFile(adviser, approvedId);
+    expect((await pdfText(pack.data)).replace(/\s+/g, " ")).toContain(
+      "Taken on the foreman's phone without signal; received",
+    );
   });
 
   it("refuses a phone clock far ahead or a record older than 30 days, naming the field", async () => {
@@ -306,6 +311,13 @@ describe("a briefing taken on a phone without signal", () => {
     expect(await startBriefing(foreman, start)).toEqual({ ...started, duplicate: true });
     const { briefing } = await getBriefingRecord(adviser, started.briefingId);
     expect(briefing.againstSuperseded).toBe(true);
+    // Its sign-off re-issues the old revision's pack, which carries the flag.
+    await recordAttendee(foreman, started.briefingId, attendee(phoneKey(8), "Bethan Quayle"));
+    await completeBriefing(foreman, started.briefingId, { signature, key: phoneKey(9), signedAt: hoursAgo(0.5) });
+    const oldPack = await getPackFile(adviser, approvedId);
+    expect((await pdfText(oldPack.data)).replace(/\s+/g, " ")).toContain(
+      "Briefed from this revision after it had been superseded",
+    );
     const db = await getDb();
     const mails = await db.select().from(outboundEmails).where(eq(outboundEmails.kind, "briefing-superseded"));
     expect(mails).toEqual([

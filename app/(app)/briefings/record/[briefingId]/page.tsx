@@ -6,6 +6,7 @@ import { can } from "@/lib/permissions";
 import { PrintButton } from "./print-button";
 import { foundOr404 } from "@/lib/pages";
 import { ukDateTime } from "@/lib/dates";
+import { sentLater } from "@/assessments/briefing/schemas";
 
 export const metadata: Metadata = { title: "Briefing record" };
 
@@ -42,6 +43,22 @@ export default async function BriefingRecordPage({ params }: { params: Promise<{
             {briefing.completedAt ? `Signed off ${when(briefing.completedAt)}.` : "Not yet signed off by the foreman."}
           </strong>
         </p>
+        {sentLater(briefing.startedAt, briefing.receivedAt) && (
+          <p className="text-muted">
+            Taken on the foreman&rsquo;s phone without signal; received {when(briefing.receivedAt)}.
+          </p>
+        )}
+        {briefing.againstSuperseded && (
+          <p
+            role="alert"
+            className="mt-2 rounded border-l-4 border-band-act bg-white px-3 py-2 font-bold"
+            data-testid="against-superseded"
+          >
+            Briefed from revision {context.number} after it had been superseded: the foreman&rsquo;s phone had no signal
+            and still held the old revision. Check whether the changes matter and whether the gang must be briefed
+            again.
+          </p>
+        )}
       </section>
       <div data-testid="attendees">
         <DataTable head={["Name", "Employer", "Card", "Signed", "Signature"]} caption="Operatives who signed on">
