@@ -37,3 +37,16 @@ export function ukDateTime(value: Date | null | undefined): string {
 export function ukToday(now: Date): string {
   return new Intl.DateTimeFormat("en-CA", { timeZone: UK_ZONE }).format(now);
 }
+
+/**
+ * A date typed as a UK site writes it, day first: "9-3-2027", "09/03/2027", "9.3.27", "09 03 2027".
+ * Returns YYYY-MM-DD, or null when it is not a real calendar date. A two-digit year is this century.
+ */
+export function parseUkDate(text: string): string | null {
+  const m = /^\s*(\d{1,2})\s*[-/. ]\s*(\d{1,2})\s*[-/. ]\s*(\d{2}|\d{4})\s*$/.exec(text);
+  if (!m) return null;
+  const year = m[3].length === 2 ? 2000 + Number(m[3]) : Number(m[3]);
+  const iso = `${String(year).padStart(4, "0")}-${m[2].padStart(2, "0")}-${m[1].padStart(2, "0")}`;
+  const date = new Date(`${iso}T00:00:00Z`);
+  return !Number.isNaN(date.getTime()) && date.toISOString().startsWith(iso) ? iso : null;
+}

@@ -255,10 +255,7 @@ export const environmentSchema = z.object({
 export const contentSchema = z.object({
   scope: z.object({
     summary: text(2000),
-    startDate: z
-      .string()
-      .regex(/^(\d{4}-\d{2}-\d{2})?$/, "Use a date")
-      .default(""),
+    startDate: optionalDate(),
     durationShifts: z.number().int().min(0).max(1000).default(0),
   }),
   sequence: z.array(z.object({ id: z.string().min(1).max(40), text: text(500) })).max(60),

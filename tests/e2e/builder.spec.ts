@@ -167,8 +167,17 @@ test("an adviser builds an assessment through the wizard, watches the live score
     "data-band",
     "act",
   );
+  // The review date reads day-month-year, whatever the browser's language; a date that does not exist is refused.
+  const reviewBy = page.getByLabel("Review by");
+  await expect(reviewBy).toHaveValue(/^\d{2}-\d{2}-\d{4}$/);
+  await reviewBy.fill("31-02-2030");
+  await page.getByRole("button", { name: "Submit for approval" }).click();
+  await expect(page.getByText("Choose a review date")).toBeVisible();
+  const nextYear = new Date().getUTCFullYear() + 1;
+  await reviewBy.fill(`15-06-${nextYear}`);
   await page.getByRole("button", { name: "Submit for approval" }).click();
   await expect(page.getByText("Submitted — waiting for approval")).toBeVisible();
+  await expect(page.getByText(`review by 15-06-${nextYear}`)).toBeVisible();
 });
 
 test("a save over someone else's newer save shows the conflict and keeps what was typed", async ({ page, browser }) => {

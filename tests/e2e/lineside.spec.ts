@@ -136,10 +136,13 @@ test("the review step blocks lineside gaps: no protection arrangement, no respon
   const permit = page.getByRole("group", { name: "Permit 1" });
   await permit.getByLabel("Permit", { exact: true }).selectOption("hot-work");
   await permit.getByLabel("Issued by").fill("Site permit office");
-  await permit.getByLabel("Valid from").fill("2027-03-10");
-  await permit.getByLabel("Valid to").fill("2027-03-01");
+  await permit.getByLabel("Valid from").fill("10-03-2027");
+  await permit.getByLabel("Valid to").fill("01-03-2027");
   await expect(permit.getByText("Must be on or after the start date")).toBeVisible();
-  await permit.getByLabel("Valid to").fill("2027-03-12");
+  await permit.getByLabel("Valid to").fill("31-03-2O27");
+  await expect(permit.getByText("Use a real date")).toBeVisible();
+  await permit.getByLabel("Valid to").fill("12-03-2027");
+  await expect(permit.getByText("Use a real date")).toHaveCount(0);
 
   await steps(page)
     .getByRole("button", { name: /Review & submit/ })

@@ -1,6 +1,6 @@
 /** Dates as a UK site reads them (common practice, no published source: day-month-year, 24-hour clock). */
 import { describe, expect, it } from "vitest";
-import { ukDate, ukDateTime, ukToday } from "@/lib/dates";
+import { parseUkDate, ukDate, ukDateTime, ukToday } from "@/lib/dates";
 
 describe("UK dates", () => {
   it("writes calendar dates day-month-year without moving them across a time zone", () => {
@@ -17,5 +17,12 @@ describe("UK dates", () => {
   });
   it("knows today's date in the UK", () => {
     expect(ukToday(new Date("2027-07-01T23:30:00Z"))).toBe("2027-07-02");
+  });
+  it("reads a date typed day first, as a UK site writes it, and refuses one that does not exist", () => {
+    for (const typed of ["9-3-2027", "09-03-2027", "09/03/2027", "9.3.27", "09 03 2027", " 9 / 3 / 2027 "])
+      expect(parseUkDate(typed), typed).toBe("2027-03-09");
+    expect(parseUkDate("29-02-2028")).toBe("2028-02-29");
+    for (const bad of ["29-02-2027", "31-04-2027", "2027-03-09", "03-09", "9th March", "13-13-2027", ""])
+      expect(parseUkDate(bad), bad).toBeNull();
   });
 });

@@ -1,5 +1,6 @@
 "use client";
 
+import { MILEAGE_HINT } from "@/lib/mileage";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -53,7 +54,7 @@ export function JobForm({
       <fieldset className="grid gap-3 md:grid-cols-2">
         <legend className="font-bold">Railway (leave blank off the railway)</legend>
         <TextField label="Line reference" error={e.lineReference?.message} {...register("lineReference")} />
-        <TextField label="Mileage" hint="e.g. 14m 22ch" error={e.mileage?.message} {...register("mileage")} />
+        <TextField label="Mileage" hint={MILEAGE_HINT} error={e.mileage?.message} {...register("mileage")} />
       </fieldset>
       <fieldset className="grid gap-3 md:grid-cols-2">
         <legend className="font-bold">Emergency</legend>

@@ -2,7 +2,8 @@
 
 /** Small inputs bound to the wizard's form by path, with the field's error beside it. */
 import { useState } from "react";
-import { get, useFormContext, type FieldErrors, type FieldPath } from "react-hook-form";
+import { Controller, get, useFormContext, type FieldErrors, type FieldPath } from "react-hook-form";
+import { UkDateInput } from "@/app/_components/uk-date-input";
 import { controlClass, controlProps, FieldError, FieldFrame, withUnit } from "@/app/_components/form";
 import type { Content } from "@/assessments/method-statement/content";
 
@@ -206,12 +207,26 @@ export function GradientField({ name, label }: { name: FieldPath<Content>; label
   );
 }
 
-/** A date as YYYY-MM-DD, or blank. */
+/** A date typed day-month-year, kept as YYYY-MM-DD (or blank). */
 export function DateField({ name, label }: { name: FieldPath<Content>; label: string }) {
-  const { register, error, id, control } = useContentField(name);
+  const { error, id, control } = useContentField(name);
+  const form = useFormContext<Content>();
   return (
     <FieldFrame id={id} label={label} error={error} compact>
-      <input type="date" {...control} {...register(name)} />
+      <Controller
+        control={form.control}
+        name={name}
+        render={({ field }) => (
+          <UkDateInput
+            {...control}
+            name={field.name}
+            ref={field.ref}
+            value={typeof field.value === "string" ? field.value : ""}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+          />
+        )}
+      />
     </FieldFrame>
   );
 }

@@ -5,7 +5,7 @@ import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { hazardFromLibrary, type LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { SecondaryButton } from "@/app/_components/form";
 import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating, type Content } from "@/assessments/method-statement/content";
-import { Choice, Num, Text } from "./fields";
+import { Choice, DateField, Num, Text } from "./fields";
 
 const newId = (prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`;
 const RATINGS = [1, 2, 3, 4, 5].map((n) => [n, String(n)] as const);
@@ -20,17 +20,7 @@ export function ScopeStep() {
         hint="What is installed, where, and what is not included."
       />
       <div className="grid max-w-md grid-cols-2 gap-3">
-        <div>
-          <label htmlFor="f-scope.startDate" className="block text-sm font-bold">
-            Planned start
-          </label>
-          <input
-            id="f-scope.startDate"
-            type="date"
-            className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
-            {...useFormContext<Content>().register("scope.startDate")}
-          />
-        </div>
+        <DateField name="scope.startDate" label="Planned start" />
         <Num name="scope.durationShifts" label="Shifts" step="1" />
       </div>
     </div>

@@ -3,8 +3,18 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
-import { FormMessage, PrimaryButton, SelectField, TextField } from "@/app/_components/form";
+import { Controller, FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
+import {
+  controlClass,
+  controlProps,
+  FieldFrame,
+  FormMessage,
+  PrimaryButton,
+  SelectField,
+  TextField,
+} from "@/app/_components/form";
+import { UkDateInput } from "@/app/_components/uk-date-input";
+import { ukDate } from "@/lib/dates";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import { contentSchema, type Content } from "@/assessments/method-statement/content";
@@ -260,7 +270,7 @@ function ReviewStep({
       suggested: suggested > range.latest ? range.latest : suggested < range.earliest ? range.earliest : suggested,
     };
   });
-  const { register, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
+  const { register, control, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
     resolver: zodResolver(submitFormSchema),
     defaultValues: { approverId: approvers[0]?.id ?? "", reviewDate: dates.suggested },
   });
@@ -318,14 +328,24 @@ function ReviewStep({
               </option>
             ))}
           </SelectField>
-          <TextField
+          <FieldFrame
+            id="field-reviewDate"
             label="Review by"
-            type="date"
-            min={dates.earliest}
-            max={dates.latest}
+            hint={`Day-month-year, from ${ukDate(dates.earliest)} to ${ukDate(dates.latest)}`}
             error={formState.errors.reviewDate?.message}
-            {...register("reviewDate")}
-          />
+          >
+            <Controller
+              control={control}
+              name="reviewDate"
+              render={({ field }) => (
+                <UkDateInput
+                  {...controlProps("field-reviewDate", formState.errors.reviewDate?.message)}
+                  className={controlClass(formState.errors.reviewDate?.message)}
+                  {...field}
+                />
+              )}
+            />
+          </FieldFrame>
           <PrimaryButton
             type="submit"
             disabled={formState.isSubmitting || missing.length > 0 || approvers.length === 0}
