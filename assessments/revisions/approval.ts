@@ -4,6 +4,7 @@
  * superseded) or return with comments, a new revision from an approved one, pack downloads,
  * verification of an uploaded pack, and the audit trail.
  */
+import { ukDate } from "@/lib/dates";
 import "server-only";
 import { and, asc, desc, eq, inArray, ne } from "drizzle-orm";
 import { z } from "zod";
@@ -147,7 +148,8 @@ async function sendApprovalRequest(actor: Actor, revisionId: string): Promise<Se
     heading: `Please review: ${assessment.title}`,
     paragraphs: [
       `Hello ${approver.name},`,
-      `${actor.name} has submitted revision ${revision.number} of "${assessment.title}" (${job.name}) for your countersignature.`,
+      `${actor.name} has submitted revision ${revision.number} of "${assessment.title}" (${job.name}) for your countersignature.` +
+        (revision.reviewDate ? ` The proposed review date is ${ukDate(revision.reviewDate)}.` : ""),
       attachment
         ? "The draft pack is attached. Review it in Heftwise, then countersign it or return it with comments."
         : "Open the review page to read it, then countersign it or return it with comments.",
@@ -353,7 +355,8 @@ async function notifyAuthor(
           heading: `Approved: ${row.title}`,
           paragraphs: [
             `Hello ${author.name},`,
-            `${actor.name} countersigned revision ${row.revision.number}. It is locked, and the signed pack is ready to download and brief from.`,
+            `${actor.name} countersigned revision ${row.revision.number}. It is locked, and the signed pack is ready to download and brief from.` +
+              (row.revision.reviewDate ? ` Review it by ${ukDate(row.revision.reviewDate)}.` : ""),
           ],
           action: { label: "Open the approved revision", url: link },
         })

@@ -18,11 +18,16 @@ test("an adviser creates a job", async ({ page }) => {
     .fill("Tolgarth Community Hospital, emergency department");
   await form.getByLabel("Emergency arrangements").fill("Meet the ambulance at the station car park.");
   await form.getByLabel("Site contact phone").fill("call me maybe");
+  // Decimal miles could be read two ways: refused, with the form to use.
+  await form.getByLabel("Mileage").fill("21.34");
   await form.getByRole("button", { name: "Save job" }).click();
   await expect(form.getByText("Enter a phone number")).toBeVisible();
+  await expect(form.getByText(/Write the mileage in miles and chains/)).toBeVisible();
   await form.getByLabel("Site contact phone").fill("07700 900555");
+  await form.getByLabel("Mileage").fill("21 miles 34 chains to 21m 40ch");
   await form.getByRole("button", { name: "Save job" }).click();
   await expect(page.getByRole("cell", { name: "Tolgarth footbridge: new cable route" })).toBeVisible();
+  await expect(page.getByRole("cell", { name: "21m 34ch – 21m 40ch" })).toBeVisible();
 });
 
 test("an adviser imports a CSV: a bad file is refused row by row, a good one is imported", async ({ page }) => {

@@ -114,6 +114,9 @@ describe("submit and countersign", () => {
     const message = fake.messages.find((m) => m.to.includes(approver.email))!;
     expect(message.subject).toContain("Review requested");
     expect(message.text).toContain(`/reviews/${id}`);
+    // Dates in e-mails read day-month-year, as on site.
+    const [y, m, d] = reviewDateIn(210).split("-");
+    expect(message.text.replace(/\s+/g, " ")).toContain(`The proposed review date is ${d}-${m}-${y}.`);
     expect(message.attachments).toEqual([expect.objectContaining({ contentType: "application/pdf" })]);
     expect(message.attachments[0].size).toBeGreaterThan(5000);
     // Read-only for its author now.
