@@ -7,6 +7,7 @@ import { ROLE_LABELS } from "@/lib/users/schemas";
 import { NAVIGATION } from "./navigation";
 import { NavLinks } from "./nav-links";
 import { Providers } from "./providers";
+import { PhoneSync } from "./briefings/device/phone-sync";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const actor = await requireActor();
@@ -36,6 +37,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       </header>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
         <Providers>{children}</Providers>
+        {can(actor, "briefings:run") && <PhoneSync userId={actor.id} />}
       </main>
       <footer className="mx-auto w-full max-w-6xl px-4 pb-6">
         <SafetyCaution />
