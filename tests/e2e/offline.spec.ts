@@ -80,8 +80,16 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   await page.reload();
   await expect(page.getByRole("heading", { name: "Your jobs" })).toBeVisible();
   await expect(page.getByTestId("copies-state")).toContainText("No signal");
+  // The briefing sheet is kept too.
+  const sheet = await page.evaluate(async (id) => {
+    const res = await fetch(`/api/v1/revisions/${id}/briefing-sheet`);
+    return { status: res.status, start: new TextDecoder().decode((await res.arrayBuffer()).slice(0, 5)) };
+  }, revisionId);
+  expect(sheet).toEqual({ status: 200, start: "%PDF-" });
   await page.screenshot({ path: "test-results/offline-list.png", fullPage: true });
-  await page.goto(`/briefings/${revisionId}`);
+  // As a foreman would: the link on the kept list opens the kept briefing.
+  await page.getByRole("link", { name: "Brief the gang" }).first().click();
+  await expect(page).toHaveURL(new RegExp(`/briefings/${revisionId}$`));
   await expect(page.getByTestId("copy-line")).toContainText("No signal · the copy kept on this phone");
 
   // Bad input first: no place.
