@@ -1,5 +1,6 @@
 import { expect, test, type BrowserContext, type Page, type Route } from "@playwright/test";
-import { signIn } from "./helpers";
+import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
+import { signIn, steps, waitForMail } from "./helpers";
 
 // A foreman's phone: the briefing must work at an access point without signal, after one visit with it.
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, serviceWorkers: "allow" });
@@ -162,4 +163,98 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   await page.getByRole("button", { name: "Sign out", exact: true }).click();
   await expect(page).toHaveURL(/\/sign-in/);
   expect(await page.evaluate(() => caches.has("heftwise-briefing-copies"))).toBe(false);
+});
+
+test("a briefing taken offline from a revision superseded meanwhile is flagged on reconnection and reported to the adviser", async ({
+  page,
+  context,
+  browser,
+}) => {
+  await signIn(page, "foreman@brackenfold.example");
+  await page.goto("/briefings");
+  await expect(page.getByTestId("copies-state")).toContainText("kept for use without signal");
+  const oldRevision = (await page.getByRole("link", { name: "Brief the gang" }).first().getAttribute("href"))!.split(
+    "/",
+  )[2];
+
+  // At the access point without signal, the foreman briefs from the copy on the phone.
+  await airplane(context, true);
+  await page.goto(`/briefings/${oldRevision}`);
+  await page.getByLabel("Where are you briefing?").fill("Gorsey Lane access gate (old copy)");
+  await page.getByRole("button", { name: "Start" }).click();
+  while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible()))
+    await page.getByRole("button", { name: "Next" }).click();
+  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await page.getByRole("button", { name: "Next" }).click();
+  await sign(page);
+  await page.getByRole("button", { name: "Sign off the briefing" }).click();
+  await expect(page.getByRole("heading", { name: "Briefing signed off on this phone" })).toBeVisible();
+
+  // Meanwhile the office approves a new revision.
+  const office = await browser.newContext();
+  const adviser = await office.newPage();
+  await signIn(adviser, "adviser@brackenfold.example");
+  const next = await adviser.evaluate(async (id) => {
+    const res = await fetch(`/api/v1/revisions/${id}/new-revision`, { method: "POST" });
+    return ((await res.json()) as { revisionId: string }).revisionId;
+  }, oldRevision);
+  await adviser.goto(`/revisions/${next}`);
+  await steps(adviser)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
+  await adviser.getByRole("button", { name: "Submit for approval" }).click();
+  await expect(adviser.getByText("Submitted — waiting for approval")).toBeVisible();
+  const approverContext = await browser.newContext();
+  const approver = await approverContext.newPage();
+  await signIn(approver, "approver@brackenfold.example");
+  await approver.goto(`/reviews/${next}`);
+  await approver.getByLabel("Your role").fill("Contracts manager");
+  const pad = approver.getByTestId("signature-pad");
+  await pad.scrollIntoViewIfNeeded();
+  const box = (await pad.boundingBox())!;
+  await approver.mouse.move(box.x + 20, box.y + box.height / 2);
+  await approver.mouse.down();
+  for (let i = 1; i <= 20; i++)
+    await approver.mouse.move(box.x + 20 + i * 12, box.y + box.height / 2 + Math.sin(i) * 25, { steps: 2 });
+  await approver.mouse.up();
+  await approver.getByRole("button", { name: "Countersign and approve…" }).click();
+  const dialog = approver.getByRole("dialog");
+  await dialog.getByLabel("Your password").fill(DEMO_PASSWORD);
+  await dialog.getByRole("button", { name: "Approve and sign" }).click();
+  await expect(approver.getByTestId("review-status")).toHaveText("Approved");
+  await office.close();
+  await approverContext.close();
+
+  // Signal returns: the briefing is recorded against the old revision, flagged on the phone, and the
+  // copy is replaced by the new revision.
+  await airplane(context, false);
+  const flag = page.getByTestId("superseded");
+  await expect(flag).toContainText(
+    "Revision 1 of Equipment base by hand at Hollin Vale had been superseded by revision 2",
+    {
+      timeout: 20_000,
+    },
+  );
+  await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on · all recorded");
+  await page.screenshot({ path: "test-results/offline-superseded.png", fullPage: true });
+  await page.goto("/briefings");
+  await expect(page.getByTestId("replaced")).toContainText("revision 1 was replaced by revision 2", {
+    timeout: 20_000,
+  });
+  await expect(page.getByRole("link", { name: "Brief the gang" }).first()).toHaveAttribute(
+    "href",
+    `/briefings/${next}`,
+  );
+
+  // The adviser is told, and the record says so.
+  const mail = await waitForMail("adviser@brackenfold.example");
+  expect(mail.subject).toBe("Briefed from a superseded revision: Equipment base by hand at Hollin Vale");
+  const recordLink = mail.text.match(/https?:\/\/\S+\/briefings\/record\/[0-9a-f-]+/)![0];
+  const check = await browser.newContext();
+  const reader = await check.newPage();
+  await signIn(reader, "adviser@brackenfold.example");
+  await reader.goto(recordLink);
+  await expect(reader.getByTestId("against-superseded")).toContainText("after it had been superseded");
+  await expect(reader.getByTestId("attendees").locator("tbody tr")).toHaveCount(1);
+  await check.close();
 });

@@ -7,6 +7,7 @@
  */
 import { ApiError, apiRequest, problemOf } from "@/lib/api-client";
 import type { StartedBriefing } from "@/assessments/briefing/service";
+import { bringCopiesUpToDate } from "./copies";
 import { announceChange, noteContact, phoneDb, type OutgoingRecord, type PhoneBriefing } from "./store";
 
 let running: Promise<void> | null = null;
@@ -67,6 +68,8 @@ async function send(record: OutgoingRecord, briefing: PhoneBriefing) {
     const started = await apiRequest<StartedBriefing>("/api/v1/briefings", { json: record.body });
     const db = await phoneDb();
     await db.put("briefings", { ...briefing, serverId: started.briefingId, superseded: started.superseded });
+    // The phone's copy is out of date: replace it now, not at the next scheduled update.
+    if (started.superseded) void bringCopiesUpToDate(record.userId, { force: true });
     return;
   }
   const path = record.kind === "sign-on" ? "attendees" : "complete";

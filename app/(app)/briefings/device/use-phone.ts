@@ -56,14 +56,15 @@ export function usePhone(userId: string): PhoneState {
       ]);
       if (alive) setState({ loaded: true, online: online(), briefings, records, copies, readAt: Date.now() });
     };
-    const work = async () => {
+    const work = async ({ force = false } = {}) => {
       if (!navigator.onLine || !(await probe())) return;
       void sendWaiting(userId);
-      void bringCopiesUpToDate(userId);
+      void bringCopiesUpToDate(userId, { force });
     };
+    // Back in signal: what changed while the phone was away matters now.
     const connectivity = () => {
       setState((s) => ({ ...s, online: online() }));
-      void work();
+      void work({ force: navigator.onLine });
     };
     void read();
     void work();
