@@ -17,12 +17,12 @@ export interface InboxMessage {
   kind: string | null;
 }
 
-/** Waits for an e-mail to `to` to reach the local mail fake. */
-export async function waitForMail(to: string, timeoutMs = 15_000): Promise<InboxMessage> {
+/** Waits for an e-mail to `to` (and with a subject matching `subject`) to reach the local mail fake. */
+export async function waitForMail(to: string, timeoutMs = 15_000, subject?: RegExp): Promise<InboxMessage> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const messages = (await (await fetch(`${INBOX_URL}/api/messages`)).json()) as InboxMessage[];
-    const found = messages.filter((m) => m.to.includes(to)).at(-1);
+    const found = messages.filter((m) => m.to.includes(to) && (!subject || subject.test(m.subject))).at(-1);
     if (found) return found;
     await new Promise((r) => setTimeout(r, 250));
   }

@@ -37,6 +37,10 @@ async function signOn(page: Page, name: string, employer: string, card: string) 
   await expect(page.getByTestId("sign-on-list")).toContainText(`${name} (${employer})`);
 }
 
+/** The foreman's list entry of one approved assessment. */
+const briefable = (page: Page, title: string) => page.locator('[data-testid^="briefable-"]').filter({ hasText: title });
+const HAND_CARRY = "Equipment base by hand at Hollin Vale";
+
 const packHash = async (page: Page, revisionId: string) =>
   page.evaluate(async (id) => {
     const bytes = await (await fetch(`/api/v1/revisions/${id}/pack`, { cache: "no-store" })).arrayBuffer();
@@ -63,9 +67,9 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   expect(new URL(scope).pathname).toBe("/");
   await expect(page.getByTestId("copies-state")).toContainText("kept for use without signal");
 
-  const revisionId = (await page.getByRole("link", { name: "Brief the gang" }).first().getAttribute("href"))!.split(
-    "/",
-  )[2];
+  const revisionId = (await briefable(page, HAND_CARRY)
+    .getByRole("link", { name: "Brief the gang" })
+    .getAttribute("href"))!.split("/")[2];
   const packBefore = await packHash(page, revisionId);
 
   // Airplane mode, and the app opened again from scratch.
@@ -89,7 +93,7 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   expect(sheet).toEqual({ status: 200, start: "%PDF-" });
   await page.screenshot({ path: "test-results/offline-list.png", fullPage: true });
   // As a foreman would: the link on the kept list opens the kept briefing.
-  await page.getByRole("link", { name: "Brief the gang" }).first().click();
+  await briefable(page, HAND_CARRY).getByRole("link", { name: "Brief the gang" }).click();
   await expect(page).toHaveURL(new RegExp(`/briefings/${revisionId}$`));
   await expect(page.getByTestId("copy-line")).toContainText("No signal · the copy kept on this phone");
 
@@ -173,9 +177,9 @@ test("a briefing taken offline from a revision superseded meanwhile is flagged o
   await signIn(page, "foreman@brackenfold.example");
   await page.goto("/briefings");
   await expect(page.getByTestId("copies-state")).toContainText("kept for use without signal");
-  const oldRevision = (await page.getByRole("link", { name: "Brief the gang" }).first().getAttribute("href"))!.split(
-    "/",
-  )[2];
+  const oldRevision = (await briefable(page, HAND_CARRY)
+    .getByRole("link", { name: "Brief the gang" })
+    .getAttribute("href"))!.split("/")[2];
 
   // At the access point without signal, the foreman briefs from the copy on the phone.
   await airplane(context, true);
@@ -238,16 +242,19 @@ test("a briefing taken offline from a revision superseded meanwhile is flagged o
   await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on · all recorded");
   await page.screenshot({ path: "test-results/offline-superseded.png", fullPage: true });
   await page.goto("/briefings");
-  await expect(page.getByTestId("replaced")).toContainText("revision 1 was replaced by revision 2", {
-    timeout: 20_000,
-  });
-  await expect(page.getByRole("link", { name: "Brief the gang" }).first()).toHaveAttribute(
+  await expect(page.getByTestId("replaced").filter({ hasText: HAND_CARRY })).toContainText(
+    "revision 1 was replaced by revision 2",
+    {
+      timeout: 20_000,
+    },
+  );
+  await expect(briefable(page, HAND_CARRY).getByRole("link", { name: "Brief the gang" })).toHaveAttribute(
     "href",
     `/briefings/${next}`,
   );
 
   // The adviser is told, and the record says so.
-  const mail = await waitForMail("adviser@brackenfold.example");
+  const mail = await waitForMail("adviser@brackenfold.example", 15_000, /^Briefed from a superseded revision/);
   expect(mail.subject).toBe("Briefed from a superseded revision: Equipment base by hand at Hollin Vale");
   const recordLink = mail.text.match(/https?:\/\/\S+\/briefings\/record\/[0-9a-f-]+/)![0];
   const check = await browser.newContext();

@@ -17,11 +17,15 @@ export const canKeepCopies = () => typeof window !== "undefined" && "caches" in 
 const AT_MOST_EVERY_MS = 60_000;
 let running: Promise<CopiesState | undefined> | null = null;
 
+/** One update at a time; one asked for with `force` while another runs follows it, never merges into it. */
 export function bringCopiesUpToDate(userId: string, { force = false } = {}): Promise<CopiesState | undefined> {
-  running ??= update(userId, force).finally(() => {
-    running = null;
+  const next = () => update(userId, force);
+  const mine = running ? (force ? running.then(next, next) : running) : next();
+  running = mine;
+  void mine.finally(() => {
+    if (running === mine) running = null;
   });
-  return running;
+  return mine;
 }
 
 async function update(userId: string, force: boolean): Promise<CopiesState | undefined> {
