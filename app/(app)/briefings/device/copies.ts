@@ -13,7 +13,7 @@ import { announceChange, noteContact, phoneDb, type CopiesState } from "./store"
 /** Without a secure connection (plain http on a site network) a browser keeps no copies. */
 export const canKeepCopies = () => typeof window !== "undefined" && "caches" in window && window.isSecureContext;
 
-/** Not more often than this, when several screens ask (Heftwise policy). */
+/** The pages and sheets are fetched again at most this often while nothing changed (Heftwise policy). */
 const AT_MOST_EVERY_MS = 60_000;
 let running: Promise<CopiesState | undefined> | null = null;
 
@@ -32,7 +32,7 @@ async function update(userId: string, force: boolean): Promise<CopiesState | und
   const db = await phoneDb();
   const previous = await db.get("copies", userId);
   if (!navigator.onLine || !canKeepCopies()) return previous;
-  if (!force && previous?.updatedAt && Date.now() - Date.parse(previous.updatedAt) < AT_MOST_EVERY_MS) return previous;
+  // The list is small and always asked for: a newer revision shows at once.
   let list: BriefableRevisions;
   try {
     list = await apiRequest<BriefableRevisions>("/api/v1/briefings/briefable");
@@ -44,6 +44,31 @@ async function update(userId: string, force: boolean): Promise<CopiesState | und
     announceChange();
     return state;
   }
+  const now = new Date().toISOString();
+  const replaced = (previous?.revisions ?? [])
+    .filter((old) => !list.revisions.some((r) => r.revisionId === old.revisionId))
+    .map((old) => ({
+      revisionId: old.revisionId,
+      title: old.title,
+      jobName: old.jobName,
+      number: old.number,
+      newer: list.revisions.find((r) => r.title === old.title && r.jobName === old.jobName)?.number ?? null,
+      at: now,
+    }));
+  const known: CopiesState = {
+    userId,
+    updatedAt: previous?.updatedAt ?? null,
+    revisions: list.revisions,
+    replaced: [...replaced, ...(previous?.replaced ?? [])].slice(0, 10),
+    problem: previous?.problem,
+  };
+  // Recorded before the copies are fetched, so that leaving the page part-way loses none of it.
+  await db.put("copies", known);
+  announceChange();
+  const unchanged =
+    replaced.length === 0 && list.revisions.length === (previous?.revisions.length ?? -1) && !previous?.problem;
+  if (!force && unchanged && previous?.updatedAt && Date.now() - Date.parse(previous.updatedAt) < AT_MOST_EVERY_MS)
+    return known;
   const cache = await caches.open(DEVICE_COPIES_CACHE);
   const wanted = ["/", "/briefings", ...list.revisions.flatMap((r) => [r.page, r.sheet])];
   let failed = 0;
@@ -57,24 +82,13 @@ async function update(userId: string, force: boolean): Promise<CopiesState | und
       failed++;
     }
   }
-  for (const request of await cache.keys())
-    if (!wanted.includes(new URL(request.url).pathname + new URL(request.url).search)) await cache.delete(request);
-  const now = new Date().toISOString();
-  const replaced = (previous?.revisions ?? [])
-    .filter((old) => !list.revisions.some((r) => r.revisionId === old.revisionId))
-    .map((old) => ({
-      revisionId: old.revisionId,
-      title: old.title,
-      jobName: old.jobName,
-      number: old.number,
-      newer: list.revisions.find((r) => r.title === old.title && r.jobName === old.jobName)?.number ?? null,
-      at: now,
-    }));
+  for (const request of await cache.keys()) {
+    const url = new URL(request.url);
+    if (!wanted.includes(url.pathname + url.search)) await cache.delete(request);
+  }
   const state: CopiesState = {
-    userId,
-    updatedAt: failed ? (previous?.updatedAt ?? null) : list.checkedAt,
-    revisions: list.revisions,
-    replaced: [...replaced, ...(previous?.replaced ?? [])].slice(0, 10),
+    ...known,
+    updatedAt: failed ? known.updatedAt : list.checkedAt,
     problem: failed
       ? `${failed} of ${wanted.length} copies could not be saved: they are tried again shortly.`
       : undefined,
