@@ -1,27 +1,8 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
-import { signIn, waitForMail } from "./helpers";
+import { drawSignature, signIn, signOnOperative, waitForMail } from "./helpers";
 
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
-
-async function sign(page: Page) {
-  const pad = page.getByTestId("signature-pad").last();
-  await pad.scrollIntoViewIfNeeded();
-  const box = (await pad.boundingBox())!;
-  await page.mouse.move(box.x + 15, box.y + box.height / 2);
-  await page.mouse.down();
-  for (let i = 1; i <= 12; i++)
-    await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.sin(i) * 20, { steps: 2 });
-  await page.mouse.up();
-}
-
-async function signOn(page: Page, name: string, employer: string, card: string) {
-  await page.getByLabel("Your name").fill(name);
-  await page.getByLabel("Employer").fill(employer);
-  await page.getByLabel("Competence card number").fill(card);
-  await sign(page);
-  await page.getByRole("button", { name: "Sign on" }).click();
-}
 
 async function axe(page: Page) {
   const results = await new AxeBuilder({ page }).analyze();
@@ -66,12 +47,12 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await expect(page.getByText("Enter your name")).toBeVisible();
   await expect(page.getByText("Sign in the box")).toBeVisible();
 
-  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await signOnOperative(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
   await expect(page.getByTestId("sign-on-status")).toContainText("1 signed on · all recorded");
 
   // The signal drops: the next sign-on waits on the phone.
   await context.setOffline(true);
-  await signOn(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
+  await signOnOperative(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
   await expect(page.getByTestId("sign-on-list")).toContainText(
     "Aled Menhenick (Tarnbrook Plant Hire) — waiting for signal",
   );
@@ -84,7 +65,7 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   await context.setOffline(false);
   await expect(page.getByTestId("sign-on-list")).toContainText("Aled Menhenick (Tarnbrook Plant Hire) — recorded");
   await expect(page.getByTestId("sign-on-status")).toContainText("Online · 2 signed on · all recorded");
-  await signOn(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
+  await signOnOperative(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
   await expect(page.getByTestId("sign-on-status")).toContainText("3 signed on · all recorded");
 
   // A phone retrying an old sign-on (same key) records nothing new.
@@ -111,7 +92,7 @@ test("a foreman briefs from a phone: three operatives and the foreman sign, one 
   expect(replay.body.duplicate).toBe(true);
 
   await page.getByRole("button", { name: "Next" }).click();
-  await sign(page);
+  await drawSignature(page);
   await page.getByRole("button", { name: "Sign off the briefing" }).click();
   await expect(page.getByRole("heading", { name: "Briefing recorded" })).toBeVisible();
   await page.getByRole("link", { name: "See the briefing record" }).click();

@@ -38,3 +38,25 @@ export async function chooseComponent(task: Locator, label: string) {
   await task.getByRole("button", { name: label, exact: true }).click();
   await expect(task.getByTestId("chosen-component")).toContainText(label);
 }
+
+/** Draws a signature with the finger (the last signature pad on the page). */
+export async function drawSignature(page: Page) {
+  const pad = page.getByTestId("signature-pad").last();
+  await pad.scrollIntoViewIfNeeded();
+  const box = (await pad.boundingBox())!;
+  await page.mouse.move(box.x + 15, box.y + box.height / 2);
+  await page.mouse.down();
+  for (let i = 1; i <= 12; i++)
+    await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.sin(i) * 20, { steps: 2 });
+  await page.mouse.up();
+}
+
+/** One operative signs on at the briefing's sign-on screen. */
+export async function signOnOperative(page: Page, name: string, employer: string, card: string) {
+  await page.getByLabel("Your name").fill(name);
+  await page.getByLabel("Employer").fill(employer);
+  await page.getByLabel("Competence card number").fill(card);
+  await drawSignature(page);
+  await page.getByRole("button", { name: "Sign on" }).click();
+  await expect(page.getByTestId("sign-on-list")).toContainText(`${name} (${employer})`);
+}

@@ -1,6 +1,6 @@
 import { expect, test, type BrowserContext, type Page, type Route } from "@playwright/test";
 import { DEMO_PASSWORD } from "@/assessments/demo/scenario";
-import { signIn, steps, waitForMail } from "./helpers";
+import { drawSignature, signIn, signOnOperative, steps, waitForMail } from "./helpers";
 
 // A foreman's phone: the briefing must work at an access point without signal, after one visit with it.
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, serviceWorkers: "allow" });
@@ -15,26 +15,6 @@ async function airplane(context: BrowserContext, on: boolean) {
     await context.unroute("**/*", noNetwork);
     await context.setOffline(false);
   }
-}
-
-async function sign(page: Page) {
-  const pad = page.getByTestId("signature-pad").last();
-  await pad.scrollIntoViewIfNeeded();
-  const box = (await pad.boundingBox())!;
-  await page.mouse.move(box.x + 15, box.y + box.height / 2);
-  await page.mouse.down();
-  for (let i = 1; i <= 12; i++)
-    await page.mouse.move(box.x + 15 + i * 20, box.y + box.height / 2 + Math.cos(i) * 20, { steps: 2 });
-  await page.mouse.up();
-}
-
-async function signOn(page: Page, name: string, employer: string, card: string) {
-  await page.getByLabel("Your name").fill(name);
-  await page.getByLabel("Employer").fill(employer);
-  await page.getByLabel("Competence card number").fill(card);
-  await sign(page);
-  await page.getByRole("button", { name: "Sign on" }).click();
-  await expect(page.getByTestId("sign-on-list")).toContainText(`${name} (${employer})`);
 }
 
 /** The foreman's list entry of one approved assessment. */
@@ -105,9 +85,9 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   await page.getByRole("button", { name: "Start" }).click();
   while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible()))
     await page.getByRole("button", { name: "Next" }).click();
-  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
-  await signOn(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
-  await signOn(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
+  await signOnOperative(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await signOnOperative(page, "Aled Menhenick", "Tarnbrook Plant Hire", "CPCS 55012");
+  await signOnOperative(page, "Bethan Quayle", "Brackenfold Lineside", "PTS 90331");
   await expect(page.getByTestId("sign-on-list")).toContainText(
     "Bethan Quayle (Brackenfold Lineside) — waiting for signal",
   );
@@ -115,7 +95,7 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   await page.screenshot({ path: "test-results/offline-sign-on.png", fullPage: true });
   await page.getByRole("button", { name: "Next" }).click();
   await expect(page.getByText(/3 operatives signed on \(3 still waiting for signal/)).toBeVisible();
-  await sign(page);
+  await drawSignature(page);
   await page.getByRole("button", { name: "Sign off the briefing" }).click();
   await expect(page.getByRole("heading", { name: "Briefing signed off on this phone" })).toBeVisible();
   await expect(page.getByTestId("sign-on-status")).toContainText("5 waiting to send");
@@ -188,9 +168,9 @@ test("a briefing taken offline from a revision superseded meanwhile is flagged o
   await page.getByRole("button", { name: "Start" }).click();
   while (!(await page.getByRole("heading", { name: "Sign on" }).isVisible()))
     await page.getByRole("button", { name: "Next" }).click();
-  await signOn(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
+  await signOnOperative(page, "Kieran Lusk", "Brackenfold Lineside", "PTS 77120");
   await page.getByRole("button", { name: "Next" }).click();
-  await sign(page);
+  await drawSignature(page);
   await page.getByRole("button", { name: "Sign off the briefing" }).click();
   await expect(page.getByRole("heading", { name: "Briefing signed off on this phone" })).toBeVisible();
 

@@ -61,6 +61,9 @@ interface PhoneDb extends DBSchema {
 let opened: Promise<IDBPDatabase<PhoneDb>> | null = null;
 
 export function phoneDb(): Promise<IDBPDatabase<PhoneDb>> {
+  // Ask the browser not to clear the phone's records and copies when storage runs low; a browser
+  // may grant it silently, ask the person, or decline (then they are kept as long as it allows).
+  if (!opened) void navigator.storage?.persist?.().catch(() => false);
   opened ??= openDB<PhoneDb>("heftwise-phone", 1, {
     upgrade(db) {
       db.createObjectStore("briefings", { keyPath: "key" }).createIndex("user", "userId");
