@@ -1,6 +1,5 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
-import { ServiceWorker } from "./_components/service-worker";
 import { hyperlegible } from "./fonts";
 import "./globals.css";
 
@@ -20,9 +19,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en-GB" className={hyperlegible.variable}>
-      <body className="min-h-screen font-sans antialiased">
-        <ServiceWorker>{children}</ServiceWorker>
-      </body>
+      <body className="min-h-screen font-sans antialiased">{children}</body>
     </html>
   );
 }
