@@ -161,6 +161,14 @@ async function currentApprovedRevision(assessmentId: string) {
   return row ?? null;
 }
 
+/** The adviser to tell about a revision: its author's account, if it still exists. */
+async function authorOf(authorId: string | null) {
+  if (!authorId) return undefined;
+  return (await getDb()).query.users.findFirst({ where: eq(users.id, authorId) });
+}
+
+const NO_AUTHOR: SendOutcome = { id: "", status: "failed", error: "The assessment has no author to tell" };
+
 /**
  * Tells the adviser that a gang was briefed from a superseded revision: the author of the current
  * revision (else of the superseded one) is e-mailed; the briefing record and the audit trail carry it.
@@ -177,10 +185,8 @@ async function reportSupersededBriefing(
     current: { id: string; number: number; authorId: string | null } | null;
   },
 ): Promise<SendOutcome> {
-  const db = await getDb();
-  const authorId = briefing.current?.authorId ?? briefing.revision.authorId;
-  const adviser = authorId ? await db.query.users.findFirst({ where: eq(users.id, authorId) }) : undefined;
-  if (!adviser) return { id: "", status: "failed", error: "The assessment has no author to tell" };
+  const adviser = await authorOf(briefing.current?.authorId ?? briefing.revision.authorId);
+  if (!adviser) return NO_AUTHOR;
   const body = renderMail({
     heading: `Briefed from a superseded revision: ${briefing.title}`,
     paragraphs: [
@@ -422,10 +428,8 @@ export async function createSiteChangeNote(
       auth: actor.auth,
     });
   });
-  const author = revision.authorId
-    ? await db.query.users.findFirst({ where: eq(users.id, revision.authorId) })
-    : undefined;
-  if (!author) return { mail: { id: "", status: "failed", error: "The assessment has no author to tell" } };
+  const author = await authorOf(revision.authorId);
+  if (!author) return { mail: NO_AUTHOR };
   const body = renderMail({
     heading: `Site change: ${assessment.title}`,
     paragraphs: [

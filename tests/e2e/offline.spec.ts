@@ -193,14 +193,7 @@ test("a briefing taken offline from a revision superseded meanwhile is flagged o
   await signIn(approver, "approver@brackenfold.example");
   await approver.goto(`/reviews/${next}`);
   await approver.getByLabel("Your role").fill("Contracts manager");
-  const pad = approver.getByTestId("signature-pad");
-  await pad.scrollIntoViewIfNeeded();
-  const box = (await pad.boundingBox())!;
-  await approver.mouse.move(box.x + 20, box.y + box.height / 2);
-  await approver.mouse.down();
-  for (let i = 1; i <= 20; i++)
-    await approver.mouse.move(box.x + 20 + i * 12, box.y + box.height / 2 + Math.sin(i) * 25, { steps: 2 });
-  await approver.mouse.up();
+  await drawSignature(approver);
   await approver.getByRole("button", { name: "Countersign and approve…" }).click();
   const dialog = approver.getByRole("dialog");
   await dialog.getByLabel("Your password").fill(DEMO_PASSWORD);

@@ -10,7 +10,7 @@ import { ukDateTime } from "@/lib/dates";
 import { keepOnPhone, newKey, startOnPhone, type OutgoingRecord, type PhoneBriefing } from "../device/store";
 import { sendWaiting } from "../device/send";
 import { usePhone } from "../device/use-phone";
-import { RecordState, SupersededNotice } from "../device/record-state";
+import { RecordState, recordStatus, SupersededNotice } from "../device/record-state";
 
 interface Props {
   userId: string;
@@ -468,22 +468,13 @@ function SignOn({ userId, briefingKey, signOns }: { userId: string; briefingKey:
       <ul className="space-y-1 text-base" data-testid="sign-on-list">
         {signOns.map((r) => (
           <li key={r.seq}>
-            {r.label} — {recordWord(r)}
+            {r.label} — {recordStatus(r, "recorded")}
           </li>
         ))}
       </ul>
     </div>
   );
 }
-
-const recordWord = (r: OutgoingRecord) =>
-  r.state === "sent"
-    ? "recorded"
-    : r.state === "refused"
-      ? `refused: ${r.problem}`
-      : r.problem
-        ? r.problem.toLowerCase()
-        : "waiting for signal";
 
 function SignOff({
   userId,

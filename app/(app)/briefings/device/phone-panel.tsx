@@ -3,19 +3,11 @@
 import Link from "next/link";
 import { ukDate, ukDateTime } from "@/lib/dates";
 import { canKeepCopies } from "./copies";
-import { SupersededNotice } from "./record-state";
-import type { OutgoingRecord } from "./store";
+import { recordStatus, SupersededNotice } from "./record-state";
 import { usePhone } from "./use-phone";
 
 /** Briefings shown in the phone's record for this long after their last record was sent (Heftwise policy). */
 const SHOW_SENT_FOR_DAYS = 2;
-
-const stateWord = (r: OutgoingRecord) =>
-  r.state === "sent"
-    ? `sent ${r.sentAt ? ukDateTime(new Date(r.sentAt)) : ""}`
-    : r.state === "refused"
-      ? `refused: ${r.problem}`
-      : (r.problem ?? "waiting for signal");
 
 /**
  * On the foreman's list: what this phone keeps for use without signal and how fresh it is, revisions
@@ -80,7 +72,7 @@ export function PhonePanel({ userId }: { userId: string }) {
                 {records.map((r) => (
                   <li key={r.seq} className={r.state === "refused" ? "font-bold text-danger" : ""}>
                     {r.kind === "start" ? "Start" : r.kind === "sign-on" ? "Sign-on" : "Sign-off"}: {r.label} —{" "}
-                    {stateWord(r)}
+                    {recordStatus(r, `sent ${r.sentAt ? ukDateTime(new Date(r.sentAt)) : ""}`)}
                   </li>
                 ))}
               </ul>

@@ -2,6 +2,10 @@
 
 import type { OutgoingRecord, PhoneBriefing } from "./store";
 
+/** What became of a record, in words; `sent` is how a sent one reads where it is shown. */
+export const recordStatus = (r: OutgoingRecord, sent: string) =>
+  r.state === "sent" ? sent : r.state === "refused" ? `refused: ${r.problem}` : (r.problem ?? "waiting for signal");
+
 /** One line for a briefing's records: signal, how many signed on, what waits, what was refused. */
 export function RecordState({ records, online }: { records: OutgoingRecord[]; online: boolean }) {
   const signedOn = records.filter((r) => r.kind === "sign-on" && r.state !== "refused").length;

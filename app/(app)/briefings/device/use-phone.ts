@@ -1,14 +1,11 @@
 "use client";
 
 import { useEffect, useState } from "react";
-import { bringCopiesUpToDate } from "./copies";
-import { sendWaiting } from "./send";
 import {
   briefingsOf,
   copiesOf,
   lastContact,
   onChange,
-  probe,
   recordsOf,
   type CopiesState,
   type OutgoingRecord,
@@ -28,13 +25,9 @@ export interface PhoneState {
 /** Signal as far as the phone can tell: a network joined, and Heftwise answering at the last try. */
 const online = () => navigator.onLine && lastContact() !== false;
 
-/** How often waiting records are tried again while a screen is open (Heftwise policy). */
-const RETRY_MS = 5_000;
-
 /**
- * The phone's records for this person, kept current on screen, and the work that goes with having
- * signal: sending what waits and bringing the copies up to date, now, when the signal returns, and
- * every few seconds while anything waits.
+ * The phone's records for this person, kept current on screen. The sending and the copies are the
+ * work of `PhoneSync`, once for the whole app.
  */
 export function usePhone(userId: string): PhoneState {
   const [state, setState] = useState<PhoneState>({
@@ -56,30 +49,16 @@ export function usePhone(userId: string): PhoneState {
       ]);
       if (alive) setState({ loaded: true, online: online(), briefings, records, copies, readAt: Date.now() });
     };
-    const work = async ({ force = false } = {}) => {
-      if (!navigator.onLine || !(await probe())) return;
-      void sendWaiting(userId);
-      void bringCopiesUpToDate(userId, { force });
-    };
-    // Back in signal: what changed while the phone was away matters now.
-    const connectivity = () => {
-      setState((s) => ({ ...s, online: online() }));
-      void work({ force: navigator.onLine });
-    };
+    const connectivity = () => setState((s) => ({ ...s, online: online() }));
     void read();
-    void work();
     const stop = onChange(() => void read());
     window.addEventListener("online", connectivity);
     window.addEventListener("offline", connectivity);
-    const timer = setInterval(() => {
-      if (navigator.onLine) void sendWaiting(userId);
-    }, RETRY_MS);
     return () => {
       alive = false;
       stop();
       window.removeEventListener("online", connectivity);
       window.removeEventListener("offline", connectivity);
-      clearInterval(timer);
     };
   }, [userId]);
 
