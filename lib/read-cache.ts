@@ -5,8 +5,10 @@
  * (single-threaded, in this process) is spared. Identical reads in flight at once share one query.
  * With a PostgreSQL server other instances write too, and every read goes to the server.
  *
- * Callers key by organisation and by everything the answer depends on, and never change an answer
- * they are given (it is shared). Kept on globalThis: Next.js may load this module once per route.
+ * Callers key by organisation and by everything the answer depends on. An answer is shared by every
+ * caller, so it is frozen, deeply, before anyone gets it: a caller that changed one would change
+ * what the next request reads, and fails loudly instead. Kept on globalThis: Next.js may load this
+ * module once per route.
  */
 import { dataVersion, writesAreLocal } from "@/db/client";
 
@@ -36,7 +38,7 @@ export async function cachedRead<T>(key: string, load: () => Promise<T>): Promis
     state.entries.set(key, kept);
     return kept;
   }
-  const pending = load();
+  const pending = load().then(deepFreeze);
   state.entries.set(key, pending);
   if (state.entries.size > MAX_ENTRIES) state.entries.delete(state.entries.keys().next().value!);
   const drop = () => {
@@ -51,6 +53,16 @@ export async function cachedRead<T>(key: string, load: () => Promise<T>): Promis
     drop();
     throw err;
   }
+}
+
+/** Freezes plain objects and arrays all the way down (dates and other class instances are left as they are). */
+function deepFreeze<T>(value: T): T {
+  if (value === null || typeof value !== "object" || Object.isFrozen(value)) return value;
+  const proto = Object.getPrototypeOf(value);
+  if (!Array.isArray(value) && proto !== Object.prototype && proto !== null) return value;
+  Object.freeze(value);
+  for (const inner of Object.values(value)) deepFreeze(inner);
+  return value;
 }
 
 /** A cache key from a function's name, the organisation and its (plain, JSON-able) arguments. */

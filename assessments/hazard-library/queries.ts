@@ -4,6 +4,7 @@ import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { hazardLibrary } from "@/db/schema";
 import { authorize, type Actor } from "@/lib/permissions";
+import { cachedRead, readKey } from "@/lib/read-cache";
 import type { Hazard } from "../method-statement/content";
 import type { LibraryEntry } from "./schemas";
 
@@ -20,11 +21,13 @@ export const toEntry = (row: typeof hazardLibrary.$inferSelect): LibraryEntry =>
 
 export async function listLibrary(actor: Actor | null): Promise<LibraryEntry[]> {
   authorize(actor, "hazard-library:read");
-  const db = await getDb();
-  const rows = await db
-    .select()
-    .from(hazardLibrary)
-    .where(eq(hazardLibrary.organisationId, actor.organisationId))
-    .orderBy(asc(hazardLibrary.hazard));
-  return rows.map(toEntry);
+  return cachedRead(readKey("hazard-library", actor.organisationId), async () => {
+    const db = await getDb();
+    const rows = await db
+      .select()
+      .from(hazardLibrary)
+      .where(eq(hazardLibrary.organisationId, actor.organisationId))
+      .orderBy(asc(hazardLibrary.hazard));
+    return rows.map(toEntry);
+  });
 }

@@ -11,6 +11,7 @@ import { assessments, components, jobs, revisions, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import { AppError, parseOrThrow } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
+import { cachedRead, readKey } from "@/lib/read-cache";
 import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, type Content } from "../method-statement/content";
 import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
@@ -124,19 +125,25 @@ export async function createAssessment(
   });
 }
 
-/** A revision with its assessment, job and the register entries its tasks name; no permission check (callers check). */
+/**
+ * A revision with its assessment, job and the register entries its tasks name; no permission check
+ * (callers check). Kept until the next write (lib/read-cache.ts), frozen: the wizard's page, its API
+ * and every use case that checks a revision first read it, most of them more than once.
+ */
 export async function loadRevision(organisationId: string, revisionId: string) {
   if (!isUuid(revisionId)) throw AppError.notFound("Revision");
-  const db = await getDb();
-  const [row] = await db
-    .select({ revision: revisions, assessment: assessments, job: jobs })
-    .from(revisions)
-    .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
-    .innerJoin(jobs, eq(jobs.id, assessments.jobId))
-    .where(eq(revisions.id, revisionId));
-  if (!row || row.revision.organisationId !== organisationId) throw AppError.notFound("Revision");
-  const content = contentSchema.parse(row.revision.content);
-  return { ...row, content, register: await registerFor(organisationId, content) };
+  return cachedRead(readKey("revision", organisationId, revisionId), async () => {
+    const db = await getDb();
+    const [row] = await db
+      .select({ revision: revisions, assessment: assessments, job: jobs })
+      .from(revisions)
+      .innerJoin(assessments, eq(assessments.id, revisions.assessmentId))
+      .innerJoin(jobs, eq(jobs.id, assessments.jobId))
+      .where(eq(revisions.id, revisionId));
+    if (!row || row.revision.organisationId !== organisationId) throw AppError.notFound("Revision");
+    const content = contentSchema.parse(row.revision.content);
+    return { ...row, content, register: await registerFor(organisationId, content) };
+  });
 }
 
 export async function getRevision(actor: Actor | null, revisionId: string) {
@@ -186,12 +193,14 @@ export async function saveRevision(
 
 export async function listApprovers(actor: Actor | null) {
   authorize(actor, "assessments:submit");
-  const db = await getDb();
-  return db
-    .select({ id: users.id, name: users.name })
-    .from(users)
-    .where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "approver"), eq(users.active, true)))
-    .orderBy(asc(users.name));
+  return cachedRead(readKey("approvers", actor.organisationId), async () => {
+    const db = await getDb();
+    return db
+      .select({ id: users.id, name: users.name })
+      .from(users)
+      .where(and(eq(users.organisationId, actor.organisationId), eq(users.role, "approver"), eq(users.active, true)))
+      .orderBy(asc(users.name));
+  });
 }
 
 /** One task of a draft, changed through the same save (and the same version check) as the whole draft. */

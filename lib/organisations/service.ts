@@ -7,6 +7,7 @@ import { eq } from "drizzle-orm";
 import { getDb, type Tx } from "@/db/client";
 import { organisations, users, type Role } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { cachedRead, readKey } from "@/lib/read-cache";
 import { AppError, isUniqueViolation, parseOrThrow } from "@/lib/errors";
 import { requireFileType } from "@/lib/files";
 import { authorize, type Actor } from "@/lib/permissions";
@@ -66,26 +67,28 @@ export interface OrganisationSettings {
 
 export async function getOrganisationSettings(actor: Actor | null): Promise<OrganisationSettings> {
   authorize(actor, "profile:read");
-  const db = await getDb();
-  const [org] = await db
-    .select({
-      name: organisations.name,
-      reviewPeriodMonths: organisations.reviewPeriodMonths,
-      secondFactorRoles: organisations.secondFactorRoles,
-      reviewReminderDays: organisations.reviewReminderDays,
-      approvalReminderDays: organisations.approvalReminderDays,
-      logoType: organisations.logoType,
-    })
-    .from(organisations)
-    .where(eq(organisations.id, actor.organisationId));
-  return {
-    name: org.name,
-    reviewPeriodMonths: org.reviewPeriodMonths,
-    secondFactorRoles: org.secondFactorRoles,
-    reviewReminders: org.reviewReminderDays.join(","),
-    approvalReminderDays: org.approvalReminderDays,
-    hasLogo: !!org.logoType,
-  };
+  return cachedRead(readKey("organisation-settings", actor.organisationId), async () => {
+    const db = await getDb();
+    const [org] = await db
+      .select({
+        name: organisations.name,
+        reviewPeriodMonths: organisations.reviewPeriodMonths,
+        secondFactorRoles: organisations.secondFactorRoles,
+        reviewReminderDays: organisations.reviewReminderDays,
+        approvalReminderDays: organisations.approvalReminderDays,
+        logoType: organisations.logoType,
+      })
+      .from(organisations)
+      .where(eq(organisations.id, actor.organisationId));
+    return {
+      name: org.name,
+      reviewPeriodMonths: org.reviewPeriodMonths,
+      secondFactorRoles: org.secondFactorRoles,
+      reviewReminders: org.reviewReminderDays.join(","),
+      approvalReminderDays: org.approvalReminderDays,
+      hasLogo: !!org.logoType,
+    };
+  });
 }
 
 export async function updateOrganisationSettings(actor: Actor | null, input: unknown): Promise<void> {

@@ -11,7 +11,7 @@ import { createJob } from "@/assessments/jobs/service";
 import { countComponents } from "@/assessments/load-register/queries";
 import { listComponentsPage } from "@/assessments/load-register/queries";
 import { countRevisionsByStatus } from "@/assessments/revisions/queries";
-import { createAssessment } from "@/assessments/revisions/service";
+import { createAssessment, getRevision, saveRevision } from "@/assessments/revisions/service";
 import { listAssessmentsPage } from "@/assessments/revisions/queries";
 import { cachedRead } from "@/lib/read-cache";
 import type { Actor } from "@/lib/permissions";
@@ -77,5 +77,30 @@ describe("kept answers", () => {
     // Asked again, the read runs afresh.
     expect(await cachedRead("a slow read", () => countJobs(adviser))).toBe(jobsBefore + 1);
     expect(dataVersion()).toBe(version);
+  });
+
+  it("a kept answer is frozen: a caller cannot change what the next caller reads", async () => {
+    const jobs = await listJobs(adviser);
+    if (!writesAreLocal()) return expect(Object.isFrozen(jobs)).toBe(false);
+    expect(Object.isFrozen(jobs)).toBe(true);
+    expect(Object.isFrozen(jobs[0])).toBe(true);
+    const kept = jobs[0] as { name: string };
+    expect(() => {
+      kept.name = "Changed";
+    }).toThrow(TypeError);
+    expect((await listJobs(adviser))[0].name).not.toBe("Changed");
+  });
+
+  it("a saved draft is in the next read of its revision", async () => {
+    const jobs = await listJobs(adviser);
+    const created = await createAssessment(adviser, { jobId: jobs[0].id, title: "Kept revision read" });
+    const first = await getRevision(adviser, created.revisionId);
+    const again = await getRevision(adviser, created.revisionId);
+    if (writesAreLocal()) expect(again).toBe(first);
+    const content = { ...first.content, scope: { ...first.content.scope, summary: "Changed after the first read" } };
+    const saved = await saveRevision(adviser, created.revisionId, { version: first.revision.version, content });
+    const after = await getRevision(adviser, created.revisionId);
+    expect(after.revision.version).toBe(saved.version);
+    expect(after.content.scope.summary).toBe("Changed after the first read");
   });
 });

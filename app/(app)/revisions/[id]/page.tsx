@@ -40,18 +40,20 @@ export default async function RevisionPage({
   const data = await foundOr404(getRevision(actor, id));
   const { revision, assessment, job, content, register } = data;
   const editable = revision.status === "draft" && can(actor, "assessments:write");
-  const siteChanges = revision.status === "draft" ? [] : await listOpenSiteChanges(actor, revision.id);
+  // What the page needs besides the revision, asked for at once rather than one after another.
+  const [siteChanges, approvers, settings, library] = await Promise.all([
+    revision.status === "draft" ? [] : listOpenSiteChanges(actor, revision.id),
+    editable && can(actor, "assessments:submit") ? listApprovers(actor) : [],
+    editable ? getOrganisationSettings(actor) : null,
+    editable && can(actor, "hazard-library:read") ? listLibrary(actor) : [],
+  ]);
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
   // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
-  const rescored =
-    revision.status === "draft"
-      ? rescoredByCurrentRules(
-          content.tasks,
-          revision.results as TaskScore[] | null,
-          reviewContent(content, register).scores,
-        )
-      : [];
+  const review = revision.status === "draft" ? reviewContent(content, register) : null;
+  const rescored = review
+    ? rescoredByCurrentRules(content.tasks, revision.results as TaskScore[] | null, review.scores)
+    : [];
 
   return (
     <div className="space-y-4">
@@ -114,15 +116,16 @@ export default async function RevisionPage({
         </section>
       )}
       <RescoredNotice tasks={rescored} />
-      {editable ? (
+      {editable && settings && review ? (
         <Wizard
           revisionId={revision.id}
           initialVersion={revision.version}
           initialContent={content}
+          initialReview={{ missing: review.missing, worstBand: review.worstBand }}
           register={register}
-          approvers={can(actor, "assessments:submit") ? await listApprovers(actor) : []}
-          reviewPeriodMonths={(await getOrganisationSettings(actor)).reviewPeriodMonths}
-          library={can(actor, "hazard-library:read") ? await listLibrary(actor) : []}
+          approvers={approvers}
+          reviewPeriodMonths={settings.reviewPeriodMonths}
+          library={library}
           initialStep={initialStep}
         />
       ) : (

@@ -18,7 +18,12 @@ import { ukDate } from "@/lib/dates";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import { contentSchema, type Content } from "@/assessments/method-statement/content";
-import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
+import {
+  reviewContent,
+  type RegisterEntry,
+  type Review,
+  type ReviewItem,
+} from "@/assessments/method-statement/score-task";
 import type { LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
@@ -39,6 +44,8 @@ interface Props {
   revisionId: string;
   initialVersion: number;
   initialContent: Content;
+  /** The server's review of the stored draft: what the page shows before anything is changed. */
+  initialReview: Pick<Review, "missing" | "worstBand">;
   register: RegisterEntry[];
   approvers: { id: string; name: string }[];
   /** The organisation's default review period: the submit step suggests a review date that far ahead. */
@@ -54,6 +61,7 @@ export function Wizard({
   revisionId,
   initialVersion,
   initialContent,
+  initialReview,
   register,
   approvers,
   reviewPeriodMonths,
@@ -124,10 +132,13 @@ export function Wizard({
     };
   }, [watch, saveNow, conflicted]);
 
+  // On the server the form holds the stored draft, which the page has just reviewed: scoring it
+  // again here would double the engine's work for every page drawn. In the browser, every change.
   const review = useMemo(() => {
+    if (typeof window === "undefined") return initialReview;
     const parsed = contentSchema.safeParse(values);
     return reviewContent(parsed.success ? parsed.data : getValues(), known);
-  }, [values, known, getValues]);
+  }, [values, known, getValues, initialReview]);
 
   const go = (key: StepKey) => {
     setStep(key);
