@@ -2,12 +2,19 @@
 
 /**
  * A list read from the API page by page (limit/cursor), with search, filters and sorting done on
- * the server: TanStack Query fetches, TanStack Table renders.
+ * the server: TanStack Query fetches, and the rows arrive sorted and paged, so the table only draws
+ * them, column by column (a table library's row models would only repeat, on every render of every
+ * page the server draws, what the API already did).
  */
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import { apiRequest } from "@/lib/api-client";
+
+export interface Column<T> {
+  id: string;
+  header: string;
+  cell: (row: T) => ReactNode;
+}
 
 export interface FilterSpec {
   key: string;
@@ -17,7 +24,9 @@ export interface FilterSpec {
 
 interface Props<T> {
   endpoint: string;
-  columns: ColumnDef<T, unknown>[];
+  columns: Column<T>[];
+  /** Each row's key. */
+  rowKey: (row: T) => string;
   filters?: FilterSpec[];
   /** Sort keys the API accepts, by column id: `[ascending, descending]`. */
   sortKeys?: Record<string, [string, string]>;
@@ -39,6 +48,7 @@ interface PageResponse<T> {
 export function ServerTable<T>({
   endpoint,
   columns,
+  rowKey,
   filters = [],
   sortKeys = {},
   defaultSort,
@@ -69,13 +79,6 @@ export function ServerTable<T>({
     queryFn: ({ signal }) => apiRequest<PageResponse<T>>(`${endpoint}?${params}`, { signal }),
   });
 
-  const table = useReactTable({
-    data: query.data?.items ?? [],
-    columns,
-    getCoreRowModel: getCoreRowModel(),
-    manualPagination: true,
-    manualSorting: true,
-  });
   const restart = () => setCursors([undefined]);
 
   return (
@@ -126,46 +129,44 @@ export function ServerTable<T>({
           <table className="w-full text-left text-sm">
             <caption className="sr-only">{caption}</caption>
             <thead className="bg-paper">
-              {table.getHeaderGroups().map((group) => (
-                <tr key={group.id}>
-                  {group.headers.map((header) => {
-                    const keys = sortKeys[header.column.id];
-                    const state = keys
-                      ? sort === keys[0]
-                        ? "ascending"
-                        : sort === keys[1]
-                          ? "descending"
-                          : "none"
-                      : undefined;
-                    return (
-                      <th key={header.id} scope="col" className="px-3 py-2" aria-sort={state}>
-                        {keys ? (
-                          <button
-                            type="button"
-                            className="font-bold underline decoration-dotted"
-                            onClick={() => {
-                              setSort(sort === keys[0] ? keys[1] : keys[0]);
-                              restart();
-                            }}
-                          >
-                            {flexRender(header.column.columnDef.header, header.getContext())}
-                            {state === "ascending" ? " ▲" : state === "descending" ? " ▼" : ""}
-                          </button>
-                        ) : (
-                          flexRender(header.column.columnDef.header, header.getContext())
-                        )}
-                      </th>
-                    );
-                  })}
-                </tr>
-              ))}
+              <tr>
+                {columns.map((column) => {
+                  const keys = sortKeys[column.id];
+                  const state = keys
+                    ? sort === keys[0]
+                      ? "ascending"
+                      : sort === keys[1]
+                        ? "descending"
+                        : "none"
+                    : undefined;
+                  return (
+                    <th key={column.id} scope="col" className="px-3 py-2" aria-sort={state}>
+                      {keys ? (
+                        <button
+                          type="button"
+                          className="font-bold underline decoration-dotted"
+                          onClick={() => {
+                            setSort(sort === keys[0] ? keys[1] : keys[0]);
+                            restart();
+                          }}
+                        >
+                          {column.header}
+                          {state === "ascending" ? " ▲" : state === "descending" ? " ▼" : ""}
+                        </button>
+                      ) : (
+                        column.header
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
             </thead>
             <tbody>
-              {table.getRowModel().rows.map((row) => (
-                <tr key={row.id} className="border-t border-rule align-top">
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-3 py-2">
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+              {(query.data?.items ?? []).map((row) => (
+                <tr key={rowKey(row)} className="border-t border-rule align-top">
+                  {columns.map((column) => (
+                    <td key={column.id} className="px-3 py-2">
+                      {column.cell(row)}
                     </td>
                   ))}
                 </tr>

@@ -11,7 +11,7 @@ import { randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { parseArgs } from "node:util";
-import { buildIfNeeded } from "./build";
+import { buildIfNeeded, SERVER_NODE_FLAGS } from "./build";
 
 const root = process.cwd();
 const { values: args } = parseArgs({
@@ -78,7 +78,7 @@ async function main() {
   const fake = await startMailFake({ smtpPort: Number(args["smtp-port"]), httpPort: Number(args["inbox-port"]) });
 
   // The production server (server.ts): Next.js behind a server that cleans forwarded addresses.
-  const server = spawn(process.execPath, ["--import", "tsx", path.join(root, "server.ts")], {
+  const server = spawn(process.execPath, [...SERVER_NODE_FLAGS, "--import", "tsx", path.join(root, "server.ts")], {
     stdio: ["ignore", "pipe", "inherit"],
     env: { ...env, PORT: String(port), HOSTNAME: "127.0.0.1" },
   });

@@ -15,7 +15,7 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { parseArgs } from "node:util";
-import { buildIfNeeded } from "@/assessments/cli/build";
+import { buildIfNeeded, SERVER_NODE_FLAGS } from "@/assessments/cli/build";
 import { signInCookie } from "./sign-in";
 
 const { values: args } = parseArgs({
@@ -79,7 +79,7 @@ function startServer(): Promise<ChildProcess> {
   // --expose-gc and the probe: the bench can ask for a full collection and read what is still held.
   const server = spawn(
     process.execPath,
-    ["--expose-gc", "--import", "./tests/bench/memory-probe.mjs", "--import", "tsx", "server.ts"],
+    ["--expose-gc", ...SERVER_NODE_FLAGS, "--import", "./tests/bench/memory-probe.mjs", "--import", "tsx", "server.ts"],
     { env, stdio: ["ignore", "pipe", "pipe"] },
   );
   server.stderr!.on("data", (chunk: Buffer) => {

@@ -1,9 +1,8 @@
 "use client";
 
-import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { BandChip } from "@/app/_components/results/band";
-import { ServerTable, type FilterSpec } from "@/app/_components/server-table";
+import { ServerTable, type Column, type FilterSpec } from "@/app/_components/server-table";
 import type { Band } from "@/assessments/rules/types";
 import { ukDate, ukDateTime } from "@/lib/dates";
 
@@ -21,26 +20,26 @@ interface Row {
 
 const STATUS = { draft: "Draft", submitted: "Submitted", approved: "Approved", superseded: "Superseded" } as const;
 
-const columns: ColumnDef<Row, unknown>[] = [
+const columns: Column<Row>[] = [
   {
     id: "title",
     header: "Assessment",
-    cell: ({ row }) => (
-      <Link href={`/revisions/${row.original.revisionId}`} className="font-bold text-accent underline">
-        {row.original.title}
+    cell: (row) => (
+      <Link href={`/revisions/${row.revisionId}`} className="font-bold text-accent underline">
+        {row.title}
       </Link>
     ),
   },
-  { id: "job", header: "Job", cell: ({ row }) => row.original.jobName },
-  { id: "number", header: "Rev.", cell: ({ row }) => row.original.number },
-  { id: "status", header: "Status", cell: ({ row }) => STATUS[row.original.status] },
-  { id: "worstBand", header: "Worst band", cell: ({ row }) => <BandChip band={row.original.worstBand} /> },
-  { id: "author", header: "Author", cell: ({ row }) => row.original.authorName ?? "—" },
+  { id: "job", header: "Job", cell: (row) => row.jobName },
+  { id: "number", header: "Rev.", cell: (row) => row.number },
+  { id: "status", header: "Status", cell: (row) => STATUS[row.status] },
+  { id: "worstBand", header: "Worst band", cell: (row) => <BandChip band={row.worstBand} /> },
+  { id: "author", header: "Author", cell: (row) => row.authorName ?? "—" },
   {
     id: "reviewDate",
     header: "Review by",
-    cell: ({ row }) => {
-      const { reviewDate, status } = row.original;
+    cell: (row) => {
+      const { reviewDate, status } = row;
       if (!reviewDate) return "—";
       const due = status === "approved" && Date.parse(reviewDate) <= Date.now() + 30 * 86_400_000;
       if (!due) return <span className="whitespace-nowrap">{ukDate(reviewDate)}</span>;
@@ -54,7 +53,7 @@ const columns: ColumnDef<Row, unknown>[] = [
       );
     },
   },
-  { id: "updatedAt", header: "Last saved", cell: ({ row }) => ukDateTime(new Date(row.original.updatedAt)) },
+  { id: "updatedAt", header: "Last saved", cell: (row) => ukDateTime(new Date(row.updatedAt)) },
 ];
 
 export function AssessmentsTable({
@@ -82,6 +81,7 @@ export function AssessmentsTable({
     <ServerTable<Row>
       endpoint="/api/v1/assessments"
       columns={columns}
+      rowKey={(row) => row.revisionId}
       filters={filters}
       caption="Assessments"
       searchLabel="Search titles"

@@ -1,47 +1,43 @@
 "use client";
 
-import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { ServerTable } from "@/app/_components/server-table";
+import { ServerTable, type Column } from "@/app/_components/server-table";
 import type { Component } from "@/db/schema";
 
 import { GRIP_LABELS as GRIP, MASS_SOURCE_LABELS as SOURCE } from "@/assessments/load-register/schemas";
 
-const columns: ColumnDef<Component, unknown>[] = [
+const columns: Column<Component>[] = [
   {
     id: "name",
     header: "Component",
-    cell: ({ row }) => (
-      <Link href={`/load-register/${row.original.id}`} className="font-bold text-accent underline">
-        {row.original.name}
+    cell: (row) => (
+      <Link href={`/load-register/${row.id}`} className="font-bold text-accent underline">
+        {row.name}
       </Link>
     ),
   },
-  { id: "massKg", header: "Mass (kg)", cell: ({ row }) => <span className="tabular-nums">{row.original.massKg}</span> },
+  { id: "massKg", header: "Mass (kg)", cell: (row) => <span className="tabular-nums">{row.massKg}</span> },
   {
     id: "size",
     header: "L × W × H (mm)",
-    cell: ({ row }) => {
-      const c = row.original;
-      return (
-        <span className="tabular-nums">
-          {c.lengthMm && c.widthMm && c.heightMm ? `${c.lengthMm} × ${c.widthMm} × ${c.heightMm}` : "—"}
-        </span>
-      );
-    },
+    cell: (c) => (
+      <span className="tabular-nums">
+        {c.lengthMm && c.widthMm && c.heightMm ? `${c.lengthMm} × ${c.widthMm} × ${c.heightMm}` : "—"}
+      </span>
+    ),
   },
-  { id: "grip", header: "Grip", cell: ({ row }) => GRIP[row.original.grip] },
+  { id: "grip", header: "Grip", cell: (row) => GRIP[row.grip] },
   {
     id: "massSource",
     header: "Mass from",
-    cell: ({ row }) =>
-      row.original.massSource === "estimated" ? (
+    cell: (row) =>
+      row.massSource === "estimated" ? (
         <span className="rounded bg-band-watch px-2 py-0.5 font-bold text-white">Estimated — confirm</span>
       ) : (
-        SOURCE[row.original.massSource]
+        SOURCE[row.massSource]
       ),
   },
-  { id: "notes", header: "Notes", cell: ({ row }) => <span className="text-muted">{row.original.notes ?? ""}</span> },
+  { id: "notes", header: "Notes", cell: (row) => <span className="text-muted">{row.notes ?? ""}</span> },
 ];
 
 export function RegisterTable() {
@@ -49,6 +45,7 @@ export function RegisterTable() {
     <ServerTable<Component>
       endpoint="/api/v1/components"
       columns={columns}
+      rowKey={(row) => row.id}
       caption="Load register"
       searchLabel="Search by name"
       emptyText="No component matches."
