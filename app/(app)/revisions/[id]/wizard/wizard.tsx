@@ -11,7 +11,6 @@ import {
   FormMessage,
   PrimaryButton,
   SelectField,
-  TextField,
 } from "@/app/_components/form";
 import { UkDateInput } from "@/app/_components/uk-date-input";
 import { ukDate } from "@/lib/dates";
