@@ -299,6 +299,13 @@ export const OPERATIONS: Operation[] = [
     responses: { "200": "Sent, or why not" },
   },
   {
+    path: "/hazard-library",
+    method: "get",
+    summary: "The organisation's hazard library, for copying hazards and their controls into an assessment",
+    permission: "hazard-library:read",
+    responses: { "200": "Every entry, by hazard" },
+  },
+  {
     path: "/briefings/briefable",
     method: "get",
     summary: "The approved revisions the caller can brief from: what a foreman's phone keeps a copy of",

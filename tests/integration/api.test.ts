@@ -23,6 +23,8 @@ const revisionRoute = await import("@/app/api/v1/revisions/[id]/route");
 const submitRoute = await import("@/app/api/v1/revisions/[id]/submit/route");
 const tasksRoute = await import("@/app/api/v1/revisions/[id]/tasks/route");
 const taskRoute = await import("@/app/api/v1/revisions/[id]/tasks/[taskId]/route");
+const hazardLibraryRoute = await import("@/app/api/v1/hazard-library/route");
+const { listLibrary } = await import("@/assessments/hazard-library/queries");
 
 const actors = {} as Record<Role, Actor>;
 let other: Actor;
@@ -325,5 +327,21 @@ describe("assessments, revisions and tasks", () => {
     expect(notReady.status).toBe(422);
     expect(notReady.json.error.issues.length).toBeGreaterThan(0);
     expect((await call(actors.approver, submitRoute.POST as Handler, { body: {}, params: { id } })).status).toBe(403);
+  });
+});
+
+describe("hazard library", () => {
+  it("advisers read their organisation's whole library; other organisations see only their own; foremen are refused", async () => {
+    const read = await call(actors.adviser, hazardLibraryRoute.GET);
+    expect(read.status).toBe(200);
+    const hazards = (read.json.items as { hazard: string; controls: unknown[] }[]).map((e) => e.hazard);
+    expect(hazards.length).toBeGreaterThan(0);
+    expect(hazards).toEqual((await listLibrary(actors.adviser)).map((e) => e.hazard));
+    expect((read.json.items as { controls: unknown[] }[]).every((e) => e.controls.length > 0)).toBe(true);
+    const theirs = await call(other, hazardLibraryRoute.GET);
+    expect(theirs.status).toBe(200);
+    expect(theirs.json.items.map((e: { hazard: string }) => e.hazard)).not.toEqual(hazards);
+    expect((await call(actors.foreman, hazardLibraryRoute.GET)).status).toBe(403);
+    expect((await call(null, hazardLibraryRoute.GET)).status).toBe(401);
   });
 });

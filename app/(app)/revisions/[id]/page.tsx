@@ -3,7 +3,6 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
 import { getRevision, listApprovers } from "@/assessments/revisions/service";
-import { listLibrary } from "@/assessments/hazard-library/queries";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
@@ -41,11 +40,10 @@ export default async function RevisionPage({
   const { revision, assessment, job, content, register } = data;
   const editable = revision.status === "draft" && can(actor, "assessments:write");
   // What the page needs besides the revision, asked for at once rather than one after another.
-  const [siteChanges, approvers, settings, library] = await Promise.all([
+  const [siteChanges, approvers, settings] = await Promise.all([
     revision.status === "draft" ? [] : listOpenSiteChanges(actor, revision.id),
     editable && can(actor, "assessments:submit") ? listApprovers(actor) : [],
     editable ? getOrganisationSettings(actor) : null,
-    editable && can(actor, "hazard-library:read") ? listLibrary(actor) : [],
   ]);
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
@@ -125,7 +123,7 @@ export default async function RevisionPage({
           register={register}
           approvers={approvers}
           reviewPeriodMonths={settings.reviewPeriodMonths}
-          library={library}
+          fromLibrary={can(actor, "hazard-library:read")}
           initialStep={initialStep}
         />
       ) : (

@@ -1,10 +1,12 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { hazardFromLibrary, type LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { SecondaryButton } from "@/app/_components/form";
 import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating, type Content } from "@/assessments/method-statement/content";
+import { apiRequest, messageOf } from "@/lib/api-client";
 import { Choice, DateField, Num, Text } from "./fields";
 
 const newId = (prefix: string) => `${prefix}-${crypto.randomUUID().slice(0, 8)}`;
@@ -124,10 +126,39 @@ function HazardRow({ index, onRemove }: { index: number; onRemove: () => void })
 }
 
 /** A hazard from the organisation's library, copied into this assessment to be changed for the job. */
-function LibraryPicker({ library, onPick }: { library: LibraryEntry[]; onPick: (entry: LibraryEntry) => void }) {
+/**
+ * The organisation's hazard library, asked for when the wizard opens (see Wizard) rather than sent
+ * with every page of it: only the hazards step uses it.
+ */
+export const hazardLibraryQuery = {
+  queryKey: ["hazard-library"],
+  queryFn: ({ signal }: { signal: AbortSignal }) =>
+    apiRequest<{ items: LibraryEntry[] }>("/api/v1/hazard-library", { signal }).then((r) => r.items),
+  staleTime: 60_000,
+};
+
+function LibraryPicker({ onPick }: { onPick: (entry: LibraryEntry) => void }) {
   const [chosen, setChosen] = useState("");
-  if (library.length === 0) return null;
-  const entry = library.find((e) => e.id === chosen);
+  const library = useQuery(hazardLibraryQuery);
+  if (library.isPending)
+    return (
+      <p role="status" className="rounded-lg border border-rule bg-white p-3 text-sm text-muted">
+        Loading the hazard library…
+      </p>
+    );
+  if (library.isError)
+    return (
+      <div role="alert" className="flex flex-wrap items-center gap-2 rounded-lg border-l-4 border-danger bg-white p-3">
+        <p className="text-sm">
+          The hazard library could not be loaded ({messageOf(library.error)}). Add hazards below by hand, or try again.
+        </p>
+        <SecondaryButton type="button" onClick={() => void library.refetch()}>
+          Try again
+        </SecondaryButton>
+      </div>
+    );
+  if (library.data.length === 0) return null;
+  const entry = library.data.find((e) => e.id === chosen);
   return (
     <div className="flex flex-wrap items-end gap-2 rounded-lg border border-rule bg-white p-3">
       <div className="min-w-0 flex-1">
@@ -141,7 +172,7 @@ function LibraryPicker({ library, onPick }: { library: LibraryEntry[]; onPick: (
           className="mt-1 block w-full rounded border border-rule bg-white px-2 py-1.5"
         >
           <option value="">Choose a hazard…</option>
-          {library.map((e) => (
+          {library.data.map((e) => (
             <option key={e.id} value={e.id}>
               {e.hazard}
             </option>
@@ -162,7 +193,8 @@ function LibraryPicker({ library, onPick }: { library: LibraryEntry[]; onPick: (
   );
 }
 
-export function HazardsStep({ library }: { library: LibraryEntry[] }) {
+/** `fromLibrary`: whether the caller may read the hazard library (and is offered its entries). */
+export function HazardsStep({ fromLibrary }: { fromLibrary: boolean }) {
   const { control } = useFormContext<Content>();
   const { fields, append, remove } = useFieldArray({ control, name: "hazards" });
   return (
@@ -171,7 +203,7 @@ export function HazardsStep({ library }: { library: LibraryEntry[] }) {
         Likelihood and severity from 1 to 5; the rating is their product. Prefer controls higher in the hierarchy:
         eliminate, substitute, engineering, then administrative, then PPE.
       </p>
-      <LibraryPicker library={library} onPick={(entry) => append(hazardFromLibrary(entry, newId("h")))} />
+      {fromLibrary && <LibraryPicker onPick={(entry) => append(hazardFromLibrary(entry, newId("h")))} />}
       {fields.map((field, i) => (
         <HazardRow key={field.id} index={i} onRemove={() => remove(i)} />
       ))}

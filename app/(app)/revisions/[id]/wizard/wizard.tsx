@@ -1,6 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Controller, FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
@@ -23,11 +24,10 @@ import {
   type Review,
   type ReviewItem,
 } from "@/assessments/method-statement/score-task";
-import type { LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
 import { GroundStep, LineStep } from "./lineside-steps";
-import { EmergencyStep, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
+import { EmergencyStep, hazardLibraryQuery, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
 import { STEPS, type StepKey } from "./steps-list";
 import { ApiError, apiRequest, applyFieldIssues, messageOf } from "@/lib/api-client";
 
@@ -49,8 +49,8 @@ interface Props {
   approvers: { id: string; name: string }[];
   /** The organisation's default review period: the submit step suggests a review date that far ahead. */
   reviewPeriodMonths: number;
-  /** The organisation's hazard library, for the hazards step. */
-  library: LibraryEntry[];
+  /** Whether the caller may copy hazards from the organisation's hazard library. */
+  fromLibrary: boolean;
   initialStep?: StepKey;
 }
 
@@ -64,7 +64,7 @@ export function Wizard({
   register,
   approvers,
   reviewPeriodMonths,
-  library,
+  fromLibrary,
   initialStep = "scope",
 }: Props) {
   const router = useRouter();
@@ -89,6 +89,11 @@ export function Wizard({
     [],
   );
   const values = useWatch({ control });
+  // The library is ready by the time the adviser reaches the hazards step.
+  const queryClient = useQueryClient();
+  useEffect(() => {
+    if (fromLibrary) void queryClient.prefetchQuery(hazardLibraryQuery);
+  }, [fromLibrary, queryClient]);
 
   const saveNow = useCallback(async (): Promise<boolean> => {
     const parsed = contentSchema.safeParse(getValues());
@@ -176,7 +181,7 @@ export function Wizard({
             {step === "ground" && <GroundStep />}
             {step === "sequence" && <SequenceStep />}
             {step === "loads" && <LoadsStep register={known} onChosen={remember} revisionId={revisionId} />}
-            {step === "hazards" && <HazardsStep library={library} />}
+            {step === "hazards" && <HazardsStep fromLibrary={fromLibrary} />}
             {step === "people" && <PeopleStep />}
             {step === "emergency" && <EmergencyStep />}
           </form>
