@@ -1,8 +1,10 @@
 /**
- * `npm run bench:api [-- --assessments 10000 --duration 10 --connections 50 --database-url URL]`:
+ * `npm run bench:api [-- --assessments 10000 --duration 5 --rounds 3 --connections 50 --database-url URL]`:
  * the production build on a scale dataset (`npm run seed:scale`), loaded by autocannon at 50
  * concurrent connections, endpoint by endpoint: p50/p95/p99 latency, requests a second, errors, and
- * the server's memory over the run. Beside them, two floors of the same build: a minimal route
+ * the server's memory over the run. Every endpoint is loaded in each of several rounds, one after
+ * another, and each figure is the median of the rounds: a burst of work elsewhere on the machine
+ * spoils one round of one endpoint, not the comparison between endpoints. Beside them, two floors of the same build: a minimal route
  * handler (the framework's own cost) and a signed-in request that reads no table (ours).
  *
  * Targets (issue "Scale and speed"): every list and search within 2× the signed-in floor's p95; the
@@ -21,7 +23,8 @@ import { signInCookie } from "./sign-in";
 const { values: args } = parseArgs({
   options: {
     assessments: { type: "string", default: "10000" },
-    duration: { type: "string", default: "10" },
+    duration: { type: "string", default: "5" },
+    rounds: { type: "string", default: "3" },
     connections: { type: "string", default: "50" },
     "database-url": { type: "string", default: process.env.DATABASE_URL },
     port: { type: "string", default: "3390" },
@@ -31,6 +34,7 @@ const root = process.cwd();
 const port = Number(args.port);
 const origin = `http://127.0.0.1:${port}`;
 const duration = Number(args.duration);
+const rounds = Number(args.rounds);
 const connections = Number(args.connections);
 const databaseUrl = args["database-url"];
 const dataDir = path.join(root, ".bench-data", `scale-${args.assessments}`);
@@ -294,23 +298,38 @@ async function main() {
     ];
 
     console.log(
-      `\nHeftwise bench:api — ${args.assessments} assessments on the ${where}; ${connections} connections, ${duration} s each (after 2 s of warming)\n`,
+      `\nHeftwise bench:api — ${args.assessments} assessments on the ${where}; ${connections} connections; ${rounds} rounds of ${duration} s an endpoint (after 2 s of warming); the median round of each\n`,
     );
     // Warm every route once under load, so that the first measured one does not pay for compiling.
     for (const e of endpoints) await load(e, cookie, 2);
     const memoryStart = await heldMemory(server);
-    const results: Result[] = [];
-    for (const e of endpoints) {
-      const r = await load(e, cookie, duration);
-      results.push(r);
+    const byRound: Result[][] = endpoints.map(() => []);
+    for (let round = 0; round < rounds; round++)
+      for (const [i, e] of endpoints.entries()) byRound[i].push(await load(e, cookie, duration));
+    const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+    const results: Result[] = byRound.map((runs) => ({
+      name: runs[0].name,
+      kind: runs[0].kind,
+      p50: median(runs.map((r) => r.p50)),
+      p95: median(runs.map((r) => r.p95)),
+      p99: median(runs.map((r) => r.p99)),
+      rps: median(runs.map((r) => r.rps)),
+      errors: runs.reduce((n, r) => n + r.errors, 0),
+      requests: runs.reduce((n, r) => n + r.requests, 0),
+    }));
+    for (const [i, r] of results.entries()) {
+      const p95s = byRound[i].map((run) => run.p95);
       console.log(
-        `${r.name.padEnd(44)} p50 ${r.p50.toFixed(0).padStart(5)} ms  p95 ${r.p95.toFixed(0).padStart(5)} ms  p99 ${r.p99.toFixed(0).padStart(5)} ms  ${r.rps.toFixed(0).padStart(5)} req/s  ${r.errors} errors  ${rssMb(server.pid!).toFixed(0).padStart(5)} MB`,
+        `${r.name.padEnd(44)} p50 ${r.p50.toFixed(0).padStart(5)} ms  p95 ${r.p95.toFixed(0).padStart(5)} ms (rounds ${Math.min(...p95s).toFixed(0)}–${Math.max(...p95s).toFixed(0)})  p99 ${r.p99.toFixed(0).padStart(5)} ms  ${r.rps.toFixed(0).padStart(5)} req/s  ${r.errors} errors`,
       );
     }
+    console.log(
+      `Server resident memory over the rounds: ${Math.min(...memory).toFixed(0)}–${Math.max(...memory).toFixed(0)} MB`,
+    );
     // Memory: the same run again. A leak grows with every request; a heap that has found its size
     // does not. Compared after a full collection, so that garbage not yet collected is not counted.
     const afterFirst = await heldMemory(server);
-    for (const e of endpoints) await load(e, cookie, Math.max(2, duration / 2));
+    for (const e of endpoints) await load(e, cookie, duration);
     const afterSecond = await heldMemory(server);
     const held = (m: { heap: number; external: number }) => m.heap + m.external;
 
