@@ -97,12 +97,17 @@ async function acquireLock(dataDir: string): Promise<() => void> {
 async function open(): Promise<Handle> {
   const { DATABASE_URL, pgliteDir } = databaseConfig();
   if (DATABASE_URL) {
-    const [{ Pool }, { drizzle }, { migrate }] = await Promise.all([
+    const [{ Client, Pool }, { drizzle }, { migrate }] = await Promise.all([
       import("pg"),
       import("drizzle-orm/node-postgres"),
       import("drizzle-orm/node-postgres/migrator"),
     ]);
     const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
+    countServerWrites(pool);
+    // The server processes behind this pool's connections: their notices are of writes already counted.
+    const own = new Set<number>();
+    pool.on("connect", (client) => own.add((client as unknown as { processID: number }).processID));
+    pool.on("remove", (client) => own.delete((client as unknown as { processID: number }).processID));
     // An idle connection the server ends (a restart, a failover, an administrator) must not take the
     // process down: the pool drops it and opens another on the next query.
     pool.on("error", (err) =>
@@ -111,9 +116,20 @@ async function open(): Promise<Handle> {
       ),
     );
     const db = drizzle(pool, { schema });
+    countTransactions(db);
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
+    const stopListening = await listenForWrites(
+      () => new Client({ connectionString: DATABASE_URL }),
+      (processId) => own.has(processId),
+    );
     // Both drivers expose the same query builder; the PGlite type stands for both.
-    return { db: db as unknown as Db, close: () => pool.end() };
+    return {
+      db: db as unknown as Db,
+      close: async () => {
+        await stopListening();
+        await pool.end();
+      },
+    };
   }
   const [{ PGlite }, { pg_trgm }, { drizzle }, { migrate }] = await Promise.all([
     import("@electric-sql/pglite"),
@@ -146,19 +162,105 @@ async function open(): Promise<Handle> {
 }
 
 const writes = ((
-  globalThis as unknown as { __heftwiseWrites?: { version: number; local: boolean } }
-).__heftwiseWrites ??= { version: 0, local: false });
+  globalThis as unknown as { __heftwiseWrites?: { version: number; local: boolean; listening: boolean } }
+).__heftwiseWrites ??= { version: 0, local: false, listening: false });
 
 /**
- * The embedded database's data version: it moves on each time a write statement or a transaction
- * completes (successfully or not). A result read while it stayed the same is still true; this
- * process is the database's only user (the lock), so nothing else can change the data. See
+ * The data version: it moves on each time a write statement or a transaction of this process
+ * completes (successfully or not), and, on a PostgreSQL server, each time the server says another
+ * process committed a write. A result read while it stayed the same is still true. See
  * lib/read-cache.ts.
  */
 export const dataVersion = () => writes.version;
 
-/** Whether every write passes through this process (the embedded database is open), so reads may be kept. */
+/** Whether every write passes through this process (the embedded database is open). */
 export const writesAreLocal = () => writes.local;
+
+/**
+ * Whether this process hears of every write: the embedded database's are all its own; on a
+ * PostgreSQL server, while its listener is connected. Only then may reads be kept between writes.
+ */
+export const writesAreHeard = () => writes.local || writes.listening;
+
+const isRead = (statement: unknown) => {
+  const text = typeof statement === "string" ? statement : (statement as { text?: unknown } | null)?.text;
+  return typeof text === "string" && /^\s*(select|show|explain)\b/i.test(text);
+};
+
+/** A PostgreSQL server's pool: its own write statements move the version as soon as they complete. */
+function countServerWrites(pool: { query: (...args: never[]) => unknown }) {
+  const query = pool.query.bind(pool) as (...args: unknown[]) => unknown;
+  pool.query = ((...args: unknown[]) => {
+    const result = query(...args);
+    if (isRead(args[0]) || !(result instanceof Promise)) return result;
+    return result.finally(() => writes.version++);
+  }) as never;
+}
+
+/** Drizzle's transactions on a server run on a client of their own: the version moves when one ends. */
+function countTransactions(db: { transaction: (...args: never[]) => Promise<unknown> }) {
+  const transaction = db.transaction.bind(db) as (...args: unknown[]) => Promise<unknown>;
+  db.transaction = ((...args: unknown[]) => transaction(...args).finally(() => writes.version++)) as never;
+}
+
+interface Listener {
+  on(event: "notification", listener: (notice: { processId: number }) => void): unknown;
+  on(event: "error" | "end", listener: () => void): unknown;
+  connect(): Promise<unknown>;
+  query(text: string): Promise<unknown>;
+  end(): Promise<void>;
+}
+
+/**
+ * On a PostgreSQL server: listens for the notices every write sends once it commits (migration
+ * 0014), so that other processes' writes move the version too (this process's own moved it when
+ * they completed, and their notices are passed over). While the listener is down, nothing
+ * is kept (every read goes to the server); it reconnects every second, and forgets everything kept
+ * before, since notices may have been missed meanwhile.
+ */
+async function listenForWrites(
+  newClient: () => Listener,
+  isOwn: (processId: number) => boolean,
+): Promise<() => Promise<void>> {
+  let current: Listener | null = null;
+  let stopped = false;
+  let retry: ReturnType<typeof setTimeout> | undefined;
+  const lost = (client: Listener) => {
+    if (client !== current) return;
+    current = null;
+    writes.listening = false;
+    writes.version++;
+    client.end().catch(() => {});
+    if (!stopped) retry = setTimeout(() => void connect(), 1000);
+  };
+  const connect = async () => {
+    const client = newClient();
+    current = client;
+    client.on("notification", (notice) => {
+      if (!isOwn(notice.processId)) writes.version++;
+    });
+    client.on("error", () => lost(client));
+    client.on("end", () => lost(client));
+    try {
+      await client.connect();
+      await client.query("LISTEN heftwise_data_changed");
+      if (client !== current) return;
+      writes.version++;
+      writes.listening = true;
+    } catch {
+      lost(client);
+    }
+  };
+  await connect();
+  return async () => {
+    stopped = true;
+    clearTimeout(retry);
+    const client = current;
+    current = null;
+    writes.listening = false;
+    await client?.end().catch(() => {});
+  };
+}
 
 function countWrites(client: {
   query: (...args: never[]) => Promise<unknown>;
@@ -174,9 +276,8 @@ function countWrites(client: {
         if (isWrite(...args)) writes.version++;
       }
     };
-  const reads = (sql: unknown) => typeof sql === "string" && /^\s*(select|show|explain)\b/i.test(sql);
-  client.query = wrap(client.query.bind(client), (sql) => !reads(sql));
-  client.exec = wrap(client.exec.bind(client), (sql) => !reads(sql));
+  client.query = wrap(client.query.bind(client), (sql) => !isRead(sql));
+  client.exec = wrap(client.exec.bind(client), (sql) => !isRead(sql));
   client.transaction = wrap(client.transaction.bind(client), () => true);
 }
 

@@ -1,16 +1,19 @@
 /**
- * Keeps the answers of list and count queries until the data changes. On the embedded database
- * this process makes every write (db/client.ts counts them), so an answer read while the data
- * version stayed the same is exactly what the database would answer again — and the database
- * (single-threaded, in this process) is spared. Identical reads in flight at once share one query.
- * With a PostgreSQL server other instances write too, and every read goes to the server.
+ * Keeps the answers of reads until the data changes: lists, counts, a revision. db/client.ts moves
+ * the data version when a write completes. On the embedded database this process makes every write,
+ * so an answer read while the version stayed the same is exactly what the database would answer
+ * again — and the database (single-threaded, in this process) is spared. On a PostgreSQL server other
+ * processes write too: each write's notice, sent when it commits (migration 0014), moves the version
+ * here a moment later. Until it arrives an answer may predate that other process's commit, as a read
+ * begun just before it would; this process's own writes move the version at once. While the
+ * listener is down, nothing is kept. Identical reads in flight at once share one query.
  *
  * Callers key by organisation and by everything the answer depends on. An answer is shared by every
  * caller, so it is frozen, deeply, before anyone gets it: a caller that changed one would change
  * what the next request reads, and fails loudly instead. Kept on globalThis: Next.js may load this
  * module once per route.
  */
-import { dataVersion, writesAreLocal } from "@/db/client";
+import { dataVersion, writesAreHeard } from "@/db/client";
 
 const MAX_ENTRIES = 500;
 
@@ -25,7 +28,7 @@ const state = ((globalThis as unknown as { __heftwiseReadCache?: State }).__heft
 });
 
 export async function cachedRead<T>(key: string, load: () => Promise<T>): Promise<T> {
-  if (!writesAreLocal()) return load();
+  if (!writesAreHeard()) return load();
   const version = dataVersion();
   if (state.version !== version) {
     state.version = version;
