@@ -1,9 +1,13 @@
 /**
  * Remembers, for a short while, that a session is open and whose it is, so that a signed-in request
- * costs no database round trip. Used only on the embedded database: one process owns it (the lock in
- * db/client.ts), so every change that can end or alter a session happens in this process, and
- * `forgetSessions()` runs after each one — revocation stays immediate. With a PostgreSQL server
- * (`DATABASE_URL`), other instances can change sessions, and every request asks the database.
+ * costs no database round trip.
+ * - On the embedded database one process owns the data (the lock in db/client.ts), so every change
+ *   that can end or alter a session happens in this process, and `forgetSessions()` runs after each
+ *   one — revocation stays immediate.
+ * - On a PostgreSQL server (`DATABASE_URL`) other instances change sessions too: a remembered session
+ *   holds only while the data version stays the same, that is while no write at all, of any process,
+ *   has been heard since (db/client.ts; another instance's sign-out is heard a moment after it
+ *   commits). While the listener is down nothing is remembered and every request asks the database.
  *
  * Kept on globalThis: Next.js may load this module once per route bundle, and a sign-out handled by
  * one route must be seen by all.
@@ -18,6 +22,8 @@ interface Entry {
   userId: string;
   actor: Actor;
   until: number;
+  /** On a server: the data version it was read at, and holds for. */
+  dataVersion: number | null;
 }
 
 interface State {
@@ -33,10 +39,15 @@ const state = ((globalThis as unknown as { __heftwiseSessionCache?: State }).__h
 /** The generation to pass back to `rememberSession`: a change in between means the answer may be stale. */
 export const sessionGeneration = () => state.generation;
 
-export function recallSession(sessionId: string, userId: string, now = Date.now()): Actor | undefined {
+export function recallSession(
+  sessionId: string,
+  userId: string,
+  dataVersion: number | null,
+  now = Date.now(),
+): Actor | undefined {
   const entry = state.entries.get(sessionId);
   if (!entry) return undefined;
-  if (entry.until <= now || entry.userId !== userId) {
+  if (entry.until <= now || entry.userId !== userId || entry.dataVersion !== dataVersion) {
     state.entries.delete(sessionId);
     return undefined;
   }
@@ -49,6 +60,7 @@ export function rememberSession(
   actor: Actor,
   sessionExpiresAt: Date,
   checkedAtGeneration: number,
+  dataVersion: number | null,
   now = Date.now(),
 ) {
   if (checkedAtGeneration !== state.generation) return;
@@ -57,6 +69,7 @@ export function rememberSession(
     userId: actor.id,
     actor,
     until: Math.min(now + SESSION_CACHE_TTL_MS, sessionExpiresAt.getTime()),
+    dataVersion,
   });
 }
 

@@ -13,7 +13,7 @@ import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { connection } from "next/server";
 import { cache } from "react";
-import { getDb, writesAreLocal } from "@/db/client";
+import { dataVersion, getDb, writesAreHeard, writesAreLocal } from "@/db/client";
 import { organisations, users, userSessions } from "@/db/schema";
 import { isUuid } from "@/lib/ids";
 import type { Actor } from "@/lib/permissions";
@@ -49,9 +49,11 @@ export async function readSessionClaims(jar: CookieJar): Promise<{ userId: strin
 }
 
 async function lookUp(userId: string, sessionId: string): Promise<Actor | null> {
-  const embedded = writesAreLocal();
-  if (embedded) {
-    const known = recallSession(sessionId, userId);
+  // On a server a remembered session holds only while no write has been heard (session-cache.ts).
+  const version = writesAreLocal() ? null : dataVersion();
+  const remembering = writesAreHeard();
+  if (remembering) {
+    const known = recallSession(sessionId, userId, version);
     if (known) return known;
   }
   const generation = sessionGeneration();
@@ -89,7 +91,8 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
     auth: { via: "session", method: row.method, address: null, client: null },
     ...(row.secondFactorRoles.includes(row.role) && !row.totpEnabledAt ? { mustEnrolSecondFactor: true } : {}),
   };
-  if (embedded) rememberSession(sessionId, actor, row.expiresAt, generation);
+  if (remembering && writesAreHeard() && (version === null || version === dataVersion()))
+    rememberSession(sessionId, actor, row.expiresAt, generation, version);
   return actor;
 }
 

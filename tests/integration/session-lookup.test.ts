@@ -6,6 +6,7 @@
 import { encode } from "next-auth/jwt";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { config } from "@/lib/config";
+import { databaseConfig } from "@/db/config";
 import { closeAllSessions, closeSession, openSession } from "@/lib/auth/sessions";
 import { forgetSessions, recallSession, rememberSession, sessionGeneration } from "@/lib/auth/session-cache";
 import { changeRole, setActive } from "@/lib/users/service";
@@ -107,6 +108,30 @@ describe("every change to access is seen at once", () => {
     expect(await getActor()).toBeNull();
   });
 
+  it("a session closed by another process (another instance on the same server) ends a moment later", async () => {
+    const { sessionId } = await signedIn(adviser);
+    expect((await getActor())?.id).toBe(adviser.id);
+    expect((await getActor())?.id).toBe(adviser.id);
+    const { DATABASE_URL } = databaseConfig();
+    if (!DATABASE_URL) {
+      // The embedded database has no other process (its lock): every close passes through forgetSessions.
+      await closeSession(sessionId);
+      expect(await getActor()).toBeNull();
+      return;
+    }
+    const { Client } = await import("pg");
+    const other = new Client({ connectionString: DATABASE_URL });
+    await other.connect();
+    await other.query("delete from user_sessions where id = $1", [sessionId]);
+    await other.end();
+    let actor = await getActor();
+    for (let i = 0; i < 50 && actor; i++) {
+      await new Promise((r) => setTimeout(r, 20));
+      actor = await getActor();
+    }
+    expect(actor).toBeNull();
+  });
+
   it("a role change takes effect on the next request", async () => {
     await signedIn(adviser);
     expect((await getActor())?.role).toBe("adviser");
@@ -123,23 +148,33 @@ describe("the session memory", () => {
   it("keeps an answer until its time, its session's expiry, or a change", () => {
     forgetSessions();
     const now = 1_000_000;
-    rememberSession("s1", actor, new Date(now + 10_000), sessionGeneration(), now);
-    expect(recallSession("s1", "u1", now + 5_000)).toEqual(actor);
-    expect(recallSession("s1", "someone-else", now + 5_000)).toBeUndefined();
-    rememberSession("s1", actor, new Date(now + 10_000), sessionGeneration(), now);
-    expect(recallSession("s1", "u1", now + 10_000)).toBeUndefined();
-    rememberSession("s2", actor, new Date(now + 10_000_000), sessionGeneration(), now);
-    expect(recallSession("s2", "u1", now + 59_000)).toEqual(actor);
-    expect(recallSession("s2", "u1", now + 61_000)).toBeUndefined();
-    rememberSession("s3", actor, new Date(now + 10_000_000), sessionGeneration(), now);
+    rememberSession("s1", actor, new Date(now + 10_000), sessionGeneration(), null, now);
+    expect(recallSession("s1", "u1", null, now + 5_000)).toEqual(actor);
+    expect(recallSession("s1", "someone-else", null, now + 5_000)).toBeUndefined();
+    rememberSession("s1", actor, new Date(now + 10_000), sessionGeneration(), null, now);
+    expect(recallSession("s1", "u1", null, now + 10_000)).toBeUndefined();
+    rememberSession("s2", actor, new Date(now + 10_000_000), sessionGeneration(), null, now);
+    expect(recallSession("s2", "u1", null, now + 59_000)).toEqual(actor);
+    expect(recallSession("s2", "u1", null, now + 61_000)).toBeUndefined();
+    rememberSession("s3", actor, new Date(now + 10_000_000), sessionGeneration(), null, now);
     forgetSessions();
-    expect(recallSession("s3", "u1", now)).toBeUndefined();
+    expect(recallSession("s3", "u1", null, now)).toBeUndefined();
   });
 
   it("never keeps an answer read before a change that came after it began", () => {
     const before = sessionGeneration();
     forgetSessions();
-    rememberSession("s4", actor, new Date(Date.now() + 60_000), before);
-    expect(recallSession("s4", "u1")).toBeUndefined();
+    rememberSession("s4", actor, new Date(Date.now() + 60_000), before, null);
+    expect(recallSession("s4", "u1", null)).toBeUndefined();
+  });
+
+  it("on a PostgreSQL server, an answer holds only at the data version it was read at", () => {
+    forgetSessions();
+    const now = 1_000_000;
+    rememberSession("s5", actor, new Date(now + 10_000_000), sessionGeneration(), 7, now);
+    expect(recallSession("s5", "u1", 7, now + 1_000)).toEqual(actor);
+    // A write heard from any process since: asked again.
+    expect(recallSession("s5", "u1", 8, now + 1_000)).toBeUndefined();
+    expect(recallSession("s5", "u1", 7, now + 1_000)).toBeUndefined();
   });
 });
