@@ -31,8 +31,7 @@ import { getSigningKey } from "@/lib/signing-keys";
 import { putFile } from "@/lib/storage";
 import { renderPack } from "../pack/render";
 import { STEP_KEYS, submitRevisionSchema } from "./schemas";
-import { reviewContent } from "../method-statement/score-task";
-import { contentHash, getRevision, loadRevision } from "./service";
+import { contentHash, getRevision, loadRevision, reviewOf } from "./service";
 import { isAssignedToJob } from "../briefing/assignment";
 import { isUuid } from "@/lib/ids";
 import { confirmIdentity } from "@/lib/auth/step-up";
@@ -76,7 +75,7 @@ export async function submitRevision(
     throw new AppError("conflict", `This revision is already ${current.revision.status}.`);
   if (current.revision.version !== data.version)
     throw new AppError("conflict", "The draft changed since you reviewed it. Review it again before submitting.");
-  const review = reviewContent(current.content, current.register);
+  const review = reviewOf(current);
   if (!review.canSubmit)
     throw new AppError(
       "validation",

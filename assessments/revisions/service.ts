@@ -14,7 +14,7 @@ import { isUuid } from "@/lib/ids";
 import { cachedRead, readKey } from "@/lib/read-cache";
 import { authorize, type Actor } from "@/lib/permissions";
 import { contentSchema, emptyContent, type Content } from "../method-statement/content";
-import { reviewContent, type RegisterEntry } from "../method-statement/score-task";
+import { reviewContent, type RegisterEntry, type Review } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
 import { createAssessmentSchema, saveRevisionSchema, taskBodySchema, versionBodySchema } from "./schemas";
 
@@ -146,6 +146,21 @@ export async function loadRevision(organisationId: string, revisionId: string) {
   });
 }
 
+const reviews = new WeakMap<object, Review>();
+
+/**
+ * The engine's review of a revision as loaded. A kept revision is one frozen object until the next
+ * write (loadRevision), so its review is worked out once, not on every page that shows it.
+ */
+export function reviewOf(data: Awaited<ReturnType<typeof loadRevision>>): Review {
+  let review = reviews.get(data);
+  if (!review) {
+    review = reviewContent(data.content, data.register);
+    reviews.set(data, review);
+  }
+  return review;
+}
+
 export async function getRevision(actor: Actor | null, revisionId: string) {
   authorize(actor, "assessments:read");
   return loadRevision(actor.organisationId, revisionId);
@@ -217,8 +232,9 @@ async function changeTasks(
 }
 
 export async function listTasks(actor: Actor | null, revisionId: string) {
-  const { content, register: entries, revision } = await getRevision(actor, revisionId);
-  const review = reviewContent(content, entries);
+  const data = await getRevision(actor, revisionId);
+  const { content, revision } = data;
+  const review = reviewOf(data);
   return { version: revision.version, tasks: content.tasks.map((task, i) => ({ task, score: review.scores[i] })) };
 }
 

@@ -11,7 +11,8 @@ import { createJob } from "@/assessments/jobs/service";
 import { countComponents } from "@/assessments/load-register/queries";
 import { listComponentsPage } from "@/assessments/load-register/queries";
 import { countRevisionsByStatus } from "@/assessments/revisions/queries";
-import { createAssessment, getRevision, saveRevision } from "@/assessments/revisions/service";
+import { createAssessment, getRevision, reviewOf, saveRevision } from "@/assessments/revisions/service";
+import { reviewContent } from "@/assessments/method-statement/score-task";
 import { listAssessmentsPage } from "@/assessments/revisions/queries";
 import { cachedRead } from "@/lib/read-cache";
 import type { Actor } from "@/lib/permissions";
@@ -95,10 +96,15 @@ describe("kept answers", () => {
     const first = await getRevision(adviser, created.revisionId);
     const again = await getRevision(adviser, created.revisionId);
     expect(again).toBe(first);
+    // Its review is worked out once for the kept revision, and is the engine's own.
+    expect(reviewOf(again)).toBe(reviewOf(first));
+    expect(reviewOf(first)).toEqual(reviewContent(first.content, first.register));
+    expect(reviewOf(first).missing.some((m) => m.step === "scope")).toBe(true);
     const content = { ...first.content, scope: { ...first.content.scope, summary: "Changed after the first read" } };
     const saved = await saveRevision(adviser, created.revisionId, { version: first.revision.version, content });
     const after = await getRevision(adviser, created.revisionId);
     expect(after.revision.version).toBe(saved.version);
     expect(after.content.scope.summary).toBe("Changed after the first read");
+    expect(reviewOf(after).missing.some((m) => m.step === "scope")).toBe(false);
   });
 });

@@ -1,8 +1,8 @@
 import { getOrganisationSettings } from "@/lib/organisations/service";
 import type { Metadata } from "next";
 import Link from "next/link";
-import { rescoredByCurrentRules, reviewContent, type TaskScore } from "@/assessments/method-statement/score-task";
-import { getRevision, listApprovers } from "@/assessments/revisions/service";
+import { rescoredByCurrentRules, type TaskScore } from "@/assessments/method-statement/score-task";
+import { getRevision, listApprovers, reviewOf } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
@@ -48,7 +48,7 @@ export default async function RevisionPage({
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
   // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
-  const review = revision.status === "draft" ? reviewContent(content, register) : null;
+  const review = revision.status === "draft" ? reviewOf(data) : null;
   const rescored = review
     ? rescoredByCurrentRules(content.tasks, revision.results as TaskScore[] | null, review.scores)
     : [];
