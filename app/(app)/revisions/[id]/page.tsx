@@ -114,12 +114,11 @@ export default async function RevisionPage({
         </section>
       )}
       <RescoredNotice tasks={rescored} />
-      {editable && settings && review ? (
+      {editable && settings ? (
         <Wizard
           revisionId={revision.id}
           initialVersion={revision.version}
           initialContent={content}
-          initialReview={{ missing: review.missing, worstBand: review.worstBand }}
           register={register}
           approvers={approvers}
           reviewPeriodMonths={settings.reviewPeriodMonths}

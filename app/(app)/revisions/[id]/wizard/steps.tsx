@@ -127,7 +127,7 @@ function HazardRow({ index, onRemove }: { index: number; onRemove: () => void })
 
 /** A hazard from the organisation's library, copied into this assessment to be changed for the job. */
 /**
- * The organisation's hazard library, asked for when the wizard opens (see Wizard) rather than sent
+ * The organisation's hazard library, asked for as the adviser heads for this step (see Wizard) rather than sent
  * with every page of it: only the hazards step uses it.
  */
 export const hazardLibraryQuery = {

@@ -43,8 +43,6 @@ interface Props {
   revisionId: string;
   initialVersion: number;
   initialContent: Content;
-  /** The server's review of the stored draft: what the page shows before anything is changed. */
-  initialReview: Pick<Review, "missing" | "worstBand">;
   register: RegisterEntry[];
   approvers: { id: string; name: string }[];
   /** The organisation's default review period: the submit step suggests a review date that far ahead. */
@@ -60,7 +58,6 @@ export function Wizard({
   revisionId,
   initialVersion,
   initialContent,
-  initialReview,
   register,
   approvers,
   reviewPeriodMonths,
@@ -89,11 +86,12 @@ export function Wizard({
     [],
   );
   const values = useWatch({ control });
-  // The library is ready by the time the adviser reaches the hazards step.
+  // The hazard library is asked for as the adviser heads for the hazards step (a pointer over, or
+  // focus on, a way there), not while the page loads: the first view stays light on a phone.
   const queryClient = useQueryClient();
-  useEffect(() => {
-    if (fromLibrary) void queryClient.prefetchQuery(hazardLibraryQuery);
-  }, [fromLibrary, queryClient]);
+  const readyLibrary = (key: StepKey) => {
+    if (key === "hazards" && fromLibrary) void queryClient.prefetchQuery(hazardLibraryQuery);
+  };
 
   const saveNow = useCallback(async (): Promise<boolean> => {
     const parsed = contentSchema.safeParse(getValues());
@@ -136,13 +134,10 @@ export function Wizard({
     };
   }, [watch, saveNow, conflicted]);
 
-  // On the server the form holds the stored draft, which the page has just reviewed: scoring it
-  // again here would double the engine's work for every page drawn. In the browser, every change.
   const review = useMemo(() => {
-    if (typeof window === "undefined") return initialReview;
     const parsed = contentSchema.safeParse(values);
     return reviewContent(parsed.success ? parsed.data : getValues(), known);
-  }, [values, known, getValues, initialReview]);
+  }, [values, known, getValues]);
 
   const go = (key: StepKey) => {
     setStep(key);
@@ -158,6 +153,8 @@ export function Wizard({
               key={s.key}
               type="button"
               onClick={() => go(s.key)}
+              onPointerEnter={() => readyLibrary(s.key)}
+              onFocus={() => readyLibrary(s.key)}
               aria-current={step === s.key ? "step" : undefined}
               className={`rounded-full border px-3 py-1.5 text-sm font-bold ${step === s.key ? "border-frame bg-frame text-frame-ink" : "border-rule bg-white hover:border-accent"}`}
             >
@@ -208,7 +205,12 @@ export function Wizard({
             ← Back
           </button>
           {step !== "review" && (
-            <PrimaryButton type="button" onClick={() => go(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}>
+            <PrimaryButton
+              type="button"
+              onClick={() => go(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
+              onPointerEnter={() => readyLibrary(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
+              onFocus={() => readyLibrary(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
+            >
               Next: {STEPS[STEPS.findIndex((s) => s.key === step) + 1].label}
             </PrimaryButton>
           )}
