@@ -103,7 +103,7 @@ async function open(): Promise<Handle> {
       import("drizzle-orm/node-postgres/migrator"),
     ]);
     const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
-    countServerWrites(pool);
+    countWrites(pool, "query", writesUnlessRead);
     // The server processes behind this pool's connections: their notices are of writes already counted.
     const own = new Set<number>();
     pool.on("connect", (client) => own.add((client as unknown as { processID: number }).processID));
@@ -116,7 +116,7 @@ async function open(): Promise<Handle> {
       ),
     );
     const db = drizzle(pool, { schema });
-    countTransactions(db);
+    countWrites(db, "transaction", writesAlways);
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
     const stopListening = await listenForWrites(
       () => new Client({ connectionString: DATABASE_URL }),
@@ -144,7 +144,9 @@ async function open(): Promise<Handle> {
     if (!inMemory) mkdirSync(path.resolve(pgliteDir), { recursive: true });
     const extensions = { pg_trgm };
     const client = inMemory ? new PGlite({ extensions }) : new PGlite(path.resolve(pgliteDir), { extensions });
-    countWrites(client);
+    countWrites(client, "query", writesUnlessRead);
+    countWrites(client, "exec", writesUnlessRead);
+    countWrites(client, "transaction", writesAlways);
     writes.local = true;
     const db = drizzle(client, { schema });
     await migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
@@ -187,21 +189,22 @@ const isRead = (statement: unknown) => {
   return typeof text === "string" && /^\s*(select|show|explain)\b/i.test(text);
 };
 
-/** A PostgreSQL server's pool: its own write statements move the version as soon as they complete. */
-function countServerWrites(pool: { query: (...args: never[]) => unknown }) {
-  const query = pool.query.bind(pool) as (...args: unknown[]) => unknown;
-  pool.query = ((...args: unknown[]) => {
-    const result = query(...args);
-    if (isRead(args[0]) || !(result instanceof Promise)) return result;
+/**
+ * Moves the version each time a call of `target[method]` that writes completes (successfully or
+ * not). For the embedded database's driver, and for a server's pool and drizzle's transactions
+ * (which run on a client of their own).
+ */
+function countWrites<T extends object>(target: T, method: keyof T & string, isWrite: (statement: unknown) => boolean) {
+  const original = (target[method] as (...args: unknown[]) => unknown).bind(target);
+  (target as Record<string, unknown>)[method] = (...args: unknown[]) => {
+    const result = original(...args);
+    if (!(result instanceof Promise) || !isWrite(args[0])) return result;
     return result.finally(() => writes.version++);
-  }) as never;
+  };
 }
 
-/** Drizzle's transactions on a server run on a client of their own: the version moves when one ends. */
-function countTransactions(db: { transaction: (...args: never[]) => Promise<unknown> }) {
-  const transaction = db.transaction.bind(db) as (...args: unknown[]) => Promise<unknown>;
-  db.transaction = ((...args: unknown[]) => transaction(...args).finally(() => writes.version++)) as never;
-}
+const writesAlways = () => true;
+const writesUnlessRead = (statement: unknown) => !isRead(statement);
 
 interface Listener {
   on(event: "notification", listener: (notice: { processId: number }) => void): unknown;
@@ -260,25 +263,6 @@ async function listenForWrites(
     writes.listening = false;
     await client?.end().catch(() => {});
   };
-}
-
-function countWrites(client: {
-  query: (...args: never[]) => Promise<unknown>;
-  exec: (...args: never[]) => Promise<unknown>;
-  transaction: (...args: never[]) => Promise<unknown>;
-}) {
-  const wrap =
-    <A extends never[], R>(method: (...args: A) => Promise<R>, isWrite: (...args: A) => boolean) =>
-    async (...args: A): Promise<R> => {
-      try {
-        return await method(...args);
-      } finally {
-        if (isWrite(...args)) writes.version++;
-      }
-    };
-  client.query = wrap(client.query.bind(client), (sql) => !isRead(sql));
-  client.exec = wrap(client.exec.bind(client), (sql) => !isRead(sql));
-  client.transaction = wrap(client.transaction.bind(client), () => true);
 }
 
 /** The process's database, opened and migrated on first use. */

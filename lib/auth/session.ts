@@ -91,7 +91,9 @@ async function lookUp(userId: string, sessionId: string): Promise<Actor | null> 
     auth: { via: "session", method: row.method, address: null, client: null },
     ...(row.secondFactorRoles.includes(row.role) && !row.totpEnabledAt ? { mustEnrolSecondFactor: true } : {}),
   };
-  if (remembering && writesAreHeard() && (version === null || version === dataVersion()))
+  // On a server, a write heard meanwhile (or the listener lost, which moves the version too) means
+  // the answer may be stale.
+  if (remembering && (version === null || version === dataVersion()))
     rememberSession(sessionId, actor, row.expiresAt, generation, version);
   return actor;
 }

@@ -18,12 +18,7 @@ import { ukDate } from "@/lib/dates";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import { contentSchema, type Content } from "@/assessments/method-statement/content";
-import {
-  reviewContent,
-  type RegisterEntry,
-  type Review,
-  type ReviewItem,
-} from "@/assessments/method-statement/score-task";
+import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
 import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
 import { LoadsStep } from "./loads-step";
 import { GroundStep, LineStep } from "./lineside-steps";
@@ -139,6 +134,9 @@ export function Wizard({
     return reviewContent(parsed.success ? parsed.data : getValues(), known);
   }, [values, known, getValues]);
 
+  // The step after this one; none after the review.
+  const nextStep = STEPS[STEPS.findIndex((s) => s.key === step) + 1] as (typeof STEPS)[number] | undefined;
+
   const go = (key: StepKey) => {
     setStep(key);
     window.scrollTo({ top: 0 });
@@ -204,14 +202,14 @@ export function Wizard({
           >
             ← Back
           </button>
-          {step !== "review" && (
+          {nextStep && (
             <PrimaryButton
               type="button"
-              onClick={() => go(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
-              onPointerEnter={() => readyLibrary(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
-              onFocus={() => readyLibrary(STEPS[STEPS.findIndex((s) => s.key === step) + 1].key)}
+              onClick={() => go(nextStep.key)}
+              onPointerEnter={() => readyLibrary(nextStep.key)}
+              onFocus={() => readyLibrary(nextStep.key)}
             >
-              Next: {STEPS[STEPS.findIndex((s) => s.key === step) + 1].label}
+              Next: {nextStep.label}
             </PrimaryButton>
           )}
         </div>
