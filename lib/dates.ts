@@ -5,18 +5,24 @@
  */
 export const UK_ZONE = "Europe/London";
 
-const dateParts = new Intl.DateTimeFormat("en-GB", {
-  timeZone: UK_ZONE,
-  day: "2-digit",
-  month: "2-digit",
-  year: "numeric",
-});
-const timeParts = new Intl.DateTimeFormat("en-GB", {
-  timeZone: UK_ZONE,
-  hour: "2-digit",
-  minute: "2-digit",
-  hourCycle: "h23",
-});
+// Built at first use, not when the module loads: a formatter with a time zone costs the phone a
+// noticeable moment to set up, and most screens that import this module show no date at once.
+let dateParts: Intl.DateTimeFormat | undefined;
+let timeParts: Intl.DateTimeFormat | undefined;
+const dateFormat = () =>
+  (dateParts ??= new Intl.DateTimeFormat("en-GB", {
+    timeZone: UK_ZONE,
+    day: "2-digit",
+    month: "2-digit",
+    year: "numeric",
+  }));
+const timeFormat = () =>
+  (timeParts ??= new Intl.DateTimeFormat("en-GB", {
+    timeZone: UK_ZONE,
+    hour: "2-digit",
+    minute: "2-digit",
+    hourCycle: "h23",
+  }));
 
 /** "09-03-2027" from an instant (its UK calendar day) or a calendar date "2027-03-09". */
 export function ukDate(value: Date | string | null | undefined): string {
@@ -25,12 +31,12 @@ export function ukDate(value: Date | string | null | undefined): string {
     const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value);
     return m ? `${m[3]}-${m[2]}-${m[1]}` : value;
   }
-  return dateParts.format(value).replaceAll("/", "-");
+  return dateFormat().format(value).replaceAll("/", "-");
 }
 
 /** "09-03-2027 14:05": an instant in UK time, 24-hour clock. */
 export function ukDateTime(value: Date | null | undefined): string {
-  return value == null ? "—" : `${ukDate(value)} ${timeParts.format(value)}`;
+  return value == null ? "—" : `${ukDate(value)} ${timeFormat().format(value)}`;
 }
 
 /** Today's calendar date in the UK, as YYYY-MM-DD. */

@@ -3,13 +3,8 @@
  * stored result, for the briefing screens and the briefing sheet. Pure.
  */
 import { ukDate } from "@/lib/dates";
-import {
-  NEAR_LINE_LABELS,
-  PROTECTION_LABELS,
-  SUPPORT_LABELS,
-  type Content,
-  type Task,
-} from "../method-statement/content";
+import type { Content, Task } from "../method-statement/content";
+import { NEAR_LINE_LABELS, PROTECTION_LABELS, SUPPORT_LABELS } from "../method-statement/options";
 import { permitName } from "../method-statement/lineside";
 import type { TaskScore } from "../method-statement/score-task";
 import { whatIfLines } from "../method-statement/what-if";

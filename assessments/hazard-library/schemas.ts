@@ -9,17 +9,3 @@ export type LibraryEntryInput = z.infer<typeof libraryEntrySchema>;
 
 /** A library entry as read: the hazard with the library's own id. */
 export type LibraryEntry = LibraryEntryInput & { id: string };
-
-/** A copy of a library hazard for an assessment: its own id, controls copied, ready to change for the job. */
-export function hazardFromLibrary(entry: LibraryEntry, id: string) {
-  return {
-    id,
-    hazard: entry.hazard,
-    whoIsAtRisk: entry.whoIsAtRisk,
-    likelihoodBefore: entry.likelihoodBefore,
-    severityBefore: entry.severityBefore,
-    controls: entry.controls.map((c) => ({ ...c })),
-    likelihoodAfter: entry.likelihoodAfter,
-    severityAfter: entry.severityAfter,
-  };
-}

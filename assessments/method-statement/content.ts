@@ -7,6 +7,14 @@ import { z } from "zod";
 import { liftRequestSchema } from "../lift-plan/request";
 import { SURFACES } from "../rules/push";
 import { conditionsSchema, couplingSchema, reachSchema, sexSchema, zoneSchema } from "../rules/request";
+import {
+  CONTROL_LEVELS,
+  EXCAVATION_SUPPORT,
+  NEAR_LINE,
+  OPERATIONS,
+  PERMIT_KINDS,
+  PROTECTION_ARRANGEMENTS,
+} from "./options";
 
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters`);
 const num = (min: number, max: number, label = "a number") =>
@@ -14,16 +22,6 @@ const num = (min: number, max: number, label = "a number") =>
     .number({ error: `Enter ${label}` })
     .refine(Number.isFinite, `Enter ${label}`)
     .refine((x) => x >= min && x <= max, `Must be between ${min} and ${max}`);
-
-export const OPERATIONS = ["lift", "team-lift", "carry", "push", "equipment"] as const;
-export type Operation = (typeof OPERATIONS)[number];
-export const OPERATION_LABELS: Record<Operation, string> = {
-  lift: "Lift or lower by one person",
-  "team-lift": "Team lift",
-  carry: "Carry",
-  push: "Push or pull on wheels",
-  equipment: "Lift with equipment",
-};
 
 /** Hand positions and rhythm for the NIOSH equation (metric: cm, lifts/min, hours). */
 export const nioshInputsSchema = z.object({
@@ -100,14 +98,6 @@ export const taskSchema = z.object({
   conditions: z.preprocess((v) => (v === false ? [] : v), conditionsSchema.optional()),
 });
 
-export const CONTROL_LEVELS = ["eliminate", "substitute", "engineering", "administrative", "ppe"] as const;
-export const CONTROL_LEVEL_LABELS: Record<(typeof CONTROL_LEVELS)[number], string> = {
-  eliminate: "Eliminate",
-  substitute: "Substitute",
-  engineering: "Engineering control",
-  administrative: "Administrative control",
-  ppe: "PPE",
-};
 const rating = () => z.number().int().min(1, "1 to 5").max(5, "1 to 5");
 
 export const hazardSchema = z.object({
@@ -141,48 +131,6 @@ const reference = () =>
       "Use letters, digits, spaces and - / . _ : # only",
     )
     .default("");
-
-export const NEAR_LINE = ["not-near", "near", "on"] as const;
-export const NEAR_LINE_LABELS: Record<(typeof NEAR_LINE)[number], string> = {
-  "not-near": "Not on or near the line",
-  near: "Near the line (beside it, within the distance where protection is needed)",
-  on: "On the line",
-};
-export const PROTECTION_ARRANGEMENTS = [
-  "fenced",
-  "distance",
-  "line-blockage",
-  "possession",
-  "warning-system",
-  "other",
-] as const;
-export type ProtectionArrangement = (typeof PROTECTION_ARRANGEMENTS)[number];
-export const PROTECTION_LABELS: Record<ProtectionArrangement, string> = {
-  fenced: "Separated from the line by a fence or barrier",
-  distance: "Separated from the line by distance, to a marked limit",
-  "line-blockage": "Line blockage: no trains on the line while the work is done",
-  possession: "Possession: the line handed over for engineering work",
-  "warning-system":
-    "Warning of approaching trains (lookouts or a warning system): the gang goes to a position of safety",
-  other: "Another arrangement, described below",
-};
-export const PERMIT_KINDS = ["dig", "hot-work", "electrical", "confined-space", "other"] as const;
-export const PERMIT_LABELS: Record<(typeof PERMIT_KINDS)[number], string> = {
-  dig: "Permit to dig",
-  "hot-work": "Hot work permit",
-  electrical: "Permit for work on or near electrical equipment",
-  "confined-space": "Confined space entry permit",
-  other: "Other permit",
-};
-export const EXCAVATION_SUPPORT = ["battered", "trench-box", "sheeting", "stepped", "shallow", "other"] as const;
-export const SUPPORT_LABELS: Record<(typeof EXCAVATION_SUPPORT)[number], string> = {
-  battered: "Sides battered back to a safe angle",
-  "trench-box": "Trench box or drag box",
-  sheeting: "Trench sheets and props",
-  stepped: "Sides stepped (benched)",
-  shallow: "Shallow, stable ground: no support, by the competent person's decision",
-  other: "Other support, described",
-};
 
 /** Working near the line: how the gang is kept safe from trains, and who answers for it. */
 export const linesideSchema = z.object({
@@ -298,6 +246,3 @@ export function emptyContent(): Content {
     environment: environmentSchema.parse({}),
   };
 }
-
-/** Risk rating of a hazard row: likelihood × severity, 1–25. */
-export const riskRating = (likelihood: number, severity: number) => likelihood * severity;

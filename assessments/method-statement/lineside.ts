@@ -4,7 +4,8 @@
  */
 import { ukDate } from "@/lib/dates";
 import { fmt } from "../rules/format";
-import { NEAR_LINE_LABELS, PERMIT_LABELS, PROTECTION_LABELS, SUPPORT_LABELS, type Content } from "./content";
+import type { Content } from "./content";
+import { NEAR_LINE_LABELS, PERMIT_LABELS, PROTECTION_LABELS, SUPPORT_LABELS } from "./options";
 
 export const LINE_CAUTION =
   "Heftwise records the arrangements for working near the line; it does not plan protection from trains. That follows the infrastructure manager's rules and is done by its competent people.";

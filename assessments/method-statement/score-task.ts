@@ -10,7 +10,8 @@ import { scoreNiosh, type NioshRequest, type NioshResult } from "../rules/niosh"
 import { scorePush, type PushRequest, type PushResult } from "../rules/push";
 import type { Band } from "../rules/types";
 import { RULES_VERSION } from "../rules/version";
-import { PERMIT_LABELS, type Content, type Task } from "./content";
+import type { Content, Task } from "./content";
+import { PERMIT_LABELS } from "./options";
 import { solveForClear, type WhatIf } from "./what-if";
 
 export interface RegisterEntry {

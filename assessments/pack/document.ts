@@ -13,13 +13,8 @@ import { GROUND_TYPES } from "../lift-plan/ground";
 import { DURATION_LABELS } from "../rules/niosh-frequency";
 import { CONDITION_TEXT } from "../rules/conditions";
 import { gradientText, SURFACE_LABELS } from "../rules/push";
-import {
-  CONTROL_LEVEL_LABELS,
-  NEAR_LINE_LABELS,
-  OPERATION_LABELS,
-  riskRating,
-  type Content,
-} from "../method-statement/content";
+import type { Content } from "../method-statement/content";
+import { CONTROL_LEVEL_LABELS, NEAR_LINE_LABELS, OPERATION_LABELS, riskRating } from "../method-statement/options";
 import {
   buriedServicesRows,
   environmentRows,

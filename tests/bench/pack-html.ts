@@ -1,5 +1,5 @@
 /** The pack's content as HTML, for the Chromium side of `npm run bench:pack` only. */
-import { OPERATION_LABELS } from "@/assessments/method-statement/content";
+import { OPERATION_LABELS } from "@/assessments/method-statement/options";
 import { PACK_CAUTION, type PackInput } from "@/assessments/pack/document";
 
 const esc = (s: unknown) =>

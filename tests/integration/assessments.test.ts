@@ -9,7 +9,7 @@ import { listAssessments } from "@/assessments/revisions/queries";
 import { RULES_VERSION } from "@/assessments/rules/version";
 import { AppError } from "@/lib/errors";
 import type { Actor } from "@/lib/permissions";
-import { reviewDateProblem, reviewDateRange } from "@/assessments/revisions/schemas";
+import { reviewDateProblem, reviewDateRange } from "@/assessments/revisions/review-date";
 import { actorFor, demoOrganisation, otherOrganisation, reviewDateIn } from "./helpers";
 
 let adviser: Actor;

@@ -7,7 +7,7 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch, type Resolver, type UseFormRegister } from "react-hook-form";
 import { FormMessage, PrimaryButton, SecondaryButton, SelectField, TextField } from "@/app/_components/form";
 import { libraryEntrySchema, type LibraryEntryInput } from "@/assessments/hazard-library/schemas";
-import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating } from "@/assessments/method-statement/content";
+import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating } from "@/assessments/method-statement/options";
 import { deleteEntryAction, saveEntryAction } from "./actions";
 
 const RATINGS = [1, 2, 3, 4, 5];

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ActionLink, PageHeader } from "@/app/_components/page-header";
 import { listLibrary } from "@/assessments/hazard-library/queries";
-import { CONTROL_LEVEL_LABELS, riskRating } from "@/assessments/method-statement/content";
+import { CONTROL_LEVEL_LABELS, riskRating } from "@/assessments/method-statement/options";
 import { requirePermission } from "@/lib/auth/guard";
 import { can } from "@/lib/permissions";
 import { RestoreStarterButton } from "./restore-starter-button";

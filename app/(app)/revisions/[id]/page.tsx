@@ -2,7 +2,7 @@ import { getOrganisationSettings } from "@/lib/organisations/service";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { rescoredByCurrentRules, type TaskScore } from "@/assessments/method-statement/score-task";
-import { getRevision, listApprovers, reviewOf } from "@/assessments/revisions/service";
+import { draftResultsOf, getRevision, listApprovers, reviewOf } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
@@ -123,6 +123,7 @@ export default async function RevisionPage({
           approvers={approvers}
           reviewPeriodMonths={settings.reviewPeriodMonths}
           fromLibrary={can(actor, "hazard-library:read")}
+          saved={draftResultsOf(data)}
           initialStep={initialStep}
         />
       ) : (

@@ -1,14 +1,10 @@
 import { BandChip } from "@/app/_components/results/band";
 import { TaskResult } from "@/app/_components/results/task-result";
-import {
-  CONTROL_LEVEL_LABELS,
-  OPERATION_LABELS,
-  riskRating,
-  type Content,
-} from "@/assessments/method-statement/content";
+import type { Content } from "@/assessments/method-statement/content";
+import { CONTROL_LEVEL_LABELS, OPERATION_LABELS, riskRating } from "@/assessments/method-statement/options";
 import type { TaskScore } from "@/assessments/method-statement/score-task";
 import type { Band } from "@/assessments/rules/types";
-import { NEAR_LINE_LABELS } from "@/assessments/method-statement/content";
+import { NEAR_LINE_LABELS } from "@/assessments/method-statement/options";
 import {
   buriedServicesRows,
   environmentRows,

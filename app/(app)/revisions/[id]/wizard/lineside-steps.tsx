@@ -3,6 +3,7 @@
 /** The lineside sections of the method statement: working near the line; permits, buried services and excavations. */
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { SecondaryButton } from "@/app/_components/form";
+import type { Content } from "@/assessments/method-statement/content";
 import {
   EXCAVATION_SUPPORT,
   NEAR_LINE,
@@ -12,8 +13,7 @@ import {
   PROTECTION_ARRANGEMENTS,
   PROTECTION_LABELS,
   SUPPORT_LABELS,
-  type Content,
-} from "@/assessments/method-statement/content";
+} from "@/assessments/method-statement/options";
 import { belowStandingLevelTasks } from "@/assessments/method-statement/score-task";
 import { LINE_CAUTION } from "@/assessments/method-statement/lineside";
 import { Check, Choice, DateField, Num, Text } from "./fields";

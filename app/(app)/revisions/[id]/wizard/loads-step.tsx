@@ -7,18 +7,13 @@ import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
 import { HandZonesDrawing } from "@/app/_components/drawings/hand-zones";
 import { SecondaryButton } from "@/app/_components/form";
 import { ResultPending, TaskResult } from "@/app/_components/results/task-result";
-import {
-  OPERATION_LABELS,
-  OPERATIONS,
-  taskSchema,
-  type Content,
-  type Operation,
-  type Task,
-} from "@/assessments/method-statement/content";
-import { scoreTask, type RegisterEntry } from "@/assessments/method-statement/score-task";
+import type { Content, Task } from "@/assessments/method-statement/content";
+import { OPERATION_LABELS, OPERATIONS, type Operation } from "@/assessments/method-statement/options";
+import { scoreTask, type RegisterEntry, type TaskScore } from "@/assessments/method-statement/score-task";
 import { ZONE_LABELS, ZONES } from "@/assessments/rules/filter";
 import { SURFACES } from "@/assessments/rules/push";
 import { CONDITION_TEXT, CONDITIONS } from "@/assessments/rules/conditions";
+import type { Validation } from "./checks";
 import { ComponentPicker } from "./component-picker";
 import { Check, Choice, GradientField, Num, Text } from "./fields";
 // The chart library is the heaviest part of the wizard: loaded after the page is usable, and only
@@ -131,22 +126,37 @@ interface RegisterProps {
   /** The register entries known on this page: those the tasks use, and any chosen since. */
   register: RegisterEntry[];
   onChosen: (entry: RegisterEntry) => void;
+  results: {
+    /** The server's result of each task as saved (null: fails the schema), until the first change. */
+    saved: (TaskScore | null)[] | null;
+    /** The schemas, once loaded: after a change, tasks are checked and scored here. */
+    validation: Validation | null;
+  };
 }
 
 function TaskEditor({
   index,
   register,
   onChosen,
+  results: { saved, validation },
   revisionId,
   onRemove,
 }: RegisterProps & { index: number; revisionId: string; onRemove: () => void }) {
   const { setValue, getValues, register: reg } = useFormContext<Content>();
   const task = useWatch<Content, `tasks.${number}`>({ name: `tasks.${index}` }) as Task;
   const component = register.find((c) => c.id === task.componentId);
-  // Scored only when the task's inputs pass the same schema the server applies: a half-typed or
-  // out-of-range value (a negative count, say) must never show a band.
-  const valid = useMemo(() => taskSchema.safeParse(task), [task]);
-  const score = useMemo(() => (valid.success ? scoreTask(valid.data, component) : null), [valid, component]);
+  // As saved, the task shows the server's result. Once changed, it is scored here only when its inputs
+  // pass the same schema the server applies: a half-typed or out-of-range value (a negative count,
+  // say) must never show a band, and neither must an old result while the schemas load.
+  const check = useMemo(
+    () => (saved || !validation ? null : validation.taskSchema.safeParse(task)),
+    [saved, validation, task],
+  );
+  const validTask = saved ? (saved[index] ? task : null) : check?.success ? check.data : null;
+  const score = useMemo(
+    () => (saved ? (saved[index] ?? null) : validTask ? scoreTask(validTask, component) : null),
+    [saved, index, validTask, component],
+  );
   const p = `tasks.${index}` as const;
 
   // A new operation gets the inputs it needs; inputs already typed are kept, but a team lift needs
@@ -291,13 +301,15 @@ function TaskEditor({
               (your changes here are saved first).
             </p>
           )}
-          {task.operation !== "equipment" && valid.success && <WhatIfChart task={valid.data} component={component} />}
+          {task.operation !== "equipment" && validTask && <WhatIfChart task={validTask} component={component} />}
         </div>
         <div className="space-y-3">
           {score ? (
             <TaskResult score={score} />
           ) : (
-            <ResultPending>Complete the highlighted fields to see the result.</ResultPending>
+            <ResultPending>
+              {!saved && !validation ? "Checking the task…" : "Complete the highlighted fields to see the result."}
+            </ResultPending>
           )}
           {(task.operation === "lift" || task.filter) &&
             task.operation !== "push" &&
@@ -308,7 +320,7 @@ function TaskEditor({
   );
 }
 
-export function LoadsStep({ register, onChosen, revisionId }: RegisterProps & { revisionId: string }) {
+export function LoadsStep({ register, onChosen, results, revisionId }: RegisterProps & { revisionId: string }) {
   const { control } = useFormContext<Content>();
   const { fields, append, remove } = useFieldArray({ control, name: "tasks" });
   return (
@@ -322,6 +334,7 @@ export function LoadsStep({ register, onChosen, revisionId }: RegisterProps & { 
           index={i}
           register={register}
           onChosen={onChosen}
+          results={results}
           revisionId={revisionId}
           onRemove={() => remove(i)}
         />

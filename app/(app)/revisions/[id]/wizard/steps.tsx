@@ -3,9 +3,11 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useFieldArray, useFormContext, useWatch } from "react-hook-form";
-import { hazardFromLibrary, type LibraryEntry } from "@/assessments/hazard-library/schemas";
+import { hazardFromLibrary } from "@/assessments/hazard-library/copy";
+import type { LibraryEntry } from "@/assessments/hazard-library/schemas";
 import { SecondaryButton } from "@/app/_components/form";
-import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating, type Content } from "@/assessments/method-statement/content";
+import type { Content } from "@/assessments/method-statement/content";
+import { CONTROL_LEVEL_LABELS, CONTROL_LEVELS, riskRating } from "@/assessments/method-statement/options";
 import { apiRequest, messageOf } from "@/lib/api-client";
 import { Choice, DateField, Num, Text } from "./fields";
 

@@ -1,10 +1,9 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { Controller, FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
+import { Controller, FormProvider, useForm, useWatch } from "react-hook-form";
 import {
   controlClass,
   controlProps,
@@ -17,9 +16,12 @@ import { UkDateInput } from "@/app/_components/uk-date-input";
 import { ukDate } from "@/lib/dates";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
-import { contentSchema, type Content } from "@/assessments/method-statement/content";
+import type { Content } from "@/assessments/method-statement/content";
 import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
-import { reviewDateRange, submitFormSchema, type SubmitFormInput } from "@/assessments/revisions/schemas";
+import { reviewDateRange } from "@/assessments/revisions/review-date";
+import type { SubmitFormInput } from "@/assessments/revisions/schemas";
+import type { DraftResults } from "@/assessments/revisions/service";
+import { lazyResolver, loadValidation, readyValidation, useValidation } from "./checks";
 import { LoadsStep } from "./loads-step";
 import { GroundStep, LineStep } from "./lineside-steps";
 import { EmergencyStep, hazardLibraryQuery, HazardsStep, PeopleStep, ScopeStep, SequenceStep } from "./steps";
@@ -44,10 +46,16 @@ interface Props {
   reviewPeriodMonths: number;
   /** Whether the caller may copy hazards from the organisation's hazard library. */
   fromLibrary: boolean;
+  /** The server's results for the draft as saved, shown until the first change. */
+  saved: DraftResults;
   initialStep?: StepKey;
 }
 
 const AUTOSAVE_MS = 1200;
+const CHECKS_UNAVAILABLE =
+  "Not saved: the form's checks could not be loaded. Check the connection; your changes are kept here.";
+const contentResolver = lazyResolver<Content>((v) => v.contentResolver);
+const submitResolver = lazyResolver<SubmitFormInput>((v) => v.submitResolver);
 
 export function Wizard({
   revisionId,
@@ -57,6 +65,7 @@ export function Wizard({
   approvers,
   reviewPeriodMonths,
   fromLibrary,
+  saved,
   initialStep = "scope",
 }: Props) {
   const router = useRouter();
@@ -67,12 +76,15 @@ export function Wizard({
   );
   const methods = useForm<Content>({
     defaultValues,
-    resolver: zodResolver(contentSchema) as Resolver<Content>,
+    resolver: contentResolver,
     mode: "onChange",
   });
   const { control, getValues, trigger, watch } = methods;
   const [step, setStep] = useState<StepKey>(initialStep);
   const [save, setSave] = useState<SaveState>({ kind: "saved", at: null });
+  // Until the first change the server's results stand; after it, they are worked out here.
+  const [edited, setEdited] = useState(false);
+  const validation = useValidation();
   const version = useRef(initialVersion);
   // The register entries known here grow as components are chosen: scoring on screen needs them.
   const [known, setKnown] = useState(register);
@@ -89,7 +101,13 @@ export function Wizard({
   };
 
   const saveNow = useCallback(async (): Promise<boolean> => {
-    const parsed = contentSchema.safeParse(getValues());
+    let parsed;
+    try {
+      parsed = (await loadValidation()).contentSchema.safeParse(getValues());
+    } catch {
+      setSave({ kind: "error", message: CHECKS_UNAVAILABLE });
+      return false;
+    }
     if (!parsed.success) {
       setSave({ kind: "invalid" });
       void trigger();
@@ -118,6 +136,7 @@ export function Wizard({
   useEffect(() => {
     let timer: ReturnType<typeof setTimeout> | undefined;
     const subscription = watch(() => {
+      setEdited(true);
       if (conflicted) return;
       setSave({ kind: "dirty" });
       clearTimeout(timer);
@@ -129,10 +148,13 @@ export function Wizard({
     };
   }, [watch, saveNow, conflicted]);
 
+  // null while a change waits for the schemas: no stale result is shown meanwhile.
   const review = useMemo(() => {
-    const parsed = contentSchema.safeParse(values);
+    if (!edited) return saved;
+    if (!validation) return null;
+    const parsed = validation.contentSchema.safeParse(values);
     return reviewContent(parsed.success ? parsed.data : getValues(), known);
-  }, [values, known, getValues]);
+  }, [edited, saved, validation, values, known, getValues]);
 
   // The step after this one; none after the review.
   const nextStep = STEPS[STEPS.findIndex((s) => s.key === step) + 1] as (typeof STEPS)[number] | undefined;
@@ -144,7 +166,8 @@ export function Wizard({
 
   return (
     <FormProvider {...methods}>
-      <div className="space-y-4">
+      {/* The form's checks load as the adviser reaches for it, not while the page starts. */}
+      <div className="space-y-4" onPointerDownCapture={readyValidation} onFocusCapture={readyValidation}>
         <nav aria-label="Steps" className="flex flex-wrap gap-1">
           {STEPS.map((s, i) => (
             <button
@@ -157,7 +180,7 @@ export function Wizard({
               className={`rounded-full border px-3 py-1.5 text-sm font-bold ${step === s.key ? "border-frame bg-frame text-frame-ink" : "border-rule bg-white hover:border-accent"}`}
             >
               <span className="tabular-nums">{i + 1}</span> {s.label}
-              {review.missing.some((m) => m.step === s.key) && (
+              {review?.missing.some((m) => m.step === s.key) && (
                 <span className="ml-1 text-band-act" aria-label="needs attention">
                   •
                 </span>
@@ -175,7 +198,14 @@ export function Wizard({
             {step === "line" && <LineStep />}
             {step === "ground" && <GroundStep />}
             {step === "sequence" && <SequenceStep />}
-            {step === "loads" && <LoadsStep register={known} onChosen={remember} revisionId={revisionId} />}
+            {step === "loads" && (
+              <LoadsStep
+                register={known}
+                onChosen={remember}
+                revisionId={revisionId}
+                results={{ saved: edited ? null : saved.scores, validation }}
+              />
+            )}
             {step === "hazards" && <HazardsStep fromLibrary={fromLibrary} />}
             {step === "people" && <PeopleStep />}
             {step === "emergency" && <EmergencyStep />}
@@ -183,8 +213,8 @@ export function Wizard({
           {step === "review" && (
             <ReviewStep
               revisionId={revisionId}
-              missing={review.missing}
-              worstBand={review.worstBand}
+              missing={review?.missing ?? null}
+              worstBand={review?.worstBand ?? null}
               approvers={approvers}
               reviewPeriodMonths={reviewPeriodMonths}
               saveNow={saveNow}
@@ -263,7 +293,8 @@ function ReviewStep({
   goTo,
 }: {
   revisionId: string;
-  missing: ReviewItem[];
+  /** null while a change waits for the schemas. */
+  missing: ReviewItem[] | null;
   worstBand: import("@/assessments/rules/types").Band | null;
   approvers: { id: string; name: string }[];
   reviewPeriodMonths: number;
@@ -286,7 +317,7 @@ function ReviewStep({
     };
   });
   const { register, control, handleSubmit, setError, formState } = useForm<SubmitFormInput>({
-    resolver: zodResolver(submitFormSchema),
+    resolver: submitResolver,
     defaultValues: { approverId: approvers[0]?.id ?? "", reviewDate: dates.suggested },
   });
 
@@ -315,7 +346,11 @@ function ReviewStep({
       <div className="flex items-center gap-3">
         <span className="font-bold">Worst band of the tasks:</span> <BandChip band={worstBand} large />
       </div>
-      {missing.length > 0 ? (
+      {missing === null ? (
+        <p className="text-muted" role="status">
+          Checking the draft…
+        </p>
+      ) : missing.length > 0 ? (
         <div>
           <h3 className="font-bold">Still missing before it can be submitted</h3>
           <ul className="mt-1 space-y-1" data-testid="missing">
@@ -363,7 +398,7 @@ function ReviewStep({
           </FieldFrame>
           <PrimaryButton
             type="submit"
-            disabled={formState.isSubmitting || missing.length > 0 || approvers.length === 0}
+            disabled={formState.isSubmitting || missing === null || missing.length > 0 || approvers.length === 0}
             className="sm:col-span-2"
           >
             {formState.isSubmitting ? "Submitting…" : "Submit for approval"}
