@@ -13,8 +13,8 @@ import { AppError, parseOrThrow } from "@/lib/errors";
 import { isUuid } from "@/lib/ids";
 import { cachedRead, readKey } from "@/lib/read-cache";
 import { authorize, type Actor } from "@/lib/permissions";
-import { contentSchema, emptyContent, taskSchema, type Content } from "../method-statement/content";
-import { reviewContent, type RegisterEntry, type Review, type TaskScore } from "../method-statement/score-task";
+import { contentSchema, emptyContent, type Content } from "../method-statement/content";
+import { reviewContent, type RegisterEntry, type Review } from "../method-statement/score-task";
 import { findTemplate } from "../method-statement/templates";
 import { createAssessmentSchema, saveRevisionSchema, taskBodySchema, versionBodySchema } from "./schemas";
 
@@ -159,28 +159,6 @@ export function reviewOf(data: Awaited<ReturnType<typeof loadRevision>>): Review
     reviews.set(data, review);
   }
   return review;
-}
-
-/** A draft's results as the wizard first shows them, before any change. */
-export interface DraftResults {
-  missing: Review["missing"];
-  worstBand: Review["worstBand"];
-  /** By task, in order; null where the task does not pass the task schema, so that no band is shown. */
-  scores: (TaskScore | null)[];
-}
-
-/**
- * What the wizard shows until the adviser changes something: the review of the draft as saved, each
- * task's score kept only where the task passes the schema the wizard applies after a change. The
- * browser then needs neither the schemas nor the engine's work while the page starts.
- */
-export function draftResultsOf(data: Awaited<ReturnType<typeof loadRevision>>): DraftResults {
-  const { missing, worstBand, scores } = reviewOf(data);
-  return {
-    missing,
-    worstBand,
-    scores: scores.map((score, i) => (taskSchema.safeParse(data.content.tasks[i]).success ? score : null)),
-  };
 }
 
 export async function getRevision(actor: Actor | null, revisionId: string) {

@@ -260,3 +260,45 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
     lift.getByTestId("what-if-suggestion").filter({ hasText: "H 63 cm" }).locator("[data-band]"),
   ).toHaveAttribute("data-band", "clear");
 });
+
+test("a draft opens with its saved results; after a change no band shows until the task is checked again, never the old one", async ({
+  page,
+}) => {
+  await signIn(page, "adviser@brackenfold.example");
+  await page.goto("/assessments/new");
+  const form = page.getByRole("form", { name: "New assessment" });
+  await form.getByLabel("Job").selectOption({ label: "Carrowby cutting: troughing route renewal" });
+  await form.getByLabel("Title").fill("Saved results at Carrowby");
+  await form.getByLabel(/A blank assessment/).check();
+  await form.getByRole("button", { name: "Create and open" }).click();
+  await steps(page)
+    .getByRole("button", { name: /Loads & lifts/ })
+    .click();
+  await page.getByRole("button", { name: "Add a handling task" }).click();
+  const lift = page.getByTestId("task-0");
+  await chooseComponent(lift, "Axle counter head kit — 6 kg");
+  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "clear");
+  await expect(page.getByText(/All changes saved/)).toBeVisible();
+
+  // Opened afresh, the draft shows the server's result before anything is typed.
+  await page.goto(`${page.url().split("?")[0]}?step=loads`);
+  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "clear");
+  await page.waitForLoadState("networkidle");
+
+  // The form's checks load when the adviser first uses it: held back here, as on a slow connection.
+  const held: (() => Promise<void>)[] = [];
+  let holding = true;
+  await page.route("**/_next/static/chunks/**", (route) =>
+    holding ? void held.push(() => route.continue()) : route.continue(),
+  );
+  await lift.getByLabel("H at end").fill("70");
+  await expect(lift.getByText("Checking the task…")).toBeVisible();
+  await expect(lift.locator("[data-band]")).toHaveCount(0);
+  await expect.poll(() => held.length).toBeGreaterThan(0);
+
+  // Once the checks arrive, the changed task is scored: 70 cm out is beyond the equation, so Stop.
+  holding = false;
+  for (const release of held) await release();
+  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "stop");
+  await expect(page.getByText(/All changes saved/)).toBeVisible();
+});

@@ -4,7 +4,9 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { revisions } from "@/db/schema";
 import { submitRevision } from "@/assessments/revisions/approval";
-import { createAssessment, getRevision, saveRevision } from "@/assessments/revisions/service";
+import { createAssessment, getRevision, reviewOf, saveRevision } from "@/assessments/revisions/service";
+import { contentSchema } from "@/assessments/method-statement/content";
+import { reviewContent } from "@/assessments/method-statement/score-task";
 import { listAssessments } from "@/assessments/revisions/queries";
 import { RULES_VERSION } from "@/assessments/rules/version";
 import { AppError } from "@/lib/errors";
@@ -57,6 +59,20 @@ describe("drafts", () => {
     expect(content.emergency.nearestHospital).toBe(jobs[0].nearestHospital);
     expect(revision.worstBand).not.toBeNull();
     expect((revision.results as { rulesVersion: string }[])[0].rulesVersion).toBe(RULES_VERSION);
+  });
+
+  it("the review of a draft as read is what the wizard works out from the same draft after a change", async () => {
+    const jobs = await (await import("@/assessments/jobs/queries")).listJobs(adviser);
+    const { revisionId } = await createAssessment(adviser, {
+      jobId: jobs[0].id,
+      title: "Saved results test",
+      templateId: "trough-route",
+    });
+    const data = await getRevision(adviser, revisionId);
+    // The wizard shows the first until the adviser changes something, then parses and reviews the form.
+    const inBrowser = reviewContent(contentSchema.parse(data.content), data.register);
+    expect(reviewOf(data)).toEqual(inBrowser);
+    expect(inBrowser.scores.map((s) => s.band)).toEqual(data.content.tasks.map(() => expect.any(String)));
   });
 
   it("a save against a stale version answers 409 and writes nothing", async () => {

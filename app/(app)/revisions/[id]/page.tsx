@@ -2,7 +2,7 @@ import { getOrganisationSettings } from "@/lib/organisations/service";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { rescoredByCurrentRules, type TaskScore } from "@/assessments/method-statement/score-task";
-import { draftResultsOf, getRevision, listApprovers, reviewOf } from "@/assessments/revisions/service";
+import { getRevision, listApprovers, reviewOf } from "@/assessments/revisions/service";
 import type { Band } from "@/assessments/rules/types";
 import { Notice } from "@/app/_components/notice";
 import { requirePermission } from "@/lib/auth/guard";
@@ -48,6 +48,8 @@ export default async function RevisionPage({
   const initialStep = STEPS.find((s) => s.key === step)?.key;
   const returned = revision.returnComments as { by: string; comments: Record<string, string> } | null;
   // Only a draft is scored afresh; submitted and approved revisions keep their stored results.
+  // A loaded draft's content has passed the content schema, so this is the wizard's own result for it
+  // until the first change.
   const review = revision.status === "draft" ? reviewOf(data) : null;
   const rescored = review
     ? rescoredByCurrentRules(content.tasks, revision.results as TaskScore[] | null, review.scores)
@@ -114,7 +116,7 @@ export default async function RevisionPage({
         </section>
       )}
       <RescoredNotice tasks={rescored} />
-      {editable && settings ? (
+      {editable && settings && review ? (
         <Wizard
           revisionId={revision.id}
           initialVersion={revision.version}
@@ -123,7 +125,7 @@ export default async function RevisionPage({
           approvers={approvers}
           reviewPeriodMonths={settings.reviewPeriodMonths}
           fromLibrary={can(actor, "hazard-library:read")}
-          saved={draftResultsOf(data)}
+          saved={review}
           initialStep={initialStep}
         />
       ) : (

@@ -127,8 +127,8 @@ interface RegisterProps {
   register: RegisterEntry[];
   onChosen: (entry: RegisterEntry) => void;
   results: {
-    /** The server's result of each task as saved (null: fails the schema), until the first change. */
-    saved: (TaskScore | null)[] | null;
+    /** The server's result of each task as saved (its content passed the schema), until the first change. */
+    saved: TaskScore[] | null;
     /** The schemas, once loaded: after a change, tasks are checked and scored here. */
     validation: Validation | null;
   };
@@ -152,7 +152,7 @@ function TaskEditor({
     () => (saved || !validation ? null : validation.taskSchema.safeParse(task)),
     [saved, validation, task],
   );
-  const validTask = saved ? (saved[index] ? task : null) : check?.success ? check.data : null;
+  const validTask = saved ? task : check?.success ? check.data : null;
   const score = useMemo(
     () => (saved ? (saved[index] ?? null) : validTask ? scoreTask(validTask, component) : null),
     [saved, index, validTask, component],

@@ -17,10 +17,14 @@ import { ukDate } from "@/lib/dates";
 import { BandChip } from "@/app/_components/results/band";
 import { SafetyCaution } from "@/app/_components/safety-caution";
 import type { Content } from "@/assessments/method-statement/content";
-import { reviewContent, type RegisterEntry, type ReviewItem } from "@/assessments/method-statement/score-task";
+import {
+  reviewContent,
+  type RegisterEntry,
+  type Review,
+  type ReviewItem,
+} from "@/assessments/method-statement/score-task";
 import { reviewDateRange } from "@/assessments/revisions/review-date";
 import type { SubmitFormInput } from "@/assessments/revisions/schemas";
-import type { DraftResults } from "@/assessments/revisions/service";
 import { lazyResolver, loadValidation, readyValidation, useValidation } from "./checks";
 import { LoadsStep } from "./loads-step";
 import { GroundStep, LineStep } from "./lineside-steps";
@@ -46,8 +50,8 @@ interface Props {
   reviewPeriodMonths: number;
   /** Whether the caller may copy hazards from the organisation's hazard library. */
   fromLibrary: boolean;
-  /** The server's results for the draft as saved, shown until the first change. */
-  saved: DraftResults;
+  /** The server's review of the draft as saved, shown until the first change. */
+  saved: Review;
   initialStep?: StepKey;
 }
 
