@@ -15,7 +15,7 @@ import { RescoredNotice } from "./rescored-notice";
 import { foundOr404 } from "@/lib/pages";
 import { ukDate, ukDateTime } from "@/lib/dates";
 import { listOpenSiteChanges } from "@/assessments/briefing/queries";
-import { SiteChangeDecision } from "./site-change-review";
+import { SiteChangeDecision } from "./site-change-decision";
 
 export const metadata: Metadata = { title: "Assessment" };
 
