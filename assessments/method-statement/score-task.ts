@@ -331,6 +331,35 @@ export function reviewContent(content: Content, register: RegisterEntry[]): Revi
   return { missing, worstBand: banded.length ? worstBand(banded) : null, scores, canSubmit: missing.length === 0 };
 }
 
+/** The wizard step where each part of the content is edited. */
+const STEP_OF_PART: Record<keyof Content, ReviewItem["step"]> = {
+  scope: "scope",
+  sequence: "sequence",
+  tasks: "loads",
+  hazards: "hazards",
+  people: "people",
+  emergency: "emergency",
+  environment: "emergency",
+  lineside: "line",
+  permits: "ground",
+  buriedServices: "ground",
+  excavation: "ground",
+};
+
+/**
+ * The review of a draft whose fields do not pass the content schema (the paths of its problems, as
+ * the schema reports them). Nothing is judged: no band, so never Clear, and nothing can be submitted
+ * until each step named has its marked fields corrected.
+ */
+export function reviewOfInvalid(problemPaths: readonly (readonly PropertyKey[])[]): Review {
+  const steps = new Set(problemPaths.map((p) => STEP_OF_PART[p[0] as keyof Content] ?? "scope"));
+  const missing = [...steps].map((step) => ({
+    step,
+    message: "Correct the fields marked in red: until then no task is judged.",
+  }));
+  return { missing, worstBand: null, scores: [], canSubmit: false };
+}
+
 export interface Rescored {
   taskId: string;
   /** 1-based position of the task in the revision. */

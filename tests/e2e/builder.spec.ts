@@ -301,4 +301,15 @@ test("a draft opens with its saved results; after a change no band shows until t
   for (const release of held) await release();
   await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "stop");
   await expect(page.getByText(/All changes saved/)).toBeVisible();
+
+  // A field that fails its check leaves the draft unjudged: no worst band, and the step to correct is named.
+  await lift.getByLabel("How many").fill("-3");
+  await expect(lift.locator("[data-band]")).toHaveCount(0);
+  await steps(page)
+    .getByRole("button", { name: /Review & submit/ })
+    .click();
+  const review = page.locator("section[aria-labelledby=step-heading]");
+  await expect(review.getByTestId("missing")).toContainText("Loads & lifts: Correct the fields marked in red");
+  await expect(review.locator("[data-band]")).toHaveCount(0);
+  await expect(review.getByRole("button", { name: "Submit for approval" })).toBeDisabled();
 });

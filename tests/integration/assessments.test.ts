@@ -6,7 +6,7 @@ import { revisions } from "@/db/schema";
 import { submitRevision } from "@/assessments/revisions/approval";
 import { createAssessment, getRevision, reviewOf, saveRevision } from "@/assessments/revisions/service";
 import { contentSchema } from "@/assessments/method-statement/content";
-import { reviewContent } from "@/assessments/method-statement/score-task";
+import { reviewContent, reviewOfInvalid } from "@/assessments/method-statement/score-task";
 import { listAssessments } from "@/assessments/revisions/queries";
 import { RULES_VERSION } from "@/assessments/rules/version";
 import { AppError } from "@/lib/errors";
@@ -73,6 +73,25 @@ describe("drafts", () => {
     const inBrowser = reviewContent(contentSchema.parse(data.content), data.register);
     expect(reviewOf(data)).toEqual(inBrowser);
     expect(inBrowser.scores.map((s) => s.band)).toEqual(data.content.tasks.map(() => expect.any(String)));
+  });
+
+  it("a draft whose fields fail the schema is not judged: no band, and each step to correct is named", async () => {
+    const { revisionId } = (await listAssessments(adviser)).find((a) => a.title.includes("lorry-loader"))!;
+    const { content, register } = await getRevision(adviser, revisionId);
+    // A negative count on a crane lift, and a hazard without its description, as half-typed in the wizard.
+    const typed = {
+      ...content,
+      tasks: content.tasks.map((t, i) => (i === 0 ? { ...t, quantity: -3 } : t)),
+      hazards: [{ ...content.hazards[0], hazard: "" }, ...content.hazards.slice(1)],
+    };
+    const parsed = contentSchema.safeParse(typed);
+    expect(parsed.success).toBe(false);
+    const review = reviewOfInvalid(parsed.error!.issues.map((i) => i.path));
+    expect(review.worstBand).toBeNull();
+    expect(review.canSubmit).toBe(false);
+    expect(review.missing.map((m) => m.step).sort()).toEqual(["hazards", "loads"]);
+    // The same values reviewed as if valid would have been judged: this is what must never show.
+    expect(reviewContent(typed as typeof content, register).worstBand).not.toBeNull();
   });
 
   it("a save against a stale version answers 409 and writes nothing", async () => {

@@ -19,6 +19,7 @@ import { SafetyCaution } from "@/app/_components/safety-caution";
 import type { Content } from "@/assessments/method-statement/content";
 import {
   reviewContent,
+  reviewOfInvalid,
   type RegisterEntry,
   type Review,
   type ReviewItem,
@@ -156,9 +157,10 @@ export function Wizard({
   const review = useMemo(() => {
     if (!edited) return saved;
     if (!validation) return null;
+    // A draft whose fields fail the schema is not judged at all: its half-typed values could score Clear.
     const parsed = validation.contentSchema.safeParse(values);
-    return reviewContent(parsed.success ? parsed.data : getValues(), known);
-  }, [edited, saved, validation, values, known, getValues]);
+    return parsed.success ? reviewContent(parsed.data, known) : reviewOfInvalid(parsed.error.issues.map((i) => i.path));
+  }, [edited, saved, validation, values, known]);
 
   // The step after this one; none after the review.
   const nextStep = STEPS[STEPS.findIndex((s) => s.key === step) + 1] as (typeof STEPS)[number] | undefined;
