@@ -43,6 +43,10 @@ test("installable, and a briefing taken in airplane mode is recorded once when t
   expect(manifest.display).toBe("standalone");
   expect(manifest.icons.map((i: { sizes: string }) => i.sizes)).toEqual(expect.arrayContaining(["192x192", "512x512"]));
   for (const icon of manifest.icons) expect((await page.request.get(icon.src)).status()).toBe(200);
+  // Browsers still ask for the classic address on their own; it answers with the same mark.
+  const favicon = await page.request.get("/favicon.ico");
+  expect(favicon.status()).toBe(200);
+  expect((await favicon.body()).subarray(0, 4)).toEqual(Buffer.from([0, 0, 1, 0]));
   const scope = await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
   expect(new URL(scope).pathname).toBe("/");
   await expect(page.getByTestId("copies-state")).toContainText("kept for use without signal");
