@@ -5,24 +5,16 @@
  */
 export const UK_ZONE = "Europe/London";
 
-// Built at first use, not when the module loads: a formatter with a time zone costs the phone a
-// noticeable moment to set up, and most screens that import this module show no date at once.
-let dateParts: Intl.DateTimeFormat | undefined;
-let timeParts: Intl.DateTimeFormat | undefined;
-const dateFormat = () =>
-  (dateParts ??= new Intl.DateTimeFormat("en-GB", {
-    timeZone: UK_ZONE,
-    day: "2-digit",
-    month: "2-digit",
-    year: "numeric",
-  }));
-const timeFormat = () =>
-  (timeParts ??= new Intl.DateTimeFormat("en-GB", {
-    timeZone: UK_ZONE,
-    hour: "2-digit",
-    minute: "2-digit",
-    hourCycle: "h23",
-  }));
+/**
+ * A UK-time formatter built at first use, not when the module loads: one with a time zone costs the
+ * phone a noticeable moment to set up, and most screens that import this module show no date at once.
+ */
+function ukFormat(options: Intl.DateTimeFormatOptions): () => Intl.DateTimeFormat {
+  let format: Intl.DateTimeFormat | undefined;
+  return () => (format ??= new Intl.DateTimeFormat("en-GB", { timeZone: UK_ZONE, ...options }));
+}
+const dateFormat = ukFormat({ day: "2-digit", month: "2-digit", year: "numeric" });
+const timeFormat = ukFormat({ hour: "2-digit", minute: "2-digit", hourCycle: "h23" });
 
 /** "09-03-2027" from an instant (its UK calendar day) or a calendar date "2027-03-09". */
 export function ukDate(value: Date | string | null | undefined): string {

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from "@playwright/test";
-import { chooseComponent, signIn, steps } from "./helpers";
+import { chooseComponent, createAssessment, signIn, steps, taskBand } from "./helpers";
 
 const nav = (page: Page) => page.getByRole("navigation", { name: "Main" });
 
@@ -65,12 +65,12 @@ test("an adviser imports a CSV: a bad file is refused row by row, a good one is 
 
 test("an adviser builds an assessment through the wizard, watches the live score, and submits", async ({ page }) => {
   await signIn(page, "adviser@brackenfold.example");
-  await page.goto("/assessments/new");
-  const form = page.getByRole("form", { name: "New assessment" });
-  await form.getByLabel("Job").selectOption({ label: "Hollin Vale loop: new location cabinet and equipment base" });
-  await form.getByLabel("Title").fill("Axle counter and troughs at Hollin Vale");
-  await form.getByLabel(/A blank assessment/).check();
-  await form.getByRole("button", { name: "Create and open" }).click();
+  await createAssessment(
+    page,
+    "Hollin Vale loop: new location cabinet and equipment base",
+    "Axle counter and troughs at Hollin Vale",
+    /A blank assessment/,
+  );
 
   await page.getByLabel("Scope of the work").fill("Fit an axle counter head and lay two trough sections.");
   // A railway job starts near the line, with the job's access point.
@@ -209,17 +209,15 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   page,
 }) => {
   await signIn(page, "adviser@brackenfold.example");
-  await page.goto("/assessments/new");
-  const form = page.getByRole("form", { name: "New assessment" });
-  await form.getByLabel("Job").selectOption({ label: "Carrowby cutting: troughing route renewal" });
-  await form.getByLabel("Title").fill("Edges of the methods at Carrowby");
-  await form.getByLabel(/A blank assessment/).check();
-  await form.getByRole("button", { name: "Create and open" }).click();
+  await createAssessment(
+    page,
+    "Carrowby cutting: troughing route renewal",
+    "Edges of the methods at Carrowby",
+    /A blank assessment/,
+  );
   await steps(page)
     .getByRole("button", { name: /Loads & lifts/ })
     .click();
-  const band = (task: ReturnType<Page["getByTestId"]>) =>
-    task.getByTestId("task-result").locator("[data-band]").first();
 
   // A 40 m carry of 31 kg: Watch; a pair alone is not offered as reaching Clear, and what is offered was re-scored.
   await page.getByRole("button", { name: "Add a handling task" }).click();
@@ -227,7 +225,7 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   await chooseComponent(carry, "Sealed battery set with carry handles — 31 kg");
   await carry.getByLabel("Operation").selectOption("carry");
   await carry.getByLabel("Carried").fill("40");
-  await expect(band(carry)).toHaveAttribute("data-band", "watch");
+  await expect(taskBand(carry)).toHaveAttribute("data-band", "watch");
   await expect(carry.getByTestId("what-if-together").locator("[data-band]")).toHaveAttribute("data-band", "clear");
   await expect(
     carry.getByTestId("what-if-suggestion").filter({ hasText: "A team of 2" }).locator('[data-band="clear"]'),
@@ -245,16 +243,16 @@ test("the engine's edges in the wizard: a long carry, a downhill trolley and a l
   await trolley.getByLabel("N of 1 in N").fill("150");
   await expect(trolley.getByTestId("gradient-reading")).toContainText("1 in 150");
   await trolley.getByLabel("Braked").uncheck();
-  await expect(band(trolley)).toHaveAttribute("data-band", "stop");
+  await expect(taskBand(trolley)).toHaveAttribute("data-band", "stop");
   await expect(trolley.getByTestId("task-result")).toContainText("runs away");
 
   // A lift whose hands end 70 cm out: the equation cannot judge it, so Stop, naming HM at the destination.
   await page.getByRole("button", { name: "Add a handling task" }).click();
   const lift = page.getByTestId("task-2");
   await chooseComponent(lift, "Axle counter head kit — 6 kg");
-  await expect(band(lift)).toHaveAttribute("data-band", "clear");
+  await expect(taskBand(lift)).toHaveAttribute("data-band", "clear");
   await lift.getByLabel("H at end").fill("70");
-  await expect(band(lift)).toHaveAttribute("data-band", "stop");
+  await expect(taskBand(lift)).toHaveAttribute("data-band", "stop");
   await expect(lift.getByTestId("task-result")).toContainText("H at the destination is 70 cm");
   await expect(
     lift.getByTestId("what-if-suggestion").filter({ hasText: "H 63 cm" }).locator("[data-band]"),
@@ -265,24 +263,24 @@ test("a draft opens with its saved results; after a change no band shows until t
   page,
 }) => {
   await signIn(page, "adviser@brackenfold.example");
-  await page.goto("/assessments/new");
-  const form = page.getByRole("form", { name: "New assessment" });
-  await form.getByLabel("Job").selectOption({ label: "Carrowby cutting: troughing route renewal" });
-  await form.getByLabel("Title").fill("Saved results at Carrowby");
-  await form.getByLabel(/A blank assessment/).check();
-  await form.getByRole("button", { name: "Create and open" }).click();
+  await createAssessment(
+    page,
+    "Carrowby cutting: troughing route renewal",
+    "Saved results at Carrowby",
+    /A blank assessment/,
+  );
   await steps(page)
     .getByRole("button", { name: /Loads & lifts/ })
     .click();
   await page.getByRole("button", { name: "Add a handling task" }).click();
   const lift = page.getByTestId("task-0");
   await chooseComponent(lift, "Axle counter head kit — 6 kg");
-  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "clear");
+  await expect(taskBand(lift)).toHaveAttribute("data-band", "clear");
   await expect(page.getByText(/All changes saved/)).toBeVisible();
 
   // Opened afresh, the draft shows the server's result before anything is typed.
   await page.goto(`${page.url().split("?")[0]}?step=loads`);
-  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "clear");
+  await expect(taskBand(lift)).toHaveAttribute("data-band", "clear");
   await page.waitForLoadState("networkidle");
 
   // The form's checks load when the adviser first uses it: held back here, as on a slow connection.
@@ -299,7 +297,7 @@ test("a draft opens with its saved results; after a change no band shows until t
   // Once the checks arrive, the changed task is scored: 70 cm out is beyond the equation, so Stop.
   holding = false;
   for (const release of held) await release();
-  await expect(lift.getByTestId("task-result").locator("[data-band]").first()).toHaveAttribute("data-band", "stop");
+  await expect(taskBand(lift)).toHaveAttribute("data-band", "stop");
   await expect(page.getByText(/All changes saved/)).toBeVisible();
 
   // A field that fails its check leaves the draft unjudged: no worst band, and the step to correct is named.

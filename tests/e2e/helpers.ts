@@ -29,6 +29,19 @@ export async function waitForMail(to: string, timeoutMs = 15_000, subject?: RegE
   throw new Error(`no e-mail to ${to} within ${timeoutMs} ms`);
 }
 
+/** Creates an assessment for a demo job from the new-assessment form and opens it in the wizard. */
+export async function createAssessment(page: Page, job: string, title: string, template: RegExp) {
+  await page.goto("/assessments/new");
+  const form = page.getByRole("form", { name: "New assessment" });
+  await form.getByLabel("Job").selectOption({ label: job });
+  await form.getByLabel("Title").fill(title);
+  await form.getByLabel(template).check();
+  await form.getByRole("button", { name: "Create and open" }).click();
+}
+
+/** The band a wizard task shows, when it shows one. */
+export const taskBand = (task: Locator) => task.getByTestId("task-result").locator("[data-band]").first();
+
 /** The wizard's step navigation. */
 export const steps = (page: Page) => page.getByRole("navigation", { name: "Steps" });
 

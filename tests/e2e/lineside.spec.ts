@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { signIn, steps } from "./helpers";
+import { createAssessment, signIn, steps } from "./helpers";
 
 test("an admin keeps the hazard library; an adviser copies a hazard from it into an assessment", async ({
   page,
@@ -102,12 +102,12 @@ test("the review step blocks lineside gaps: no protection arrangement, no respon
   page,
 }) => {
   await signIn(page, "adviser@brackenfold.example");
-  await page.goto("/assessments/new");
-  const form = page.getByRole("form", { name: "New assessment" });
-  await form.getByLabel("Job").selectOption({ label: "Carrowby cutting: troughing route renewal" });
-  await form.getByLabel("Title").fill("Trough route near the line");
-  await form.getByLabel(/Laying a cable trough route/).check();
-  await form.getByRole("button", { name: "Create and open" }).click();
+  await createAssessment(
+    page,
+    "Carrowby cutting: troughing route renewal",
+    "Trough route near the line",
+    /Laying a cable trough route/,
+  );
 
   await steps(page)
     .getByRole("button", { name: /Review & submit/ })
